@@ -1,0 +1,26 @@
+import { z } from 'zod';
+import { optionalText, requiredText } from './text.js';
+
+/** IANA time-zone names such as `America/Denver`; checked against the runtime's own list. */
+export const timeZoneSchema = z
+  .string()
+  .trim()
+  .refine((value) => {
+    try {
+      new Intl.DateTimeFormat('en-US', { timeZone: value });
+      return true;
+    } catch {
+      return false;
+    }
+  }, 'Choose a known time zone, such as America/Denver');
+
+export const updateCompanyInputSchema = z
+  .object({
+    name: requiredText('Company name', 120),
+    timeZone: timeZoneSchema,
+    region: optionalText(8),
+    address: optionalText(500),
+    measurementSystem: z.enum(['imperial', 'metric']),
+  })
+  .partial();
+export type UpdateCompanyInput = z.infer<typeof updateCompanyInputSchema>;

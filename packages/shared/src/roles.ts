@@ -1,0 +1,50 @@
+/**
+ * Roles and the permission table (role × action). The server enforces it in one middleware;
+ * the web client reads the same table only to hide what a role cannot do.
+ */
+export const roles = ['owner', 'office', 'bookkeeper', 'crew_lead'] as const;
+export type Role = (typeof roles)[number];
+
+export const roleLabels: Record<Role, string> = {
+  owner: 'Owner',
+  office: 'Office',
+  bookkeeper: 'Bookkeeper',
+  crew_lead: 'Crew lead',
+};
+
+export const actions = [
+  'company.read',
+  'company.manage',
+  'members.read',
+  'members.manage',
+  'customers.read',
+  'customers.write',
+  'customers.billing.read',
+  'sites.read',
+  'sites.write',
+  'plans.preview',
+  'audit.read',
+] as const;
+export type Action = (typeof actions)[number];
+
+const everyone: readonly Role[] = roles;
+
+/** Who may do what. Crew leads never see customers' billing details or money. */
+export const permissionTable: Record<Action, readonly Role[]> = {
+  'company.read': everyone,
+  'company.manage': ['owner'],
+  'members.read': ['owner'],
+  'members.manage': ['owner'],
+  'customers.read': ['owner', 'office', 'bookkeeper'],
+  'customers.write': ['owner', 'office'],
+  'customers.billing.read': ['owner', 'office', 'bookkeeper'],
+  'sites.read': ['owner', 'office', 'bookkeeper'],
+  'sites.write': ['owner', 'office'],
+  'plans.preview': everyone,
+  'audit.read': ['owner'],
+};
+
+/** Whether `role` may perform `action`. */
+export function can(role: Role, action: Action): boolean {
+  return permissionTable[action].includes(role);
+}

@@ -1,0 +1,32 @@
+import { defineConfig } from 'vitest/config';
+
+// Two projects: `unit` (pure packages and web components, no services) and `api` (supertest
+// against createApp() on the real MariaDB test database, started by scripts/run-tests.ts).
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        extends: false,
+        test: {
+          name: 'unit',
+          include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      './apps/web/vitest.config.ts',
+      {
+        extends: false,
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/api/global-setup.ts'],
+          setupFiles: ['tests/api/setup-each-file.ts'],
+          fileParallelism: false,
+          testTimeout: 20000,
+          hookTimeout: 30000,
+        },
+      },
+    ],
+  },
+});
