@@ -1,0 +1,2 @@
+export { createFakeProcessorApp, startFakeProcessor } from './server.js';
+export type { FakeProcessor } from './server.js';
