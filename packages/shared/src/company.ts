@@ -24,3 +24,15 @@ export const updateCompanyInputSchema = z
   })
   .partial();
 export type UpdateCompanyInput = z.infer<typeof updateCompanyInputSchema>;
+
+/** `GET /api/company` and `PATCH /api/company`: the company with its editable details. */
+export interface CompanySettingsView {
+  id: string;
+  name: string;
+  slug: string;
+  address: string | null;
+  timeZone: string;
+  region: string | null;
+  currency: string;
+  measurementSystem: 'imperial' | 'metric';
+}

@@ -7,3 +7,5 @@ export * from './company.js';
 export * from './members.js';
 export * from './customers.js';
 export * from './sites.js';
+export * from './audit.js';
+export * from './system.js';
