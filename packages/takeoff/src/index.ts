@@ -1,0 +1,4 @@
+// Public entry of @seamwright/takeoff.
+// Material takeoff: units, settings (takeoff helper).
+export * from './units/index.js';
+export * from './settings/index.js';

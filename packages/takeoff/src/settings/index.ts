@@ -1,0 +1,2 @@
+export * from './takeoff-settings-schema.js';
+export { defaultTakeoffSettings } from './default-takeoff-settings.js';
