@@ -2,3 +2,4 @@
 // Material takeoff: units, settings (takeoff helper).
 export * from './units/index.js';
 export * from './settings/index.js';
+export * from './materials/index.js';

@@ -137,8 +137,9 @@ export const defaultTakeoffSettings: TakeoffSettings = {
   },
   equipment: [
     // From memory, no published source: daily coverage of rented machines.
-    { key: 'sod-cutter', label: 'Sod cutter', sqFtPerDay: 3000 },
-    { key: 'plate-compactor', label: 'Vibratory plate compactor', sqFtPerDay: 2000 },
+    { key: 'sod-cutter', label: 'Sod cutter', sqFtPerDay: 3000, neededFor: 'excavation' },
+    { key: 'plate-compactor', label: 'Vibratory plate compactor', sqFtPerDay: 2000, neededFor: 'base' },
+    { key: 'power-broom', label: 'Power broom', sqFtPerDay: 5000, neededFor: 'infill' },
   ],
   finishHeight: {
     // Common practice: turf top ½–¾ in above adjacent hard surfaces; we use ½ in.

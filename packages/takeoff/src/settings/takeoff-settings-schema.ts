@@ -55,11 +55,15 @@ export const infillRecipeSchema = z
 /** An infill recipe (see {@link infillRecipeSchema}). */
 export type InfillRecipe = z.infer<typeof infillRecipeSchema>;
 
-/** Equipment rented by the day, sized from how much area it covers per day. */
+/**
+ * Equipment rented by the day, sized from how much area it covers per day. `neededFor` says
+ * which part of the work needs it, so a job with no digging rents no sod cutter.
+ */
 export const equipmentRateSchema = z.object({
   key: z.string().regex(/^[a-z0-9-]+$/),
   label: z.string().min(1).max(80),
   sqFtPerDay: positive,
+  neededFor: z.enum(['excavation', 'base', 'infill', 'always']),
 });
 /** A piece of rented equipment and its daily production (see {@link equipmentRateSchema}). */
 export type EquipmentRate = z.infer<typeof equipmentRateSchema>;

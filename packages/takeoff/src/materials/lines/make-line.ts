@@ -1,0 +1,6 @@
+import type { TakeoffLine } from '../takeoff-line.js';
+
+/** Builds a line; warnings default to none. */
+export function makeLine(line: Omit<TakeoffLine, 'warnings' | 'override'> & { warnings?: string[] }): TakeoffLine {
+  return { ...line, warnings: line.warnings ?? [] };
+}
