@@ -1,0 +1,45 @@
+import { createBrowserRouter, Outlet } from 'react-router-dom';
+import { Loading } from '../components/ui/loading';
+import { paths, publicPathPrefixes } from '../config/paths';
+import { setUnauthenticatedHandler } from '../lib/api-client';
+import { queryClient } from '../lib/query-client';
+
+/**
+ * Every page is a lazy route, so the sign-in page loads only what it needs. Route modules
+ * export `Component`, and where they need them `loader`, `ErrorBoundary`, `shouldRevalidate`.
+ */
+export const router = createBrowserRouter([
+  {
+    id: 'root',
+    Component: Outlet,
+    HydrateFallback: () => <Loading />,
+    children: [
+      { path: '/sign-in', lazy: () => import('./routes/sign-in') },
+      { path: '/sign-up', lazy: () => import('./routes/sign-up') },
+      { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
+      { path: '/reset-password/:token', lazy: () => import('./routes/reset-password') },
+      { path: '/invitations/:token', lazy: () => import('./routes/invitation') },
+      {
+        id: 'app',
+        lazy: () => import('./routes/app-layout'),
+        children: [
+          { index: true, lazy: () => import('./routes/today') },
+          { path: '/customers', lazy: () => import('./routes/customers') },
+          { path: '/customers/new', lazy: () => import('./routes/new-customer') },
+          { path: '/customers/:customerId', lazy: () => import('./routes/customer') },
+          { path: '/settings', lazy: () => import('./routes/settings') },
+          { path: '*', lazy: () => import('./routes/not-found') },
+        ],
+      },
+    ],
+  },
+]);
+
+// A session that ends mid-use (expired, signed out in another tab): back to sign-in, then here.
+setUnauthenticatedHandler(() => {
+  const { pathname, search } = window.location;
+  if (publicPathPrefixes.some((prefix) => pathname.startsWith(prefix))) return;
+  if (router.state.navigation.state !== 'idle') return; // a loader is already redirecting
+  queryClient.clear();
+  void router.navigate(paths.signIn(`${pathname}${search}`), { replace: true });
+});

@@ -1,0 +1,74 @@
+import { Suspense, type ReactNode } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { Loading } from '../../components/ui/loading';
+import { PageHeader } from '../../components/ui/page-header';
+import { RegionErrorBoundary } from '../../components/ui/region-error';
+import { queryClient } from '../../lib/query-client';
+import { useCan, useSession } from '../../lib/session';
+import { CompanyForm } from '../../features/company-settings/components/company-form';
+import { meQueryOptions } from '../../features/session/api/get-me';
+import { MyProfile } from '../../features/session/components/my-profile';
+import { invitationsQueryOptions } from '../../features/team/api/get-invitations';
+import { membersQueryOptions } from '../../features/team/api/get-members';
+import { InviteForm } from '../../features/team/components/invite-form';
+import { MembersList } from '../../features/team/components/members-list';
+import { PendingInvitations } from '../../features/team/components/pending-invitations';
+import { RouteError } from './route-error';
+import { sessionCan } from './guard';
+
+export async function loader() {
+  if (await sessionCan('members.read')) {
+    await Promise.all([queryClient.ensureQueryData(membersQueryOptions()), queryClient.ensureQueryData(invitationsQueryOptions())]);
+  }
+  return null;
+}
+
+function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
+  return (
+    <section id={id} aria-labelledby={`${id}-heading`} className="scroll-mt-6">
+      <h2 id={`${id}-heading`} className="mb-3 text-xl font-bold">{title}</h2>
+      <RegionErrorBoundary>
+        <Suspense fallback={<Loading />}>{children}</Suspense>
+      </RegionErrorBoundary>
+    </section>
+  );
+}
+
+export function Component() {
+  const { company } = useSession();
+  const client = useQueryClient();
+  const canManageCompany = useCan('company.manage');
+  const canManageTeam = useCan('members.manage');
+  return (
+    <div className="flex max-w-4xl flex-col gap-10">
+      <PageHeader title="Settings" subtitle={canManageCompany ? `${company.name}: company, team and your profile.` : 'Your profile and role.'} />
+      <Section id="profile" title="Your profile">
+        <MyProfile />
+      </Section>
+      {canManageCompany ? (
+        <Section id="company" title="Company details">
+          <div className="rounded-lg border border-line bg-white p-6">
+            <CompanyForm company={company} onSaved={() => client.invalidateQueries({ queryKey: meQueryOptions().queryKey })} />
+          </div>
+        </Section>
+      ) : null}
+      {canManageTeam ? (
+        <>
+          <Section id="team" title="Team">
+            <MembersList />
+          </Section>
+          <Section id="invite" title="Invite someone">
+            <div className="rounded-lg border border-line bg-white p-6">
+              <InviteForm />
+            </div>
+          </Section>
+          <Section id="invitations" title="Invitations waiting">
+            <PendingInvitations />
+          </Section>
+        </>
+      ) : null}
+    </div>
+  );
+}
+
+export const ErrorBoundary = RouteError;

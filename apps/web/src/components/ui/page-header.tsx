@@ -1,0 +1,14 @@
+import type { ReactNode } from 'react';
+
+/** The heading row of a page: its title, an optional line under it and the page's actions. */
+export function PageHeader({ title, subtitle, actions }: { title: string; subtitle?: ReactNode; actions?: ReactNode }) {
+  return (
+    <div className="mb-6 flex flex-wrap items-end justify-between gap-4">
+      <div>
+        <h1 className="text-2xl font-bold text-ink sm:text-3xl">{title}</h1>
+        {subtitle ? <p className="mt-1 text-ink-muted">{subtitle}</p> : null}
+      </div>
+      {actions ? <div className="flex flex-wrap gap-2 print:hidden">{actions}</div> : null}
+    </div>
+  );
+}

@@ -1,0 +1,22 @@
+/** Every URL of the app in one place; routes and links build paths only from here. */
+export const paths = {
+  signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  signUp: '/sign-up',
+  forgotPassword: '/forgot-password',
+  resetPassword: (token: string) => `/reset-password/${encodeURIComponent(token)}`,
+  invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  today: '/',
+  customers: '/customers',
+  newCustomer: '/customers/new',
+  customer: (id: string) => `/customers/${encodeURIComponent(id)}`,
+  settings: '/settings',
+} as const;
+
+/** Pages a signed-out visitor may open; a 401 there must not bounce back to sign-in. */
+export const publicPathPrefixes = ['/sign-in', '/sign-up', '/forgot-password', '/reset-password', '/invitations'];
+
+/** Only same-site relative paths are accepted as a return path after sign-in. */
+export function safeReturnPath(next: string | null): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//')) return paths.today;
+  return next;
+}

@@ -1,0 +1,15 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiError } from './api-error';
+
+/** Client errors (4xx) will not get better by asking again; network and 5xx get two retries. */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (error instanceof ApiError && error.status >= 400 && error.status < 500) return false;
+  return failureCount < 2;
+}
+
+export const queryClient = new QueryClient({
+  defaultOptions: {
+    queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: true },
+    mutations: { retry: false },
+  },
+});
