@@ -1,0 +1,65 @@
+// createApp(): the whole HTTP application without listening. Order matters: request id and
+// logging first, security headers, body parsing, session, CSRF, then routes, 404, errors.
+import express from 'express';
+import type { Express } from 'express';
+import type { Logger } from 'pino';
+import type { Sequelize } from 'sequelize';
+import type { Env } from './config/env.js';
+import type { ServiceDeps } from './deps.js';
+import { createCsrf } from './http/csrf.js';
+import { apiNotFound, errorHandler } from './http/error-handler.js';
+import { createHttpLogger, createLogger } from './http/logging.js';
+import { RouteTable } from './http/route-table.js';
+import type { RouteEntry } from './http/route-table.js';
+import { createSecurityHeaders } from './http/security.js';
+import { createSessionMiddleware, createSessionStore } from './http/session.js';
+import type { SessionStore } from './http/session.js';
+import { serveWebApp } from './http/web-app.js';
+import { createMailer } from './mail/mailer.js';
+import type { Mailer } from './mail/mailer.js';
+import { registerApiRoutes } from './routes.js';
+
+export interface AppDeps {
+  env: Env;
+  sequelize: Sequelize;
+  /** Defaults to SMTP from `env`. */
+  mailer?: Mailer;
+  logger?: Logger;
+  /** Defaults to a store without the background sweep (the server passes its own). */
+  sessionStore?: SessionStore;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace -- Express's own augmentation point
+  namespace Express {
+    interface Locals {
+      /** Every API route, for the tenant-isolation test and documentation. */
+      apiRoutes: RouteEntry[];
+    }
+  }
+}
+
+export function createApp(deps: AppDeps): Express {
+  const { env, sequelize } = deps;
+  const logger = deps.logger ?? createLogger(env.logLevel);
+  const services: ServiceDeps = { env, sequelize, logger, mailer: deps.mailer ?? createMailer(env.smtp) };
+  const store = deps.sessionStore ?? createSessionStore(sequelize, 0);
+  const csrf = createCsrf(env);
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', env.trustProxy);
+  app.set('query parser', 'extended');
+  app.use(createHttpLogger(logger));
+  app.use(createSecurityHeaders(env.cookieSecure));
+
+  const routes = new RouteTable('/api');
+  registerApiRoutes(routes, services, csrf.issueToken);
+  app.locals.apiRoutes = routes.entries;
+
+  app.use('/api', express.json({ limit: '1mb' }), createSessionMiddleware(env, store), csrf.verify, routes.router);
+  app.use('/api', apiNotFound);
+  if (env.webDistDir) serveWebApp(app, env.webDistDir);
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,33 @@
+// Creates the Sequelize connection and registers every model. Schema changes live in
+// migrations only; nothing here calls sync().
+import { Sequelize } from 'sequelize';
+import type { Transaction } from 'sequelize';
+import type { Env } from '../config/env.js';
+import { initModels } from './models/index.js';
+
+export type DbOptions = Env['db'] & { logging?: boolean };
+
+/** Opens a pool to MariaDB and registers the models. Call `close()` when done. */
+export function createSequelize(db: DbOptions): Sequelize {
+  const sequelize = new Sequelize(db.name, db.user, db.password, {
+    host: db.host,
+    port: db.port,
+    dialect: 'mariadb',
+    logging: db.logging ? console.log : false,
+    // Store and read every DATETIME as UTC.
+    timezone: '+00:00',
+    dialectOptions: { connectTimeout: 5000 },
+    pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
+    define: { underscored: true },
+  });
+  initModels(sequelize);
+  return sequelize;
+}
+
+/** An open transaction, passed from services to repositories (services never touch Sequelize). */
+export type Tx = Transaction;
+
+/** Runs `work` in one transaction: all of it commits or none of it does. */
+export function inTransaction<T>(sequelize: Sequelize, work: (tx: Tx) => Promise<T>): Promise<T> {
+  return sequelize.transaction((tx) => work(tx));
+}

@@ -1,0 +1,12 @@
+import type { Logger } from 'pino';
+import type { Sequelize } from 'sequelize';
+import type { Env } from './config/env.js';
+import type { Mailer } from './mail/mailer.js';
+
+/** What services need from the outside world, built once in createApp. */
+export interface ServiceDeps {
+  env: Env;
+  sequelize: Sequelize;
+  mailer: Mailer;
+  logger: Logger;
+}

@@ -1,0 +1,40 @@
+// Every API route is declared through this table, which (1) applies the access rule and the
+// permission check in one place and (2) keeps a list the tenant-isolation test compares
+// against its own, so a new route cannot skip the isolation review.
+import { Router } from 'express';
+import type { RequestHandler } from 'express';
+import type { Action } from '@seamwright/shared';
+import { requirePermission, requireTenant } from './tenant-context.js';
+
+export type HttpMethod = 'get' | 'post' | 'patch' | 'put' | 'delete';
+
+/** `public`: anyone; `tenant`: a signed-in member of the active company. */
+export type Access = 'public' | 'tenant';
+
+export interface RouteEntry {
+  method: HttpMethod;
+  /** Full path including `/api`, in Express syntax (`/api/customers/:id`). */
+  path: string;
+  access: Access;
+  permission: Action | null;
+}
+
+export interface RouteOptions {
+  access: Access;
+  permission?: Action;
+}
+
+export class RouteTable {
+  readonly router = Router();
+  readonly entries: RouteEntry[] = [];
+
+  constructor(private readonly prefix: string) {}
+
+  add(method: HttpMethod, path: string, options: RouteOptions, ...handlers: RequestHandler[]): void {
+    const chain: RequestHandler[] = [];
+    if (options.access === 'tenant') chain.push(requireTenant);
+    if (options.permission) chain.push(requirePermission(options.permission));
+    this.router[method](path, ...chain, ...handlers);
+    this.entries.push({ method, path: `${this.prefix}${path}`, access: options.access, permission: options.permission ?? null });
+  }
+}

@@ -1,0 +1,23 @@
+/**
+ * @seamwright/api — entry for scripts and tests.
+ *
+ * - `createApp({ env, sequelize, mailer?, logger?, sessionStore? })` → Express app (no listen)
+ * - `loadEnv(source?)` → validated `Env`
+ * - `createSequelize(env.db)` → Sequelize with every model registered
+ * - `migrateDatabase(sequelize)` → applies pending migrations
+ * - `seedDemoData(sequelize, env)` → loads the demo company once
+ * - `startServer(options?)` → listens on env.port with graceful shutdown
+ */
+export { createApp } from './app.js';
+export type { AppDeps } from './app.js';
+export { loadEnv } from './config/env.js';
+export type { Env } from './config/env.js';
+export { createSequelize } from './db/sequelize.js';
+export { migrateDatabase } from './db/migrate.js';
+export { seedDemoData, demoPassword, demoUsers } from './seed/demo-data.js';
+export type { SeedResult } from './seed/demo-data.js';
+export { startServer } from './server.js';
+export type { RunningServer, StartServerOptions } from './server.js';
+export type { RouteEntry } from './http/route-table.js';
+export { csrfCookieName, csrfHeaderName } from './http/csrf.js';
+export { sessionCookieName } from './http/session.js';

@@ -1,0 +1,53 @@
+// Lookups keyed by the signed-in user rather than by a company: they build the tenant context
+// itself, so they cannot be company-scoped. The user id always comes from the session.
+import type { Role } from '@seamwright/shared';
+import { CompanyModel, MembershipModel, UserModel } from '../../db/models/index.js';
+
+export interface UserMembership {
+  companyId: string;
+  role: Role;
+}
+
+export async function findMembershipOfUser(userId: string, companyId: string): Promise<UserMembership | null> {
+  const row = await MembershipModel.findOne({ where: { userId, companyId }, attributes: ['companyId', 'role'] });
+  return row ? { companyId: row.companyId, role: row.role } : null;
+}
+
+export async function findFirstMembershipOfUser(userId: string): Promise<UserMembership | null> {
+  const row = await MembershipModel.findOne({
+    where: { userId },
+    attributes: ['companyId', 'role'],
+    order: [['createdAt', 'ASC']],
+  });
+  return row ? { companyId: row.companyId, role: row.role } : null;
+}
+
+export interface UserCompany {
+  companyId: string;
+  companyName: string;
+  role: Role;
+}
+
+/** Every company the user belongs to, by company name. */
+export async function listCompaniesOfUser(userId: string): Promise<UserCompany[]> {
+  const memberships = await MembershipModel.findAll({ where: { userId }, attributes: ['companyId', 'role'] });
+  if (memberships.length === 0) return [];
+  const companies = await CompanyModel.findAll({
+    where: { id: memberships.map((m) => m.companyId) },
+    attributes: ['id', 'name'],
+  });
+  const names = new Map(companies.map((c) => [c.id, c.name]));
+  return memberships
+    .map((m) => ({ companyId: m.companyId, companyName: names.get(m.companyId) ?? '', role: m.role }))
+    .sort((a, b) => a.companyName.localeCompare(b.companyName));
+}
+
+export async function findUserById(userId: string) {
+  const row = await UserModel.findByPk(userId, { attributes: ['id', 'name', 'email'] });
+  return row ? { id: row.id, name: row.name, email: row.email } : null;
+}
+
+export async function findCompanyById(companyId: string) {
+  const row = await CompanyModel.findByPk(companyId);
+  return row ? row.get({ plain: true }) : null;
+}

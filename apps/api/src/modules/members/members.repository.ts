@@ -1,0 +1,40 @@
+import type { Role } from '@seamwright/shared';
+import type { RequestContext } from '../../context.js';
+import { MembershipModel, UserModel } from '../../db/models/index.js';
+import type { Tx } from '../../db/sequelize.js';
+import { scoped } from '../../db/tenant-scope.js';
+
+export async function listMembers(ctx: RequestContext) {
+  const memberships = await scoped(ctx, MembershipModel).findAll({ order: [['createdAt', 'ASC'], ['id', 'ASC']] });
+  const users = memberships.length
+    ? await UserModel.findAll({ where: { id: memberships.map((m) => m.userId) }, attributes: ['id', 'name', 'email'] })
+    : [];
+  const byId = new Map(users.map((u) => [u.id, u]));
+  return memberships.map((m) => ({ ...m, name: byId.get(m.userId)?.name ?? '', email: byId.get(m.userId)?.email ?? '' }));
+}
+
+export function findMember(ctx: RequestContext, id: string, tx: Tx) {
+  return scoped(ctx, MembershipModel).findById(id, { tx, lock: true });
+}
+
+/** Locks the company's owner rows so two concurrent demotions cannot both pass the last-owner check. */
+export async function lockOwners(ctx: RequestContext, tx: Tx): Promise<number> {
+  const owners = await scoped(ctx, MembershipModel).findAll({ where: { role: 'owner' }, tx, lock: true });
+  return owners.length;
+}
+
+export function findMembershipOfUserInCompany(ctx: RequestContext, userId: string, tx: Tx) {
+  return scoped(ctx, MembershipModel).findAll({ where: { userId }, tx });
+}
+
+export function addMember(ctx: RequestContext, userId: string, role: Role, tx: Tx) {
+  return scoped(ctx, MembershipModel).create({ userId, role }, tx);
+}
+
+export function updateMemberRole(ctx: RequestContext, id: string, role: Role, tx: Tx) {
+  return scoped(ctx, MembershipModel).update(id, { role }, tx);
+}
+
+export function deleteMember(ctx: RequestContext, id: string, tx: Tx) {
+  return scoped(ctx, MembershipModel).destroy({ id }, tx);
+}

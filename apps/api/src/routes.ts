@@ -1,0 +1,31 @@
+// The list of API modules. Every route goes through the RouteTable (see http/route-table.ts).
+import type { Request, Response } from 'express';
+import type { ServiceDeps } from './deps.js';
+import type { RouteTable } from './http/route-table.js';
+import { registerAuditRoutes } from './modules/audit/audit.routes.js';
+import { registerAuthRoutes } from './modules/auth/auth.routes.js';
+import { registerCompanyRoutes } from './modules/company/company.routes.js';
+import { registerCustomersRoutes } from './modules/customers/customers.routes.js';
+import { registerHealthRoutes } from './modules/health/health.routes.js';
+import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
+import { registerMeRoutes } from './modules/me/me.routes.js';
+import { registerMembersRoutes } from './modules/members/members.routes.js';
+import { registerSitesRoutes } from './modules/sites/sites.routes.js';
+
+export function registerApiRoutes(
+  routes: RouteTable,
+  deps: ServiceDeps,
+  issueCsrfToken: (req: Request, res: Response) => string,
+): void {
+  registerHealthRoutes(routes, deps);
+  registerAuthRoutes(routes, deps, issueCsrfToken);
+  registerMeRoutes(routes);
+  registerCompanyRoutes(routes, deps);
+  registerMembersRoutes(routes, deps);
+  registerInvitationsRoutes(routes, deps);
+  registerCustomersRoutes(routes, deps);
+  registerSitesRoutes(routes, deps);
+  registerAuditRoutes(routes);
+  // PLANS: `POST /api/plans/preview` is registered here once @seamwright/takeoff exports
+  // parseLayoutRequest and planLayout (see modules/plans).
+}

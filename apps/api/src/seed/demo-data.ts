@@ -1,0 +1,69 @@
+// Loads the invented demo company once: skipped when its slug already exists.
+import type { Role } from '@seamwright/shared';
+import type { Sequelize } from 'sequelize';
+import type { Env } from '../config/env.js';
+import { CompanyModel, CustomerModel, MembershipModel, SiteModel, UserModel } from '../db/models/index.js';
+import { hashPassword } from '../passwords.js';
+import { demoCustomers, demoTown } from './demo-customers.js';
+
+/** Demo sign-in password for every demo user (local data only). */
+export const demoPassword = 'turf-demo-2026';
+
+export const demoCompany = {
+  name: 'Bramblewick Turf Works',
+  slug: 'bramblewick-turf-works',
+  address: '120 Foundry Lane, Quillmere 80999',
+  timeZone: 'America/Denver',
+};
+
+export const demoUsers: { name: string; email: string; role: Role }[] = [
+  { name: 'Rowan Bramblewick', email: 'owner@demo.seamwright.test', role: 'owner' },
+  { name: 'Delphine Ashgrove', email: 'office@demo.seamwright.test', role: 'office' },
+  { name: 'Corwin Tallis', email: 'books@demo.seamwright.test', role: 'bookkeeper' },
+  { name: 'Mateo Quarrington', email: 'crew@demo.seamwright.test', role: 'crew_lead' },
+];
+
+export interface SeedResult {
+  created: boolean;
+  companyName: string;
+  users: { email: string; role: Role }[];
+  password: string;
+}
+
+export async function seedDemoData(sequelize: Sequelize, env: Pick<Env, 'bcryptCost'>): Promise<SeedResult> {
+  const result = { companyName: demoCompany.name, users: demoUsers.map(({ email, role }) => ({ email, role })), password: demoPassword };
+  if (await CompanyModel.findOne({ where: { slug: demoCompany.slug } })) return { created: false, ...result };
+  const passwordHash = await hashPassword(demoPassword, env.bcryptCost);
+  await sequelize.transaction(async (transaction) => {
+    const company = await CompanyModel.create({ ...demoCompany, region: null, settings: {} }, { transaction });
+    for (const demoUser of demoUsers) {
+      const [user] = await UserModel.findOrCreate({
+        where: { email: demoUser.email },
+        defaults: { name: demoUser.name, email: demoUser.email, passwordHash },
+        transaction,
+      });
+      await MembershipModel.create({ companyId: company.id, userId: user.id, role: demoUser.role }, { transaction });
+    }
+    for (const demo of demoCustomers) {
+      const customer = await CustomerModel.create(
+        {
+          companyId: company.id,
+          name: demo.name,
+          email: demo.email,
+          phone: demo.phone,
+          billingAddress: demo.sites[0] ? `${demo.sites[0].addressLine1}, ${demoTown.city} ${demoTown.postalCode}` : null,
+          notes: demo.notes,
+          archivedAt: demo.archived ? new Date() : null,
+        },
+        { transaction },
+      );
+      for (const site of demo.sites) {
+        await SiteModel.create(
+          { ...site, companyId: company.id, customerId: customer.id, addressLine2: null, city: demoTown.city, region: null, postalCode: demoTown.postalCode },
+          { transaction },
+        );
+      }
+    }
+  });
+  return { created: true, ...result };
+}
