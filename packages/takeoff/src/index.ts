@@ -3,3 +3,4 @@
 export * from './units/index.js';
 export * from './settings/index.js';
 export * from './materials/index.js';
+export * from './cautions/index.js';
