@@ -2,7 +2,13 @@ import { formatNumber } from '../units/format-length.js';
 
 /** One safety caution shown in the caution panel, in Seamwright's own words. */
 export interface Caution {
-  key: 'utility-locate' | 'silica-dust' | 'heavy-rolls' | 'turf-heat' | 'playground-fall-height' | 'pets-perimeter';
+  key:
+    | 'utility-locate'
+    | 'silica-dust'
+    | 'heavy-rolls'
+    | 'turf-heat'
+    | 'playground-fall-height'
+    | 'pets-perimeter';
   title: string;
   body: string;
   /** Where the facts come from, so a reader can check them. */
@@ -32,7 +38,8 @@ export const silicaDustCaution: Caution = {
   body: withDeferral(
     'Kiln-dried sand infill is handled dry and can put respirable crystalline silica in the air. Pour from a low height with a drop spreader, work upwind of the spreader, and read the product’s safety data sheet. Do not dry-sweep or dry-brush where it adds to exposure, and do not blow off clothes or surfaces with compressed air. Wear a respirator unless exposure is known to stay below the action level.',
   ),
-  reference: 'OSHA 29 CFR 1926.1153 (respirable crystalline silica in construction), including (f) housekeeping',
+  reference:
+    'OSHA 29 CFR 1926.1153 (respirable crystalline silica in construction), including (f) housekeeping',
 };
 
 /** Rolls above the one-person lift limit. */
@@ -64,7 +71,8 @@ export const playgroundFallHeightCaution: Caution = {
   body: withDeferral(
     'Under play equipment the shock pad, not the infill, absorbs a fall. Use a tested system whose critical height is at least the fall height of the equipment, and build it exactly as tested — changing the base, pad, turf or infill voids the rating. Keep the surfacing across the whole use zone around each piece of equipment.',
   ),
-  reference: 'ASTM F1292 (impact attenuation, critical height); CPSC Public Playground Safety Handbook (Pub. 325)',
+  reference:
+    'ASTM F1292 (impact attenuation, critical height); CPSC Public Playground Safety Handbook (Pub. 325)',
 };
 
 /** Dogs lifting edges. */

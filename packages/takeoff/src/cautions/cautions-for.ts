@@ -1,4 +1,8 @@
-import type { InfillKind, TakeoffSettings, TakeoffUsage } from '../settings/takeoff-settings-schema.js';
+import type {
+  InfillKind,
+  TakeoffSettings,
+  TakeoffUsage,
+} from '../settings/takeoff-settings-schema.js';
 import type { NormalisedTakeoffInput, TakeoffInput } from '../materials/takeoff-input.js';
 import type { TakeoffLine } from '../materials/takeoff-line.js';
 import {
@@ -38,7 +42,8 @@ export function cautionsFor(context: CautionContext): Caution[] {
   const cautions: Caution[] = [];
   if (context.isDigging) cautions.push(utilityLocateCaution);
   const limit = context.liftLimitLb ?? NIOSH_LIFT_LIMIT_LB;
-  if (context.rollWeightLb !== undefined && context.rollWeightLb > limit) cautions.push(heavyRollCaution(context.rollWeightLb, limit));
+  if (context.rollWeightLb !== undefined && context.rollWeightLb > limit)
+    cautions.push(heavyRollCaution(context.rollWeightLb, limit));
   if (context.infillKinds.some((kind) => SILICA_INFILL.has(kind))) cautions.push(silicaDustCaution);
   if (context.usage === 'play') cautions.push(playgroundFallHeightCaution);
   if (context.usage === 'pet' || context.hasPets === true) cautions.push(petsPerimeterCaution);
@@ -47,7 +52,11 @@ export function cautionsFor(context: CautionContext): Caution[] {
 }
 
 /** The caution context for a computed takeoff: digging, infill kinds and roll weight come from it. */
-export function cautionContextForTakeoff(input: TakeoffInput | NormalisedTakeoffInput, lines: readonly TakeoffLine[], settings: TakeoffSettings): CautionContext {
+export function cautionContextForTakeoff(
+  input: TakeoffInput | NormalisedTakeoffInput,
+  lines: readonly TakeoffLine[],
+  settings: TakeoffSettings,
+): CautionContext {
   const rollWeight = lines.find((line) => line.key === 'roll-weight')?.rawQuantity;
   return {
     usage: input.usage,

@@ -2,7 +2,12 @@ import { takeoffSettingsSchema } from '../settings/takeoff-settings-schema.js';
 import type { TakeoffSettings } from '../settings/takeoff-settings-schema.js';
 import { planEdges } from './lines/edge-plan.js';
 import { extraLinesFor } from './lines/extra-lines-for.js';
-import { edgingLines, perimeterNailLines, petPerimeterLines, seamNailLines } from './lines/fastener-lines.js';
+import {
+  edgingLines,
+  perimeterNailLines,
+  petPerimeterLines,
+  seamNailLines,
+} from './lines/fastener-lines.js';
 import { infillLines } from './lines/infill-lines.js';
 import { seamLines } from './lines/seam-lines.js';
 import { baseLines, excavationLines, finishHeightLines } from './lines/site-lines.js';

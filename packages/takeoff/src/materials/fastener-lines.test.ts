@@ -10,10 +10,14 @@ describe('perimeter nails', () => {
     { spacing: 6, nails: 480 },
     { spacing: 12, nails: 240 },
   ])('240 lf closed perimeter at $spacing in → $nails nails', ({ spacing, nails }) => {
-    const settings = settingsWith({ perimeterNails: { ...perimeterNails, straightSpacingIn: spacing } });
+    const settings = settingsWith({
+      perimeterNails: { ...perimeterNails, straightSpacingIn: spacing },
+    });
     const line = lineOf('perimeter-nails', jobInput(), settings);
     expect(line.quantity).toBe(nails);
-    expect(line.rule).toBe(`closed perimeter: 240 lf straight × 12 ÷ ${spacing} in = ${nails} nails`);
+    expect(line.rule).toBe(
+      `closed perimeter: 240 lf straight × 12 ÷ ${spacing} in = ${nails} nails`,
+    );
   });
 
   it('nails tight curves at the closer curve spacing', () => {

@@ -59,7 +59,12 @@ describe('TRADE check table: base and spoil', () => {
     const tons = tonsFromPoundsPerCubicYard(loose, 2100);
     expect(tons).toBeCloseTo(16.2, 1);
     // roll-off weight caps vary by hauler (common practice, no published source): 10 tons here
-    expect(loadsNeeded(loose, tons, 20, 10)).toEqual({ byVolume: 1, byWeight: 2, loads: 2, isWeightLimited: true });
+    expect(loadsNeeded(loose, tons, 20, 10)).toEqual({
+      byVolume: 1,
+      byWeight: 2,
+      loads: 2,
+      isWeightLimited: true,
+    });
   });
 
   it('row 11: a 7 × 14 ft bed with 2 ft sides holds 7.26 cu yd struck', () => {

@@ -1,4 +1,9 @@
-import { cubicYardsOfLayer, ouncesToPounds, poundsToShortTons, sqFtToSqYd } from '../units/conversions.js';
+import {
+  cubicYardsOfLayer,
+  ouncesToPounds,
+  poundsToShortTons,
+  sqFtToSqYd,
+} from '../units/conversions.js';
 
 /**
  * The small formulas behind the takeoff lines, kept separate so each can be checked against
@@ -76,7 +81,11 @@ export function stockPieces(lengthFt: number, stockLengthFt: number, wastePercen
 }
 
 /** Weight of a turf piece in lb: area in sq yd × (face + backing oz per sq yd) ÷ 16. */
-export function turfPieceWeightLb(widthFt: number, lengthFt: number, totalOzPerSqYd: number): number {
+export function turfPieceWeightLb(
+  widthFt: number,
+  lengthFt: number,
+  totalOzPerSqYd: number,
+): number {
   return ouncesToPounds(sqFtToSqYd(widthFt * lengthFt) * totalOzPerSqYd);
 }
 
@@ -91,8 +100,18 @@ export function boxVolumeCuYd(lengthFt: number, widthFt: number, depthFt: number
 }
 
 /** Loads needed when a box holds `capacityCuYd` and may carry `capacityTons`. */
-export function loadsNeeded(looseCuYd: number, tons: number, capacityCuYd: number, capacityTons: number) {
+export function loadsNeeded(
+  looseCuYd: number,
+  tons: number,
+  capacityCuYd: number,
+  capacityTons: number,
+) {
   const byVolume = ceilWhole(looseCuYd / capacityCuYd);
   const byWeight = ceilWhole(tons / capacityTons);
-  return { byVolume, byWeight, loads: Math.max(byVolume, byWeight), isWeightLimited: byWeight > byVolume };
+  return {
+    byVolume,
+    byWeight,
+    loads: Math.max(byVolume, byWeight),
+    isWeightLimited: byWeight > byVolume,
+  };
 }

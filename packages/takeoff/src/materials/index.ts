@@ -3,6 +3,11 @@ export { applyOverrides, unmatchedOverrides } from './overrides.js';
 export type { TakeoffOverride } from './overrides.js';
 export { takeoffInputSchema, turfPieceSchema } from './takeoff-input.js';
 export type { NormalisedTakeoffInput, TakeoffInput } from './takeoff-input.js';
-export type { TakeoffLine, TakeoffLineKind, TakeoffLineOverride, TakeoffUnit } from './takeoff-line.js';
+export type {
+  TakeoffLine,
+  TakeoffLineKind,
+  TakeoffLineOverride,
+  TakeoffUnit,
+} from './takeoff-line.js';
 export { infillRangeWarnings } from './lines/infill-lines.js';
 export * from './formulas.js';

@@ -5,7 +5,9 @@ import { computeTakeoff, takeoffWarnings } from './compute-takeoff.js';
 import { jobInput, lineOf, settingsWith } from './test-support.js';
 
 const sand = (rate: number, min: number, max: number): InfillRecipe => ({
-  layers: [{ key: 'sand', label: 'Silica sand', kind: 'silica-sand', rateLbPerSqFt: rate, bagLb: 50 }],
+  layers: [
+    { key: 'sand', label: 'Silica sand', kind: 'silica-sand', rateLbPerSqFt: rate, bagLb: 50 },
+  ],
   typicalMinLbPerSqFt: min,
   typicalMaxLbPerSqFt: max,
 });
@@ -21,7 +23,9 @@ describe('infill lines', () => {
 
   it('row 13: 300 sq ft of putting green at 1.75 lb → 525 lb → 11 bags, and warns below 2 lb', () => {
     // common practice, no published source ([S63]); putting range 2–4 lb per sq ft ([S62] [S65])
-    const settings = settingsWith({ infill: { ...defaultTakeoffSettings.infill, putting: sand(1.75, 2, 4) } });
+    const settings = settingsWith({
+      infill: { ...defaultTakeoffSettings.infill, putting: sand(1.75, 2, 4) },
+    });
     const lines = computeTakeoff(jobInput({ usage: 'putting', areaSqFt: 300 }), settings);
     const line = lines.find((l) => l.key === 'infill:sand');
     expect(line?.rawQuantity).toBe(10.5);
@@ -31,8 +35,10 @@ describe('infill lines', () => {
 
   it('row 15: pet infill 2–3 lb per sq ft — warns outside the range, quiet inside', () => {
     // common practice, no published source ([S59] [S61])
-    const pet = (rate: number) => settingsWith({ infill: { ...defaultTakeoffSettings.infill, pet: sand(rate, 2, 3) } });
-    const warningsAt = (rate: number) => lineOf('infill-total', jobInput({ usage: 'pet' }), pet(rate)).warnings;
+    const pet = (rate: number) =>
+      settingsWith({ infill: { ...defaultTakeoffSettings.infill, pet: sand(rate, 2, 3) } });
+    const warningsAt = (rate: number) =>
+      lineOf('infill-total', jobInput({ usage: 'pet' }), pet(rate)).warnings;
     expect(warningsAt(1.5)[0]).toMatch(/below the usual 2–3 lb per sq ft for pet turf/);
     expect(warningsAt(3.5)[0]).toMatch(/above the usual 2–3 lb per sq ft for pet turf/);
     expect(warningsAt(2)).toEqual([]);

@@ -13,7 +13,10 @@ export interface TakeoffOverride {
  * so the estimate shows both. Overrides for keys not in the takeoff are ignored (see
  * {@link unmatchedOverrides}). A negative or non-finite quantity throws a RangeError.
  */
-export function applyOverrides(lines: readonly TakeoffLine[], overrides: readonly TakeoffOverride[]): TakeoffLine[] {
+export function applyOverrides(
+  lines: readonly TakeoffLine[],
+  overrides: readonly TakeoffOverride[],
+): TakeoffLine[] {
   const byKey = new Map<string, TakeoffOverride>();
   for (const override of overrides) {
     if (!Number.isFinite(override.quantity) || override.quantity < 0) {
@@ -28,13 +31,20 @@ export function applyOverrides(lines: readonly TakeoffLine[], overrides: readonl
     return {
       ...line,
       quantity: override.quantity,
-      override: { quantity: override.quantity, computedQuantity, ...(override.note === undefined ? {} : { note: override.note }) },
+      override: {
+        quantity: override.quantity,
+        computedQuantity,
+        ...(override.note === undefined ? {} : { note: override.note }),
+      },
     };
   });
 }
 
 /** Overrides whose key matches no line (e.g. a line that no longer applies after a plan change). */
-export function unmatchedOverrides(lines: readonly TakeoffLine[], overrides: readonly TakeoffOverride[]): TakeoffOverride[] {
+export function unmatchedOverrides(
+  lines: readonly TakeoffLine[],
+  overrides: readonly TakeoffOverride[],
+): TakeoffOverride[] {
   const keys = new Set(lines.map((line) => line.key));
   return overrides.filter((override) => !keys.has(override.key));
 }

@@ -4,4 +4,5 @@ import { formatNumber } from '../units/format-length.js';
 export const n = (value: number, decimals = 2): string => formatNumber(value, decimals);
 
 /** "1 bag" / "3 bags" style wording. */
-export const plural = (count: number, one: string, many: string): string => `${n(count)} ${count === 1 ? one : many}`;
+export const plural = (count: number, one: string, many: string): string =>
+  `${n(count)} ${count === 1 ? one : many}`;

@@ -49,10 +49,16 @@ describe('base stone lines', () => {
 describe('excavation and haul lines', () => {
   it('rows 9–10: 1,000 sq ft dug 4 in at 25 % swell → 15.43 cu yd loose, 16.2 tons, 2 loads by weight', () => {
     // arithmetic (row 9); CalRecycle loose dry earth 2,100 lb per cu yd (row 10)
-    expect(excavation).toMatchObject({ digDepthIn: 4, soilSwellPercent: 25, spoilLooseDensityLbPerCuYd: 2100 });
+    expect(excavation).toMatchObject({
+      digDepthIn: 4,
+      soilSwellPercent: 25,
+      spoilLooseDensityLbPerCuYd: 2100,
+    });
     const spoil = lineOf('excavation-spoil', jobInput());
     expect(spoil.quantity).toBe(15.43);
-    expect(spoil.rule).toBe('1,000 sq ft × 4 in ÷ 324 = 12.35 cu yd in place × (1 + 25 % swell) = 15.43 cu yd loose');
+    expect(spoil.rule).toBe(
+      '1,000 sq ft × 4 in ÷ 324 = 12.35 cu yd in place × (1 + 25 % swell) = 15.43 cu yd loose',
+    );
     const settings = settingsWith({ haul: { ...haul, capacityCuYd: 20, capacityTons: 10 } });
     const loads = lineOf('haul-loads', jobInput(), settings);
     expect(loads.inputs['spoilTons']).toBeCloseTo(16.2, 1);
@@ -72,14 +78,20 @@ describe('excavation and haul lines', () => {
 describe('finish height guidance', () => {
   it('sets the base pile height − ½ in below hard surfaces', () => {
     // common practice: turf top ½–¾ in above adjacent hard surfaces
-    const line = lineOf('finish-height', jobInput({ turf: { orderedSqFt: 1050, pieces: [], pileHeightIn: 1.75 } }));
+    const line = lineOf(
+      'finish-height',
+      jobInput({ turf: { orderedSqFt: 1050, pieces: [], pileHeightIn: 1.75 } }),
+    );
     expect(line.kind).toBe('guidance');
     expect(line.quantity).toBe(1.25);
     expect(line.label).toMatch(/below/);
   });
 
   it('says "above" when the pile is shorter than the finish height', () => {
-    const line = lineOf('finish-height', jobInput({ usage: 'putting', turf: { orderedSqFt: 1050, pieces: [], pileHeightIn: 0.375 } }));
+    const line = lineOf(
+      'finish-height',
+      jobInput({ usage: 'putting', turf: { orderedSqFt: 1050, pieces: [], pileHeightIn: 0.375 } }),
+    );
     expect(line.quantity).toBe(0.125);
     expect(line.label).toMatch(/above/);
   });

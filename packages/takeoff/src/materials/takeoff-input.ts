@@ -1,11 +1,18 @@
 import { z } from 'zod';
-import { perimeterTagSchema, takeoffUsageSchema, turfBackingSchema } from '../settings/takeoff-settings-schema.js';
+import {
+  perimeterTagSchema,
+  takeoffUsageSchema,
+  turfBackingSchema,
+} from '../settings/takeoff-settings-schema.js';
 
 const length = z.number().nonnegative();
 const count = z.number().int().nonnegative();
 
 /** One cut piece of turf from the layout plan. */
-export const turfPieceSchema = z.object({ widthFt: z.number().positive(), lengthFt: z.number().positive() });
+export const turfPieceSchema = z.object({
+  widthFt: z.number().positive(),
+  lengthFt: z.number().positive(),
+});
 
 /**
  * What the takeoff needs to know about one turf area. It is a plain object so the takeoff does
@@ -47,10 +54,15 @@ export const takeoffInputSchema = z
     message: 'The curved part of the perimeter cannot be longer than the perimeter',
     path: ['curvedPerimeterFt'],
   })
-  .refine((input) => Object.values(input.perimeterByTagFt).reduce((sum, ft) => sum + ft, 0) <= input.perimeterFt + 1e-6, {
-    message: 'The tagged edges add up to more than the perimeter',
-    path: ['perimeterByTagFt'],
-  });
+  .refine(
+    (input) =>
+      Object.values(input.perimeterByTagFt).reduce((sum, ft) => sum + ft, 0) <=
+      input.perimeterFt + 1e-6,
+    {
+      message: 'The tagged edges add up to more than the perimeter',
+      path: ['perimeterByTagFt'],
+    },
+  );
 
 /** Input as the caller may give it (optional parts may be left out). */
 export type TakeoffInput = z.input<typeof takeoffInputSchema>;

@@ -1,7 +1,21 @@
 /** Units a takeoff line is counted in. */
 export type TakeoffUnit =
-  | 'sq ft' | 'sq yd' | 'cu yd' | 'tons' | 'lb' | 'bags' | 'ea' | 'lf' | 'rolls' | 'gal'
-  | 'boards' | 'loads' | 'hours' | 'days' | 'in' | '%';
+  | 'sq ft'
+  | 'sq yd'
+  | 'cu yd'
+  | 'tons'
+  | 'lb'
+  | 'bags'
+  | 'ea'
+  | 'lf'
+  | 'rolls'
+  | 'gal'
+  | 'boards'
+  | 'loads'
+  | 'hours'
+  | 'days'
+  | 'in'
+  | '%';
 
 /**
  * What a line is: something to buy, a haul, crew time, rented equipment, a note for the crew

@@ -20,7 +20,13 @@ const inputArbitrary: fc.Arbitrary<TakeoffInput> = fc
     sideFt: length,
     buttFt: length,
     count: fc.nat(40),
-    pieces: fc.array(fc.record({ widthFt: fc.constantFrom(12, 15), lengthFt: fc.double({ min: 1, max: 150, noNaN: true }) }), { maxLength: 6 }),
+    pieces: fc.array(
+      fc.record({
+        widthFt: fc.constantFrom(12, 15),
+        lengthFt: fc.double({ min: 1, max: 150, noNaN: true }),
+      }),
+      { maxLength: 6 },
+    ),
     face: fc.option(fc.double({ min: 20, max: 110, noNaN: true }), { nil: undefined }),
     rodentWire: fc.boolean(),
     hasPets: fc.boolean(),
@@ -33,8 +39,17 @@ const inputArbitrary: fc.Arbitrary<TakeoffInput> = fc
     curvedPerimeterFt: r.perimeterFt * r.curvedShare,
     perimeterByTagFt: { hard: r.perimeterFt * r.hardShare, bed: r.perimeterFt * r.bedShare },
     seams: { sideFt: r.sideFt, buttFt: r.buttFt, count: r.count },
-    turf: { orderedSqFt: r.pieces.reduce((sum, p) => sum + p.widthFt * p.lengthFt, 0), pieces: r.pieces, faceWeightOzPerSqYd: r.face, pileHeightIn: 1.5 },
-    sprinklers: { halfInchHeads: r.heads, threeQuarterInchHeads: r.heads % 3, zonesClosed: r.heads % 2 },
+    turf: {
+      orderedSqFt: r.pieces.reduce((sum, p) => sum + p.widthFt * p.lengthFt, 0),
+      pieces: r.pieces,
+      faceWeightOzPerSqYd: r.face,
+      pileHeightIn: 1.5,
+    },
+    sprinklers: {
+      halfInchHeads: r.heads,
+      threeQuarterInchHeads: r.heads % 3,
+      zonesClosed: r.heads % 2,
+    },
     rodentWire: r.rodentWire,
     hasPets: r.hasPets,
   }));
@@ -59,7 +74,8 @@ describe('takeoff properties', () => {
     fc.assert(
       fc.property(inputArbitrary, (input) => {
         for (const line of computeTakeoff(input, defaultTakeoffSettings)) {
-          if (line.rounding.startsWith('rounded up')) expect(line.quantity).toBeGreaterThanOrEqual(line.rawQuantity - 1e-9);
+          if (line.rounding.startsWith('rounded up'))
+            expect(line.quantity).toBeGreaterThanOrEqual(line.rawQuantity - 1e-9);
         }
       }),
       { numRuns: 200 },
@@ -70,13 +86,24 @@ describe('takeoff properties', () => {
     fc.assert(
       fc.property(length, length, fc.double({ min: 1, max: 24, noNaN: true }), (a, b, spacing) => {
         const [short, long] = a <= b ? [a, b] : [b, a];
-        expect(fastenersForClosedLoop(short, spacing)).toBeLessThanOrEqual(fastenersForClosedLoop(long, spacing));
+        expect(fastenersForClosedLoop(short, spacing)).toBeLessThanOrEqual(
+          fastenersForClosedLoop(long, spacing),
+        );
       }),
     );
     fc.assert(
       fc.property(length, length, (a, b) => {
         const nails = (perimeterFt: number) =>
-          computeTakeoff({ usage: 'landscape', areaSqFt: 100, perimeterFt, seams: { sideFt: 0, buttFt: 0, count: 0 }, turf: { orderedSqFt: 100, pieces: [] } }, defaultTakeoffSettings).find((l) => l.key === 'perimeter-nails')?.quantity ?? 0;
+          computeTakeoff(
+            {
+              usage: 'landscape',
+              areaSqFt: 100,
+              perimeterFt,
+              seams: { sideFt: 0, buttFt: 0, count: 0 },
+              turf: { orderedSqFt: 100, pieces: [] },
+            },
+            defaultTakeoffSettings,
+          ).find((l) => l.key === 'perimeter-nails')?.quantity ?? 0;
         const [short, long] = a <= b ? [a, b] : [b, a];
         expect(nails(short)).toBeLessThanOrEqual(nails(long));
       }),
@@ -86,11 +113,15 @@ describe('takeoff properties', () => {
 
   it('bags × bag size always covers the pounds needed, with less than one bag spare', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 1e6, noNaN: true }), fc.constantFrom(25, 40, 50, 2000), (pounds, bagLb) => {
-        const bags = bagsFor(pounds, bagLb);
-        expect(bags * bagLb).toBeGreaterThanOrEqual(pounds - 1e-6);
-        expect((bags - 1) * bagLb).toBeLessThan(pounds + 1e-6);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 1e6, noNaN: true }),
+        fc.constantFrom(25, 40, 50, 2000),
+        (pounds, bagLb) => {
+          const bags = bagsFor(pounds, bagLb);
+          expect(bags * bagLb).toBeGreaterThanOrEqual(pounds - 1e-6);
+          expect((bags - 1) * bagLb).toBeLessThan(pounds + 1e-6);
+        },
+      ),
     );
   });
 
@@ -100,7 +131,10 @@ describe('takeoff properties', () => {
         const lines = computeTakeoff(input, defaultTakeoffSettings);
         for (const layer of defaultTakeoffSettings.infill[input.usage].layers) {
           const line = lines.find((l) => l.key === `infill:${layer.key}`);
-          if (input.areaSqFt > 0) expect((line?.quantity ?? 0) * layer.bagLb).toBeGreaterThanOrEqual(layer.rateLbPerSqFt * input.areaSqFt - 1e-6);
+          if (input.areaSqFt > 0)
+            expect((line?.quantity ?? 0) * layer.bagLb).toBeGreaterThanOrEqual(
+              layer.rateLbPerSqFt * input.areaSqFt - 1e-6,
+            );
         }
       }),
       { numRuns: 200 },

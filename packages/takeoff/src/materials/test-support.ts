@@ -24,13 +24,20 @@ export function settingsWith(patch: Partial<TakeoffSettings>): TakeoffSettings {
 }
 
 /** Runs the takeoff and returns the line with `key`, failing loudly if it is missing. */
-export function lineOf(key: string, input: TakeoffInput, settings: TakeoffSettings = defaultTakeoffSettings): TakeoffLine {
+export function lineOf(
+  key: string,
+  input: TakeoffInput,
+  settings: TakeoffSettings = defaultTakeoffSettings,
+): TakeoffLine {
   const line = computeTakeoff(input, settings).find((l) => l.key === key);
   if (!line) throw new Error(`no ${key} line`);
   return line;
 }
 
 /** The keys of the takeoff's lines. */
-export function keysOf(input: TakeoffInput, settings: TakeoffSettings = defaultTakeoffSettings): string[] {
+export function keysOf(
+  input: TakeoffInput,
+  settings: TakeoffSettings = defaultTakeoffSettings,
+): string[] {
   return computeTakeoff(input, settings).map((l) => l.key);
 }

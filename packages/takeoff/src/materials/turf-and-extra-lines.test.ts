@@ -7,26 +7,49 @@ import { jobInput, keysOf, lineOf, settingsWith } from './test-support.js';
 describe('turf and roll weight', () => {
   it('orders what the plan bought and states the waste', () => {
     // TRADE row 1 (derived): two 15 × 20 ft pieces = 600 sq ft
-    const input = jobInput({ areaSqFt: 560, turf: { orderedSqFt: 600, pieces: [{ widthFt: 15, lengthFt: 20 }, { widthFt: 15, lengthFt: 20 }] } });
+    const input = jobInput({
+      areaSqFt: 560,
+      turf: {
+        orderedSqFt: 600,
+        pieces: [
+          { widthFt: 15, lengthFt: 20 },
+          { widthFt: 15, lengthFt: 20 },
+        ],
+      },
+    });
     const line = lineOf('turf', input);
     expect(line.quantity).toBe(600);
-    expect(line.rule).toBe('2 × (15 × 20 ft) = 600 sq ft ordered for 560 sq ft of area (40 sq ft waste, 6.7 % of the order)');
+    expect(line.rule).toBe(
+      '2 × (15 × 20 ft) = 600 sq ft ordered for 560 sq ft of area (40 sq ft waste, 6.7 % of the order)',
+    );
   });
 
   it.each([
     // TRADE row 18 — [S10] backing weights (common practice, no published source); NIOSH 51 lb limit via an OSHA eTool
     { backing: 'polyurethane' as const, lb: 958 },
     { backing: 'latex' as const, lb: 1042 },
-  ])('a 15 × 100 ft roll, 60 oz face, $backing backing weighs $lb lb and is flagged', ({ backing, lb }) => {
-    const input = jobInput({ turf: { orderedSqFt: 1500, pieces: [{ widthFt: 15, lengthFt: 100 }], faceWeightOzPerSqYd: 60, backing } });
-    const line = lineOf('roll-weight', input);
-    expect(line.quantity).toBe(lb);
-    expect(line.warnings[0]).toMatch(/over the 51 lb one-person lift limit/);
-  });
+  ])(
+    'a 15 × 100 ft roll, 60 oz face, $backing backing weighs $lb lb and is flagged',
+    ({ backing, lb }) => {
+      const input = jobInput({
+        turf: {
+          orderedSqFt: 1500,
+          pieces: [{ widthFt: 15, lengthFt: 100 }],
+          faceWeightOzPerSqYd: 60,
+          backing,
+        },
+      });
+      const line = lineOf('roll-weight', input);
+      expect(line.quantity).toBe(lb);
+      expect(line.warnings[0]).toMatch(/over the 51 lb one-person lift limit/);
+    },
+  );
 
   it('does not flag a light offcut', () => {
     // arithmetic: 2 × 3 ft = 0.67 sq yd × 100 oz ÷ 16 = 4.17 lb
-    const input = jobInput({ turf: { orderedSqFt: 6, pieces: [{ widthFt: 2, lengthFt: 3 }], faceWeightOzPerSqYd: 60 } });
+    const input = jobInput({
+      turf: { orderedSqFt: 6, pieces: [{ widthFt: 2, lengthFt: 3 }], faceWeightOzPerSqYd: 60 },
+    });
     expect(lineOf('roll-weight', input).warnings).toEqual([]);
   });
 
@@ -37,7 +60,9 @@ describe('turf and roll weight', () => {
 
 describe('sprinkler caps, rodent wire, labour', () => {
   it('caps each removed head by size and each closed zone with a 1 in cap', () => {
-    const input = jobInput({ sprinklers: { halfInchHeads: 6, threeQuarterInchHeads: 2, zonesClosed: 1 } });
+    const input = jobInput({
+      sprinklers: { halfInchHeads: 6, threeQuarterInchHeads: 2, zonesClosed: 1 },
+    });
     expect(lineOf('sprinkler-caps-half-inch', input).quantity).toBe(6);
     expect(lineOf('sprinkler-caps-three-quarter-inch', input).quantity).toBe(2);
     const zone = lineOf('sprinkler-caps-zone', input);
@@ -74,13 +99,24 @@ describe('sprinkler caps, rodent wire, labour', () => {
 
 describe('input checks', () => {
   it('refuses negative areas and curves longer than the perimeter', () => {
-    expect(() => computeTakeoff(jobInput({ areaSqFt: -1 }), defaultTakeoffSettings)).toThrow(ZodError);
-    expect(() => computeTakeoff(jobInput({ curvedPerimeterFt: 300 }), defaultTakeoffSettings)).toThrow(ZodError);
-    expect(() => computeTakeoff(jobInput({ perimeterByTagFt: { hard: 200, bed: 100 } }), defaultTakeoffSettings)).toThrow(ZodError);
+    expect(() => computeTakeoff(jobInput({ areaSqFt: -1 }), defaultTakeoffSettings)).toThrow(
+      ZodError,
+    );
+    expect(() =>
+      computeTakeoff(jobInput({ curvedPerimeterFt: 300 }), defaultTakeoffSettings),
+    ).toThrow(ZodError);
+    expect(() =>
+      computeTakeoff(
+        jobInput({ perimeterByTagFt: { hard: 200, bed: 100 } }),
+        defaultTakeoffSettings,
+      ),
+    ).toThrow(ZodError);
   });
 
   it('refuses settings that fail their schema', () => {
-    const settings = settingsWith({ labour: { ...defaultTakeoffSettings.labour, seamFtPerHour: 0 } });
+    const settings = settingsWith({
+      labour: { ...defaultTakeoffSettings.labour, seamFtPerHour: 0 },
+    });
     expect(() => computeTakeoff(jobInput(), settings)).toThrow(ZodError);
   });
 });

@@ -80,7 +80,15 @@ export const defaultTakeoffSettings: TakeoffSettings = {
   infill: {
     // Landscape: 1–2 lb per sq ft of sand is the common range; 50 lb is the standard bag.
     landscape: {
-      layers: [{ key: 'silica-sand', label: 'Silica sand 16/30', kind: 'silica-sand', rateLbPerSqFt: 1.5, bagLb: 50 }],
+      layers: [
+        {
+          key: 'silica-sand',
+          label: 'Silica sand 16/30',
+          kind: 'silica-sand',
+          rateLbPerSqFt: 1.5,
+          bagLb: 50,
+        },
+      ],
       typicalMinLbPerSqFt: 1,
       typicalMaxLbPerSqFt: 2,
     },
@@ -88,22 +96,48 @@ export const defaultTakeoffSettings: TakeoffSettings = {
     pet: {
       layers: [
         { key: 'zeolite', label: 'Zeolite', kind: 'zeolite', rateLbPerSqFt: 1, bagLb: 50 },
-        { key: 'coated-sand', label: 'Antimicrobial coated sand', kind: 'coated-sand', rateLbPerSqFt: 1.5, bagLb: 50 },
+        {
+          key: 'coated-sand',
+          label: 'Antimicrobial coated sand',
+          kind: 'coated-sand',
+          rateLbPerSqFt: 1.5,
+          bagLb: 50,
+        },
       ],
       typicalMinLbPerSqFt: 2,
       typicalMaxLbPerSqFt: 3,
     },
     // Play: 2.5–3.5 lb per sq ft over a shock pad, per the tested system's own spec.
     play: {
-      layers: [{ key: 'silica-sand', label: 'Silica sand 20/40', kind: 'silica-sand', rateLbPerSqFt: 3, bagLb: 50 }],
+      layers: [
+        {
+          key: 'silica-sand',
+          label: 'Silica sand 20/40',
+          kind: 'silica-sand',
+          rateLbPerSqFt: 3,
+          bagLb: 50,
+        },
+      ],
       typicalMinLbPerSqFt: 2.5,
       typicalMaxLbPerSqFt: 3.5,
     },
     // Putting: about 2–4 lb per sq ft; a light coarse layer under a 30/50 top dressing.
     putting: {
       layers: [
-        { key: 'base-sand', label: 'Silica sand 20/40', kind: 'silica-sand', rateLbPerSqFt: 1, bagLb: 50 },
-        { key: 'top-sand', label: 'Silica sand 30/50', kind: 'silica-sand', rateLbPerSqFt: 1.5, bagLb: 50 },
+        {
+          key: 'base-sand',
+          label: 'Silica sand 20/40',
+          kind: 'silica-sand',
+          rateLbPerSqFt: 1,
+          bagLb: 50,
+        },
+        {
+          key: 'top-sand',
+          label: 'Silica sand 30/50',
+          kind: 'silica-sand',
+          rateLbPerSqFt: 1.5,
+          bagLb: 50,
+        },
       ],
       typicalMinLbPerSqFt: 2,
       typicalMaxLbPerSqFt: 4,
@@ -138,7 +172,12 @@ export const defaultTakeoffSettings: TakeoffSettings = {
   equipment: [
     // From memory, no published source: daily coverage of rented machines.
     { key: 'sod-cutter', label: 'Sod cutter', sqFtPerDay: 3000, neededFor: 'excavation' },
-    { key: 'plate-compactor', label: 'Vibratory plate compactor', sqFtPerDay: 2000, neededFor: 'base' },
+    {
+      key: 'plate-compactor',
+      label: 'Vibratory plate compactor',
+      sqFtPerDay: 2000,
+      neededFor: 'base',
+    },
     { key: 'power-broom', label: 'Power broom', sqFtPerDay: 5000, neededFor: 'infill' },
   ],
   finishHeight: {

@@ -22,7 +22,13 @@ export const perimeterTagSchema = z.enum(['hard', 'bed', 'lawn', 'fence', 'house
 export type PerimeterTag = z.infer<typeof perimeterTagSchema>;
 
 /** Infill materials; silica-based kinds raise the silica-dust caution. */
-export const infillKindSchema = z.enum(['silica-sand', 'coated-sand', 'zeolite', 'crumb-rubber', 'organic']);
+export const infillKindSchema = z.enum([
+  'silica-sand',
+  'coated-sand',
+  'zeolite',
+  'crumb-rubber',
+  'organic',
+]);
 /** An infill material kind (see {@link infillKindSchema}). */
 export type InfillKind = z.infer<typeof infillKindSchema>;
 
@@ -82,7 +88,10 @@ export const takeoffSettingsSchema = z.object({
     orderIncrementCuYd: positive,
     orderIncrementTons: positive,
   }),
-  compaction: z.object({ targetPercent: z.number().min(50).max(110), testName: z.string().min(1).max(120) }),
+  compaction: z.object({
+    targetPercent: z.number().min(50).max(110),
+    testName: z.string().min(1).max(120),
+  }),
   perimeterNails: z.object({ straightSpacingIn: positive, curveSpacingIn: positive }),
   seamNails: z.object({ isNailed: z.boolean(), offsetIn: nonNegative, spacingIn: positive }),
   seamTape: z.object({ rollLengthFt: positive, widthIn: positive }),
@@ -108,9 +117,21 @@ export const takeoffSettingsSchema = z.object({
     putting: infillRecipeSchema,
   }),
   rodentWire: z.object({ rollWidthFt: positive, rollLengthFt: positive, overlapIn: nonNegative }),
-  sprinklerCaps: z.object({ capsPerHead: wholeCount, capsPerClosedZone: wholeCount, closedZoneCapSizeIn: positive }),
-  haul: z.object({ label: z.string().min(1).max(80), capacityCuYd: positive, capacityTons: positive }),
-  labour: z.object({ installSqFtPerCrewHour: positive, seamFtPerHour: positive, hourIncrement: positive }),
+  sprinklerCaps: z.object({
+    capsPerHead: wholeCount,
+    capsPerClosedZone: wholeCount,
+    closedZoneCapSizeIn: positive,
+  }),
+  haul: z.object({
+    label: z.string().min(1).max(80),
+    capacityCuYd: positive,
+    capacityTons: positive,
+  }),
+  labour: z.object({
+    installSqFtPerCrewHour: positive,
+    seamFtPerHour: positive,
+    hourIncrement: positive,
+  }),
   equipment: z.array(equipmentRateSchema).max(10),
   finishHeight: z.object({ aboveHardSurfaceIn: nonNegative }),
   turfWeight: z.object({

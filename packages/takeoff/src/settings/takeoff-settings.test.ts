@@ -20,14 +20,22 @@ describe('takeoff settings', () => {
   });
 
   it('rejects impossible values with a path to the field', () => {
-    const bad = { ...defaultTakeoffSettings, perimeterNails: { straightSpacingIn: 0, curveSpacingIn: 3 } };
+    const bad = {
+      ...defaultTakeoffSettings,
+      perimeterNails: { straightSpacingIn: 0, curveSpacingIn: 3 },
+    };
     const result = takeoffSettingsSchema.safeParse(bad);
     expect(result.success).toBe(false);
     expect(result.error?.issues[0]?.path).toEqual(['perimeterNails', 'straightSpacingIn']);
   });
 
   it('rejects an infill range whose low end is above its high end', () => {
-    const infill = { ...defaultTakeoffSettings.infill, pet: { ...defaultTakeoffSettings.infill.pet, typicalMinLbPerSqFt: 4 } };
-    expect(takeoffSettingsSchema.safeParse({ ...defaultTakeoffSettings, infill }).success).toBe(false);
+    const infill = {
+      ...defaultTakeoffSettings.infill,
+      pet: { ...defaultTakeoffSettings.infill.pet, typicalMinLbPerSqFt: 4 },
+    };
+    expect(takeoffSettingsSchema.safeParse({ ...defaultTakeoffSettings, infill }).success).toBe(
+      false,
+    );
   });
 });

@@ -31,8 +31,13 @@ const cases: [string, (v: number) => number, string, string][] = [
 
 describe('conversions match convert-units', () => {
   it.each(cases)('%s', (_name, ours, from, to) => {
-    for (const value of [0, 1, 9, 27, 108, 300, 1000, 2000, 12345.678]) closeTo(ours(value), convert(value).from(from).to(to));
-    fc.assert(fc.property(fc.double({ min: 0, max: 1e6, noNaN: true }), (value) => closeTo(ours(value), convert(value).from(from).to(to))));
+    for (const value of [0, 1, 9, 27, 108, 300, 1000, 2000, 12345.678])
+      closeTo(ours(value), convert(value).from(from).to(to));
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 1e6, noNaN: true }), (value) =>
+        closeTo(ours(value), convert(value).from(from).to(to)),
+      ),
+    );
   });
 });
 
@@ -51,6 +56,11 @@ describe('trade check values', () => {
     [1000, 4, 12.346],
   ])('%d sq ft at %d in = %d cu yd', (area, depth, cuYd) => {
     expect(units.cubicYardsOfLayer(area, depth)).toBeCloseTo(cuYd, 3);
-    closeTo(units.cubicYardsOfLayer(area, depth), convert((area * depth) / 12).from('ft3').to('yd3'));
+    closeTo(
+      units.cubicYardsOfLayer(area, depth),
+      convert((area * depth) / 12)
+        .from('ft3')
+        .to('yd3'),
+    );
   });
 });

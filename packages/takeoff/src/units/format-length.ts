@@ -11,7 +11,10 @@ export function formatNumber(value: number, maxDecimals = 2): string {
   let format = numberFormats.get(maxDecimals);
   if (!format) {
     // signDisplay 'negative' keeps a value that rounds to zero from printing as "-0".
-    format = new Intl.NumberFormat('en-US', { maximumFractionDigits: maxDecimals, signDisplay: 'negative' });
+    format = new Intl.NumberFormat('en-US', {
+      maximumFractionDigits: maxDecimals,
+      signDisplay: 'negative',
+    });
     numberFormats.set(maxDecimals, format);
   }
   return format.format(value);
@@ -25,7 +28,10 @@ function greatestCommonDivisor(a: number, b: number): number {
  * Feet as the trade writes them: `27' 6"`, `27' 6 1/2"`, `0' 3"`. The length is rounded to
  * the nearest `precisionIn` (default ½ in); 11 ⅞ in rounded to ½ in carries into the next foot.
  */
-export function formatFeetInches(feet: number, options: { precisionIn?: InchPrecision } = {}): string {
+export function formatFeetInches(
+  feet: number,
+  options: { precisionIn?: InchPrecision } = {},
+): string {
   if (!Number.isFinite(feet)) throw new RangeError(`Cannot format ${feet} as feet and inches`);
   const precision = options.precisionIn ?? 0.5;
   const steps = Math.round((Math.abs(feet) * 12) / precision);
@@ -45,9 +51,15 @@ export function formatFeetInches(feet: number, options: { precisionIn?: InchPrec
 }
 
 /** A length for the company's system: feet and inches, or metres with two decimals. */
-export function formatLength(feet: number, options: { system: MeasurementSystem; precisionIn?: InchPrecision }): string {
+export function formatLength(
+  feet: number,
+  options: { system: MeasurementSystem; precisionIn?: InchPrecision },
+): string {
   if (options.system === 'metric') return `${formatNumber(feetToMetres(feet), 2)} m`;
-  return formatFeetInches(feet, options.precisionIn === undefined ? {} : { precisionIn: options.precisionIn });
+  return formatFeetInches(
+    feet,
+    options.precisionIn === undefined ? {} : { precisionIn: options.precisionIn },
+  );
 }
 
 /** Area units {@link formatArea} can show. */
@@ -57,7 +69,10 @@ export type AreaUnit = 'sq ft' | 'sq yd' | 'm²';
  * An area given in square feet, shown as `1,000 sq ft`, `111.11 sq yd` or `92.9 m²`. Without a
  * unit it uses sq ft for imperial companies and m² for metric ones.
  */
-export function formatArea(sqFt: number, options: { system?: MeasurementSystem; unit?: AreaUnit; maxDecimals?: number } = {}): string {
+export function formatArea(
+  sqFt: number,
+  options: { system?: MeasurementSystem; unit?: AreaUnit; maxDecimals?: number } = {},
+): string {
   const unit = options.unit ?? (options.system === 'metric' ? 'm²' : 'sq ft');
   const value = unit === 'sq yd' ? sqFtToSqYd(sqFt) : unit === 'm²' ? sqFtToSqM(sqFt) : sqFt;
   const decimals = options.maxDecimals ?? (unit === 'sq ft' ? 0 : 2);

@@ -6,7 +6,10 @@ import { formatFeetInches } from './format-length.js';
 
 const feetOf = (text: string, system: MeasurementSystem = 'imperial'): number => {
   const result = parseLength(text, { system });
-  if (!result.ok) throw new Error(`expected "${text}" to parse, got ${result.error.code}: ${result.error.message}`);
+  if (!result.ok)
+    throw new Error(
+      `expected "${text}" to parse, got ${result.error.code}: ${result.error.message}`,
+    );
   return result.feet;
 };
 
@@ -120,12 +123,17 @@ describe('parseLength names what is wrong', () => {
 describe('parseLength and formatFeetInches agree', () => {
   it('reads back what it formats, within half the inch precision', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 5000, noNaN: true }), fc.constantFrom<1 | 0.5 | 0.25 | 0.125>(1, 0.5, 0.25, 0.125), (feet, precisionIn) => {
-        const text = formatFeetInches(feet, { precisionIn });
-        const back = parseLength(text, { system: 'imperial' });
-        expect(back.ok).toBe(true);
-        if (back.ok) expect(Math.abs(back.feet - feet) * 12).toBeLessThanOrEqual(precisionIn / 2 + 1e-9);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 5000, noNaN: true }),
+        fc.constantFrom<1 | 0.5 | 0.25 | 0.125>(1, 0.5, 0.25, 0.125),
+        (feet, precisionIn) => {
+          const text = formatFeetInches(feet, { precisionIn });
+          const back = parseLength(text, { system: 'imperial' });
+          expect(back.ok).toBe(true);
+          if (back.ok)
+            expect(Math.abs(back.feet - feet) * 12).toBeLessThanOrEqual(precisionIn / 2 + 1e-9);
+        },
+      ),
     );
   });
 

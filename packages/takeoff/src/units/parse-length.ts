@@ -30,10 +30,21 @@ interface Part {
 }
 
 const UNIT_WORDS: Record<string, LengthUnit> = {
-  "'": 'ft', ft: 'ft', foot: 'ft', feet: 'ft',
-  '"': 'in', in: 'in', inch: 'in', inches: 'in',
-  m: 'm', metre: 'm', metres: 'm', meter: 'm', meters: 'm',
-  cm: 'cm', mm: 'mm',
+  "'": 'ft',
+  ft: 'ft',
+  foot: 'ft',
+  feet: 'ft',
+  '"': 'in',
+  in: 'in',
+  inch: 'in',
+  inches: 'in',
+  m: 'm',
+  metre: 'm',
+  metres: 'm',
+  meter: 'm',
+  meters: 'm',
+  cm: 'cm',
+  mm: 'mm',
 };
 const FEET_PER_UNIT: Record<LengthUnit, number> = {
   ft: 1,
@@ -45,9 +56,13 @@ const FEET_PER_UNIT: Record<LengthUnit, number> = {
 
 // A number (decimal, whole + fraction like "6 1/2", or a bare fraction like "1/2") and an
 // optional unit word or mark. Longer unit words come first so "inches" is not read as "in".
-const PART = /\s*(\d+(?:,\d{3})*(?:\.\d*)?|\.\d+)(?:\s+(\d+)\/(\d+)|\/(\d+))?\s*(feet|foot|ft|inches|inch|in|metres|metre|meters|meter|mm|cm|m|'|")?\s*/y;
+const PART =
+  /\s*(\d+(?:,\d{3})*(?:\.\d*)?|\.\d+)(?:\s+(\d+)\/(\d+)|\/(\d+))?\s*(feet|foot|ft|inches|inch|in|metres|metre|meters|meter|mm|cm|m|'|")?\s*/y;
 
-const fail = (code: LengthParseErrorCode, message: string): LengthParseResult => ({ ok: false, error: { code, message } });
+const fail = (code: LengthParseErrorCode, message: string): LengthParseResult => ({
+  ok: false,
+  error: { code, message },
+});
 
 /** Curly quotes, primes and doubled apostrophes become the plain feet and inch marks. */
 function normalise(text: string): string {
@@ -63,30 +78,43 @@ function readParts(text: string): Part[] | LengthParseError {
   PART.lastIndex = 0;
   while (PART.lastIndex < text.length) {
     const match = PART.exec(text);
-    if (!match) return { code: 'unrecognised', message: `"${text}" is not a length; try 27' 6", 27 ft 6 in or 27.5` };
+    if (!match)
+      return {
+        code: 'unrecognised',
+        message: `"${text}" is not a length; try 27' 6", 27 ft 6 in or 27.5`,
+      };
     const [, whole = '', fracTop, fracBottom, bareBottom] = match;
     const wholeValue = Number(whole.replace(/,/g, ''));
     let value = wholeValue;
     if (bareBottom !== undefined) {
-      if (Number(bareBottom) === 0) return { code: 'bad-fraction', message: 'A fraction cannot have 0 below the line' };
+      if (Number(bareBottom) === 0)
+        return { code: 'bad-fraction', message: 'A fraction cannot have 0 below the line' };
       value = wholeValue / Number(bareBottom);
     } else if (fracTop !== undefined && fracBottom !== undefined) {
       const top = Number(fracTop);
       const bottom = Number(fracBottom);
       if (bottom === 0 || top >= bottom || whole.includes('.')) {
-        return { code: 'bad-fraction', message: `"${fracTop}/${fracBottom}" is not a proper fraction after a whole number` };
+        return {
+          code: 'bad-fraction',
+          message: `"${fracTop}/${fracBottom}" is not a proper fraction after a whole number`,
+        };
       }
       value = wholeValue + top / bottom;
     }
     const mark = match[5];
-    parts.push({ value, unit: mark === undefined ? undefined : UNIT_WORDS[mark], isFractional: !Number.isInteger(value) });
+    parts.push({
+      value,
+      unit: mark === undefined ? undefined : UNIT_WORDS[mark],
+      isFractional: !Number.isInteger(value),
+    });
   }
   return parts;
 }
 
 function combine(parts: Part[], system: MeasurementSystem): LengthParseResult {
   const [first, second] = parts;
-  if (!first || parts.length > 2) return fail('unrecognised', 'Give one length, such as 27\' 6" or 8.4 m');
+  if (!first || parts.length > 2)
+    return fail('unrecognised', 'Give one length, such as 27\' 6" or 8.4 m');
   if (!second) {
     const unit = first.unit ?? (system === 'metric' ? 'm' : 'ft');
     return { ok: true, feet: first.value * FEET_PER_UNIT[unit] };
@@ -95,16 +123,26 @@ function combine(parts: Part[], system: MeasurementSystem): LengthParseResult {
     const units = [first.unit, second.unit];
     const hasMetric = units.some((u) => u === 'm' || u === 'cm' || u === 'mm');
     const hasImperial = units.some((u) => u === 'ft' || u === 'in');
-    if (hasMetric && hasImperial) return fail('mixed-systems', 'Use feet and inches or metres, not both');
-    return fail('unrecognised', 'Write feet first, then inches, such as 27\' 6"; metric lengths take one unit, such as 8.4 m');
+    if (hasMetric && hasImperial)
+      return fail('mixed-systems', 'Use feet and inches or metres, not both');
+    return fail(
+      'unrecognised',
+      'Write feet first, then inches, such as 27\' 6"; metric lengths take one unit, such as 8.4 m',
+    );
   }
   if (first.isFractional) {
-    return fail('fractional-feet-with-inches', 'Feet with a decimal cannot be followed by inches; write 27.5 or 27\' 6"');
+    return fail(
+      'fractional-feet-with-inches',
+      'Feet with a decimal cannot be followed by inches; write 27.5 or 27\' 6"',
+    );
   }
   if (second.value >= 12) {
     const carry = first.value + Math.floor(second.value / 12);
     const rest = second.value % 12;
-    return fail('inches-out-of-range', `Inches must be less than 12 when feet are given (${second.value} in is ${Math.floor(second.value / 12)} ft ${rest} in); write ${carry}' ${rest}"`);
+    return fail(
+      'inches-out-of-range',
+      `Inches must be less than 12 when feet are given (${second.value} in is ${Math.floor(second.value / 12)} ft ${rest} in); write ${carry}' ${rest}"`,
+    );
   }
   return { ok: true, feet: first.value + second.value / 12 };
 }
@@ -117,14 +155,19 @@ function combine(parts: Part[], system: MeasurementSystem): LengthParseResult {
  * for an imperial company and metres for a metric one; numbers with a unit mean what they say.
  * Rejects empty text, negatives, inches of 12 or more after feet, and anything else.
  */
-export function parseLength(text: string, options: { system: MeasurementSystem }): LengthParseResult {
+export function parseLength(
+  text: string,
+  options: { system: MeasurementSystem },
+): LengthParseResult {
   const cleaned = normalise(text);
   if (cleaned === '') return fail('empty', 'Enter a length');
   if (/^[-\u2212\u2013]/.test(cleaned)) return fail('negative', 'A length cannot be negative');
-  if (/\d,\d{1,2}(?!\d)/.test(cleaned)) return fail('unrecognised', 'Use a point for decimals, such as 8.4');
+  if (/\d,\d{1,2}(?!\d)/.test(cleaned))
+    return fail('unrecognised', 'Use a point for decimals, such as 8.4');
   const parts = readParts(cleaned);
   if (!Array.isArray(parts)) return { ok: false, error: parts };
   const result = combine(parts, options.system);
-  if (result.ok && !Number.isFinite(result.feet)) return fail('unrecognised', 'That number is too large to be a length');
+  if (result.ok && !Number.isFinite(result.feet))
+    return fail('unrecognised', 'That number is too large to be a length');
   return result;
 }

@@ -38,5 +38,12 @@ export function planEdges(input: NormalisedTakeoffInput, settings: TakeoffSettin
     stapledFt = settings.staples.isUsedOnEdging ? edgingFt : 0;
   }
   const nailedFt = Math.max(0, perimeter - petBoardFt - stapledFt);
-  return { nailedFt, curvedNailedFt: Math.min(input.curvedPerimeterFt, nailedFt), edgingFt, stapledFt, petBoardFt, isPetPerimeter };
+  return {
+    nailedFt,
+    curvedNailedFt: Math.min(input.curvedPerimeterFt, nailedFt),
+    edgingFt,
+    stapledFt,
+    petBoardFt,
+    isPetPerimeter,
+  };
 }

@@ -6,7 +6,10 @@ import type { TakeoffLine } from '../takeoff-line.js';
 import { makeLine } from './make-line.js';
 
 /** Threaded caps: ½ in and ¾ in per head removed, one larger cap per zone closed at the valve. */
-export function sprinklerCapLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function sprinklerCapLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   const { capsPerHead, capsPerClosedZone, closedZoneCapSizeIn } = settings.sprinklerCaps;
   const { halfInchHeads, threeQuarterInchHeads, zonesClosed } = input.sprinklers;
   const rows: [string, string, number, number][] = [
@@ -24,7 +27,10 @@ export function sprinklerCapLines(input: NormalisedTakeoffInput, settings: Takeo
         quantity: count * per,
         unit: 'ea',
         rawQuantity: count * per,
-        rule: index < 2 ? `${plural(count, 'head', 'heads')} removed × ${n(per)} cap each` : `${plural(count, 'zone', 'zones')} closed at the valve × ${n(per)} cap each`,
+        rule:
+          index < 2
+            ? `${plural(count, 'head', 'heads')} removed × ${n(per)} cap each`
+            : `${plural(count, 'zone', 'zones')} closed at the valve × ${n(per)} cap each`,
         rounding: 'none',
         inputs: { count, capsEach: per },
       }),
@@ -32,12 +38,18 @@ export function sprinklerCapLines(input: NormalisedTakeoffInput, settings: Takeo
 }
 
 /** Rodent wire over the area, with the overlap between strips, in whole rolls. */
-export function rodentWireLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function rodentWireLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   if (!input.rodentWire || input.areaSqFt <= 0) return [];
   const { rollLengthFt, overlapIn } = settings.rodentWire;
   const widthFt = input.stripWidthFt ?? settings.rodentWire.rollWidthFt;
   const coverFt = widthFt - overlapIn / 12;
-  if (coverFt <= 0) throw new RangeError(`Rodent wire overlap (${overlapIn} in) must be narrower than the strip (${widthFt} ft)`);
+  if (coverFt <= 0)
+    throw new RangeError(
+      `Rodent wire overlap (${overlapIn} in) must be narrower than the strip (${widthFt} ft)`,
+    );
   const wireSqFt = (input.areaSqFt * widthFt) / coverFt;
   const rollSqFt = widthFt * rollLengthFt;
   return [
@@ -50,13 +62,23 @@ export function rodentWireLines(input: NormalisedTakeoffInput, settings: Takeoff
       rawQuantity: wireSqFt / rollSqFt,
       rule: `${n(input.areaSqFt)} sq ft × ${n(widthFt)} ft strip ÷ (${n(widthFt)} ft − ${n(overlapIn)} in overlap) = ${n(wireSqFt)} sq ft of wire ÷ ${n(rollSqFt)} sq ft per ${n(widthFt)} × ${n(rollLengthFt)} ft roll = ${n(wireSqFt / rollSqFt)} rolls`,
       rounding: 'rounded up to whole rolls',
-      inputs: { areaSqFt: input.areaSqFt, stripWidthFt: widthFt, overlapIn, rollLengthFt, wireSqFt: roundTo(wireSqFt, 2) },
+      inputs: {
+        areaSqFt: input.areaSqFt,
+        stripWidthFt: widthFt,
+        overlapIn,
+        rollLengthFt,
+        wireSqFt: roundTo(wireSqFt, 2),
+      },
     }),
   ];
 }
 
 /** Crew hours from production rates, and rental days for the equipment the job needs. */
-export function labourLines(input: NormalisedTakeoffInput, settings: TakeoffSettings, needs: ReadonlySet<string>): TakeoffLine[] {
+export function labourLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+  needs: ReadonlySet<string>,
+): TakeoffLine[] {
   const { installSqFtPerCrewHour, seamFtPerHour, hourIncrement } = settings.labour;
   const lines: TakeoffLine[] = [];
   if (input.areaSqFt > 0) {
@@ -93,7 +115,8 @@ export function labourLines(input: NormalisedTakeoffInput, settings: TakeoffSett
     );
   }
   for (const machine of settings.equipment) {
-    if (input.areaSqFt <= 0 || (machine.neededFor !== 'always' && !needs.has(machine.neededFor))) continue;
+    if (input.areaSqFt <= 0 || (machine.neededFor !== 'always' && !needs.has(machine.neededFor)))
+      continue;
     const days = input.areaSqFt / machine.sqFtPerDay;
     lines.push(
       makeLine({

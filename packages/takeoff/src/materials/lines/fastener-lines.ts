@@ -1,5 +1,10 @@
 import type { TakeoffSettings } from '../../settings/takeoff-settings-schema.js';
-import { ceilWhole, fastenersForClosedLoop, fastenersForOpenRun, stockPieces } from '../formulas.js';
+import {
+  ceilWhole,
+  fastenersForClosedLoop,
+  fastenersForOpenRun,
+  stockPieces,
+} from '../formulas.js';
 import { n, plural } from '../rule-text.js';
 import type { NormalisedTakeoffInput } from '../takeoff-input.js';
 import type { TakeoffLine } from '../takeoff-line.js';
@@ -7,14 +12,19 @@ import type { EdgePlan } from './edge-plan.js';
 import { makeLine } from './make-line.js';
 
 /** Perimeter nails: ceil(feet × 12 ÷ spacing) for straight runs, and again at curve spacing. */
-export function perimeterNailLines(input: NormalisedTakeoffInput, settings: TakeoffSettings, edges: EdgePlan): TakeoffLine[] {
+export function perimeterNailLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+  edges: EdgePlan,
+): TakeoffLine[] {
   if (edges.nailedFt <= 0) return [];
   const { straightSpacingIn, curveSpacingIn } = settings.perimeterNails;
   const straightFt = edges.nailedFt - edges.curvedNailedFt;
   const straight = fastenersForClosedLoop(straightFt, straightSpacingIn);
   const curved = fastenersForClosedLoop(edges.curvedNailedFt, curveSpacingIn);
   const straightText = `${n(straightFt)} lf straight × 12 ÷ ${n(straightSpacingIn)} in = ${n(straight)}`;
-  const where = edges.nailedFt === input.perimeterFt ? 'closed perimeter' : 'nailed part of the perimeter';
+  const where =
+    edges.nailedFt === input.perimeterFt ? 'closed perimeter' : 'nailed part of the perimeter';
   const rule =
     edges.curvedNailedFt > 0
       ? `${where}: ${straightText} + ${n(edges.curvedNailedFt)} lf curved × 12 ÷ ${n(curveSpacingIn)} in = ${n(curved)} → ${n(straight + curved)} nails`
@@ -26,16 +36,25 @@ export function perimeterNailLines(input: NormalisedTakeoffInput, settings: Take
       label: 'Perimeter nails',
       quantity: straight + curved,
       unit: 'ea',
-      rawQuantity: (straightFt * 12) / straightSpacingIn + (edges.curvedNailedFt * 12) / curveSpacingIn,
+      rawQuantity:
+        (straightFt * 12) / straightSpacingIn + (edges.curvedNailedFt * 12) / curveSpacingIn,
       rule,
       rounding: 'each run rounded up to a whole nail',
-      inputs: { nailedFt: edges.nailedFt, curvedFt: edges.curvedNailedFt, straightSpacingIn, curveSpacingIn },
+      inputs: {
+        nailedFt: edges.nailedFt,
+        curvedFt: edges.curvedNailedFt,
+        straightSpacingIn,
+        curveSpacingIn,
+      },
     }),
   ];
 }
 
 /** Seam nails on both sides of every seam, or none when the company glues seams only. */
-export function seamNailLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function seamNailLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   const { isNailed, offsetIn, spacingIn } = settings.seamNails;
   const seamFt = input.seams.sideFt + input.seams.buttFt;
   if (!isNailed || seamFt <= 0) return [];
@@ -109,10 +128,12 @@ export function edgingLines(settings: TakeoffSettings, edges: EdgePlan): Takeoff
 /** Pet perimeter: treated boards in stock lengths with waste, turf screwed every N in. */
 export function petPerimeterLines(settings: TakeoffSettings, edges: EdgePlan): TakeoffLine[] {
   if (edges.petBoardFt <= 0) return [];
-  const { boardLabel, stockLengthFt, wastePercent, screwSpacingIn, skippedTags } = settings.petPerimeter;
+  const { boardLabel, stockLengthFt, wastePercent, screwSpacingIn, skippedTags } =
+    settings.petPerimeter;
   const boards = stockPieces(edges.petBoardFt, stockLengthFt, wastePercent);
   const screws = fastenersForClosedLoop(edges.petBoardFt, screwSpacingIn);
-  const skipped = skippedTags.length > 0 ? ` (edges meeting ${skippedTags.join(' or ')} skipped)` : '';
+  const skipped =
+    skippedTags.length > 0 ? ` (edges meeting ${skippedTags.join(' or ')} skipped)` : '';
   return [
     makeLine({
       key: 'pet-perimeter-boards',

@@ -10,13 +10,18 @@ export function infillRangeWarnings(usage: string, recipe: InfillRecipe): string
   const total = recipe.layers.reduce((sum, layer) => sum + layer.rateLbPerSqFt, 0);
   const { typicalMinLbPerSqFt: min, typicalMaxLbPerSqFt: max } = recipe;
   const range = `${n(min)}–${n(max)} lb per sq ft`;
-  if (total < min - 1e-9) return [`Infill at ${n(total)} lb per sq ft is below the usual ${range} for ${usage} turf.`];
-  if (total > max + 1e-9) return [`Infill at ${n(total)} lb per sq ft is above the usual ${range} for ${usage} turf.`];
+  if (total < min - 1e-9)
+    return [`Infill at ${n(total)} lb per sq ft is below the usual ${range} for ${usage} turf.`];
+  if (total > max + 1e-9)
+    return [`Infill at ${n(total)} lb per sq ft is above the usual ${range} for ${usage} turf.`];
   return [];
 }
 
 /** Infill per layer (rate × area → lb → whole bags) and a total line that checks the range. */
-export function infillLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function infillLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   const recipe = settings.infill[input.usage];
   if (recipe.layers.length === 0 || input.areaSqFt <= 0) return [];
   const area = input.areaSqFt;
@@ -32,7 +37,13 @@ export function infillLines(input: NormalisedTakeoffInput, settings: TakeoffSett
       rawQuantity: pounds / layer.bagLb,
       rule: `${n(area)} sq ft × ${n(layer.rateLbPerSqFt)} lb per sq ft = ${n(pounds)} lb ÷ ${n(layer.bagLb)} lb per bag = ${n(pounds / layer.bagLb)} bags`,
       rounding: `rounded up to whole ${n(layer.bagLb)} lb bags`,
-      inputs: { areaSqFt: area, rateLbPerSqFt: layer.rateLbPerSqFt, bagLb: layer.bagLb, pounds: roundTo(pounds, 4), kind: layer.kind },
+      inputs: {
+        areaSqFt: area,
+        rateLbPerSqFt: layer.rateLbPerSqFt,
+        bagLb: layer.bagLb,
+        pounds: roundTo(pounds, 4),
+        kind: layer.kind,
+      },
     });
   });
   const totalRate = recipe.layers.reduce((sum, layer) => sum + layer.rateLbPerSqFt, 0);
@@ -46,7 +57,11 @@ export function infillLines(input: NormalisedTakeoffInput, settings: TakeoffSett
     rawQuantity: totalPounds,
     rule: `${recipe.layers.map((l) => `${n(l.rateLbPerSqFt)}`).join(' + ')} lb per sq ft = ${n(totalRate)} lb per sq ft × ${n(area)} sq ft = ${n(totalPounds)} lb (usual for ${input.usage}: ${n(recipe.typicalMinLbPerSqFt)}–${n(recipe.typicalMaxLbPerSqFt)} lb per sq ft)`,
     rounding: 'to 0.01 lb',
-    inputs: { totalRateLbPerSqFt: totalRate, typicalMinLbPerSqFt: recipe.typicalMinLbPerSqFt, typicalMaxLbPerSqFt: recipe.typicalMaxLbPerSqFt },
+    inputs: {
+      totalRateLbPerSqFt: totalRate,
+      typicalMinLbPerSqFt: recipe.typicalMinLbPerSqFt,
+      typicalMaxLbPerSqFt: recipe.typicalMaxLbPerSqFt,
+    },
     warnings: infillRangeWarnings(input.usage, recipe),
   });
   return [...layerLines, total];

@@ -1,13 +1,23 @@
 import type { TakeoffSettings } from '../../settings/takeoff-settings-schema.js';
 import { cubicYardsOfLayer } from '../../units/conversions.js';
-import { loadsNeeded, looseFromBank, roundTo, roundUpTo, tonsFromCubicYards, tonsFromPoundsPerCubicYard } from '../formulas.js';
+import {
+  loadsNeeded,
+  looseFromBank,
+  roundTo,
+  roundUpTo,
+  tonsFromCubicYards,
+  tonsFromPoundsPerCubicYard,
+} from '../formulas.js';
 import { n, plural } from '../rule-text.js';
 import type { NormalisedTakeoffInput } from '../takeoff-input.js';
 import type { TakeoffLine } from '../takeoff-line.js';
 import { makeLine } from './make-line.js';
 
 /** Excavation spoil (loose cu yd) and the loads to haul it, limited by volume or by weight. */
-export function excavationLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function excavationLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   const digDepthIn = input.digDepthIn ?? settings.excavation.digDepthIn;
   if (digDepthIn <= 0 || input.areaSqFt <= 0) return [];
   const { soilSwellPercent, spoilLooseDensityLbPerCuYd } = settings.excavation;
@@ -38,9 +48,17 @@ export function excavationLines(input: NormalisedTakeoffInput, settings: Takeoff
       `${n(loose)} cu yd loose × ${n(spoilLooseDensityLbPerCuYd)} lb per cu yd = ${n(loose * spoilLooseDensityLbPerCuYd, 0)} lb = ${n(tons)} tons; ` +
       `by volume ${n(loose)} ÷ ${n(capacityCuYd)} cu yd = ${plural(loads.byVolume, 'load', 'loads')}, by weight ${n(tons)} ÷ ${n(capacityTons)} tons = ${plural(loads.byWeight, 'load', 'loads')}; the larger governs`,
     rounding: 'rounded up to whole loads',
-    inputs: { looseCuYd: roundTo(loose, 4), spoilLooseDensityLbPerCuYd, spoilTons: roundTo(tons, 4), capacityCuYd, capacityTons },
+    inputs: {
+      looseCuYd: roundTo(loose, 4),
+      spoilLooseDensityLbPerCuYd,
+      spoilTons: roundTo(tons, 4),
+      capacityCuYd,
+      capacityTons,
+    },
     warnings: loads.isWeightLimited
-      ? [`Weight, not volume, limits these loads: ${n(tons, 1)} tons of spoil against ${n(capacityTons)} tons per ${boxLabel}.`]
+      ? [
+          `Weight, not volume, limits these loads: ${n(tons, 1)} tons of spoil against ${n(capacityTons)} tons per ${boxLabel}.`,
+        ]
       : [],
   });
   return [spoil, haul];
@@ -50,7 +68,12 @@ export function excavationLines(input: NormalisedTakeoffInput, settings: Takeoff
 export function baseLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
   const depthIn = input.baseDepthIn ?? settings.base.depthIn;
   if (depthIn <= 0 || input.areaSqFt <= 0) return [];
-  const { looseToCompactedFactor: factor, densityTonsPerCuYd, orderIncrementCuYd, orderIncrementTons } = settings.base;
+  const {
+    looseToCompactedFactor: factor,
+    densityTonsPerCuYd,
+    orderIncrementCuYd,
+    orderIncrementTons,
+  } = settings.base;
   const compacted = cubicYardsOfLayer(input.areaSqFt, depthIn);
   const loose = compacted * factor;
   const tons = tonsFromCubicYards(loose, densityTonsPerCuYd);
@@ -66,7 +89,12 @@ export function baseLines(input: NormalisedTakeoffInput, settings: TakeoffSettin
     rawQuantity: loose,
     rule: `${volumeRule} (check: about 1 cu yd per 100 sq ft at 3 in ≈ ${n(thumb)} cu yd)`,
     rounding: `rounded up to ${n(orderIncrementCuYd)} cu yd`,
-    inputs: { areaSqFt: input.areaSqFt, baseDepthIn: depthIn, compactedCuYd: roundTo(compacted, 4), looseToCompactedFactor: factor },
+    inputs: {
+      areaSqFt: input.areaSqFt,
+      baseDepthIn: depthIn,
+      compactedCuYd: roundTo(compacted, 4),
+      looseToCompactedFactor: factor,
+    },
   });
   const weight = makeLine({
     key: 'base-stone-tons',
@@ -98,7 +126,10 @@ export function baseLines(input: NormalisedTakeoffInput, settings: TakeoffSettin
  * Where to set the base next to a hard surface so the turf top finishes a little above it:
  * base grade below the hard surface = pile height − finish height above it.
  */
-export function finishHeightLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function finishHeightLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   const pile = input.turf.pileHeightIn;
   if (pile === undefined) return [];
   const above = settings.finishHeight.aboveHardSurfaceIn;
@@ -108,7 +139,9 @@ export function finishHeightLines(input: NormalisedTakeoffInput, settings: Takeo
     makeLine({
       key: 'finish-height',
       kind: 'guidance',
-      label: isBelow ? 'Base grade below adjacent hard surfaces' : 'Base grade above adjacent hard surfaces',
+      label: isBelow
+        ? 'Base grade below adjacent hard surfaces'
+        : 'Base grade above adjacent hard surfaces',
       quantity: roundTo(Math.abs(recess), 3),
       unit: 'in',
       rawQuantity: Math.abs(recess),

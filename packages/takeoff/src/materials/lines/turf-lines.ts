@@ -19,7 +19,10 @@ export function turfLines(input: NormalisedTakeoffInput): TakeoffLine[] {
   const { orderedSqFt, pieces } = input.turf;
   const waste = orderedSqFt - input.areaSqFt;
   const wastePct = orderedSqFt > 0 ? (waste / orderedSqFt) * 100 : 0;
-  const source = pieces.length > 0 ? `${describePieces(pieces)} = ${n(orderedSqFt)} sq ft ordered` : `${n(orderedSqFt)} sq ft ordered`;
+  const source =
+    pieces.length > 0
+      ? `${describePieces(pieces)} = ${n(orderedSqFt)} sq ft ordered`
+      : `${n(orderedSqFt)} sq ft ordered`;
   return [
     makeLine({
       key: 'turf',
@@ -36,14 +39,19 @@ export function turfLines(input: NormalisedTakeoffInput): TakeoffLine[] {
 }
 
 /** The heaviest piece's weight (face + backing), flagged when above the one-person lift limit. */
-export function rollWeightLines(input: NormalisedTakeoffInput, settings: TakeoffSettings): TakeoffLine[] {
+export function rollWeightLines(
+  input: NormalisedTakeoffInput,
+  settings: TakeoffSettings,
+): TakeoffLine[] {
   const face = input.turf.faceWeightOzPerSqYd;
   const heaviest = input.turf.pieces.reduce<{ widthFt: number; lengthFt: number } | undefined>(
-    (best, piece) => (!best || piece.widthFt * piece.lengthFt > best.widthFt * best.lengthFt ? piece : best),
+    (best, piece) =>
+      !best || piece.widthFt * piece.lengthFt > best.widthFt * best.lengthFt ? piece : best,
     undefined,
   );
   if (face === undefined || !heaviest) return [];
-  const { latexBackingOzPerSqYd, polyurethaneBackingOzPerSqYd, assumedBacking, liftLimitLb } = settings.turfWeight;
+  const { latexBackingOzPerSqYd, polyurethaneBackingOzPerSqYd, assumedBacking, liftLimitLb } =
+    settings.turfWeight;
   const backing = input.turf.backing ?? assumedBacking;
   const backingOz = backing === 'latex' ? latexBackingOzPerSqYd : polyurethaneBackingOzPerSqYd;
   const sqYd = (heaviest.widthFt * heaviest.lengthFt) / 9;
@@ -59,10 +67,19 @@ export function rollWeightLines(input: NormalisedTakeoffInput, settings: Takeoff
       rawQuantity: weight,
       rule: `${n(heaviest.widthFt)} × ${n(heaviest.lengthFt)} ft ÷ 9 = ${n(sqYd)} sq yd × (${n(face)} oz face + ${n(backingOz)} oz ${backing} backing${assumed}) ÷ 16 = ${n(weight)} lb`,
       rounding: 'to the nearest lb',
-      inputs: { widthFt: heaviest.widthFt, lengthFt: heaviest.lengthFt, faceOzPerSqYd: face, backingOzPerSqYd: backingOz, backing, liftLimitLb },
+      inputs: {
+        widthFt: heaviest.widthFt,
+        lengthFt: heaviest.lengthFt,
+        faceOzPerSqYd: face,
+        backingOzPerSqYd: backingOz,
+        backing,
+        liftLimitLb,
+      },
       warnings:
         weight > liftLimitLb
-          ? [`At ${n(roundTo(weight, 0))} lb this roll is over the ${n(liftLimitLb)} lb one-person lift limit: use a roll cart, carpet pole on a machine or a team lift.`]
+          ? [
+              `At ${n(roundTo(weight, 0))} lb this roll is over the ${n(liftLimitLb)} lb one-person lift limit: use a roll cart, carpet pole on a machine or a team lift.`,
+            ]
           : [],
     }),
   ];
