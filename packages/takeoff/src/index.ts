@@ -4,3 +4,5 @@ export * from './units/index.js';
 export * from './settings/index.js';
 export * from './materials/index.js';
 export * from './cautions/index.js';
+// Turf layout planner: strips, cuts, seams, cut sheet (layout helper).
+export * from './layout/index.js';

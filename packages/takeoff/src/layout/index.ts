@@ -1,0 +1,27 @@
+// Public surface of the layout planner (re-exported by the package index).
+export { planLayout } from './plan-layout.js';
+export {
+  parseLayoutRequest,
+  DEFAULT_MAX_LENGTH_FT,
+  DEFAULT_WALKWAY_WIDTH_FT,
+  MAX_RING_POINTS,
+  MAX_STRIPS,
+} from './parse-request.js';
+export { LayoutInputError } from './errors.js';
+export { EDGE_TAGS as LAYOUT_EDGE_TAGS } from './types.js';
+export type {
+  CutSheetCut,
+  CutSheetEntry,
+  EdgeTag,
+  GrainArrow,
+  LayoutAlternative,
+  LayoutCut,
+  LayoutPiece,
+  LayoutPlan,
+  LayoutRequest,
+  LayoutRequestInput,
+  Point as LayoutPoint,
+  SeamLine,
+  TrafficPath,
+  TrafficSeamCrossing,
+} from './types.js';
