@@ -21,3 +21,4 @@ export type { RunningServer, StartServerOptions } from './server.js';
 export type { RouteEntry } from './http/route-table.js';
 export { csrfCookieName, csrfHeaderName } from './http/csrf.js';
 export { sessionCookieName } from './http/session.js';
+export { executeSql, selectRows } from './db/sql.js';
