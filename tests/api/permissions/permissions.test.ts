@@ -1,0 +1,67 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { testApp } from '../../fixtures/app.js';
+import { addMember, createCustomer, createSite, signUpCompany } from '../../fixtures/factories.js';
+import type { SignedIn } from '../../fixtures/factories.js';
+
+describe('permissions per role', () => {
+  let owner: SignedIn;
+  let office: SignedIn;
+  let bookkeeper: SignedIn;
+  let crew: SignedIn;
+  let customerId: string;
+  let siteId: string;
+
+  beforeAll(async () => {
+    const { app } = testApp();
+    owner = await signUpCompany(app);
+    office = await addMember(app, owner.client, 'office');
+    bookkeeper = await addMember(app, owner.client, 'bookkeeper');
+    crew = await addMember(app, owner.client, 'crew_lead');
+    const customer = await createCustomer(owner.client, { email: 'billing@example.test', phone: '555 014 1234' });
+    customerId = customer.id;
+    siteId = (await createSite(owner.client, customerId)).id;
+  });
+
+  it('crew leads get 403 FORBIDDEN on every customer and site route', async () => {
+    for (const res of [
+      await crew.client.get('/api/customers'),
+      await crew.client.get(`/api/customers/${customerId}`),
+      await crew.client.post('/api/customers', { name: 'Nope' }),
+      await crew.client.patch(`/api/customers/${customerId}`, { name: 'Nope' }),
+      await crew.client.del(`/api/customers/${customerId}`),
+      await crew.client.get(`/api/customers/${customerId}/sites`),
+      await crew.client.get(`/api/sites/${siteId}`),
+    ]) {
+      expect(res.status).toBe(403);
+      expect(res.body.code).toBe('FORBIDDEN');
+    }
+    await crew.client.get('/api/me').expect(200);
+    await crew.client.get('/api/company').expect(200);
+  });
+
+  it('bookkeepers read customers with billing details but cannot write', async () => {
+    const read = await bookkeeper.client.get(`/api/customers/${customerId}`).expect(200);
+    expect(read.body.data.email).toBe('billing@example.test');
+    await bookkeeper.client.post('/api/customers', { name: 'Nope' }).expect(403);
+    await bookkeeper.client.patch(`/api/customers/${customerId}`, { name: 'Nope' }).expect(403);
+    await bookkeeper.client.del(`/api/customers/${customerId}`).expect(403);
+    await bookkeeper.client.post(`/api/customers/${customerId}/sites`, { addressLine1: '1 A', city: 'B' }).expect(403);
+    await bookkeeper.client.patch(`/api/sites/${siteId}`, { label: 'x' }).expect(403);
+  });
+
+  it('office staff write customers and sites but cannot manage members, invitations, company or audit', async () => {
+    await office.client.patch(`/api/customers/${customerId}`, { notes: 'Office was here' }).expect(200);
+    await office.client.patch(`/api/sites/${siteId}`, { label: 'Front' }).expect(200);
+    await office.client.get('/api/members').expect(403);
+    await office.client.post('/api/invitations', { email: 'x@example.test', role: 'office' }).expect(403);
+    await office.client.patch('/api/company', { name: 'Taken over' }).expect(403);
+    await office.client.get('/api/audit-events').expect(403);
+  });
+
+  it('owners update the company settings', async () => {
+    const res = await owner.client.patch('/api/company', { name: 'Renamed Turf', timeZone: 'America/Chicago', measurementSystem: 'metric' }).expect(200);
+    expect(res.body.data).toMatchObject({ name: 'Renamed Turf', timeZone: 'America/Chicago', measurementSystem: 'metric', currency: 'USD' });
+    const bad = await owner.client.patch('/api/company', { timeZone: 'Mars/Olympus' }).expect(400);
+    expect(bad.body.errors[0].path).toBe('timeZone');
+  });
+});
