@@ -1,8 +1,8 @@
 /** Endpoints whose names are not obvious from their resource, kept in one place. */
 export const authPaths = {
-  signIn: '/auth/sign-in',
-  signUp: '/auth/sign-up',
-  signOut: '/auth/sign-out',
+  signIn: '/auth/login',
+  signUp: '/auth/signup',
+  signOut: '/auth/logout',
   passwordReset: '/auth/password-reset',
   passwordResetComplete: (token: string) => `/auth/password-reset/${encodeURIComponent(token)}`,
 } as const;

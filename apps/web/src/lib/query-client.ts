@@ -13,3 +13,9 @@ export const queryClient = new QueryClient({
     mutations: { retry: false },
   },
 });
+
+/**
+ * The key of `GET /api/me`. It lives here rather than in the session feature because signing
+ * in, signing up and accepting an invitation all answer with the new session and seed it.
+ */
+export const sessionMeKey = ['session', 'me'] as const;

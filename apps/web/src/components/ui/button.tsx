@@ -1,13 +1,14 @@
 import type { ButtonHTMLAttributes } from 'react';
 import { cn } from './cn';
 
-export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'quiet';
+export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'quiet' | 'quietDanger';
 
 const variants: Record<ButtonVariant, string> = {
   primary: 'bg-moss-700 text-white hover:bg-moss-800 border border-moss-800',
   secondary: 'bg-white text-moss-800 border border-line-strong hover:bg-sand-100',
   danger: 'bg-brick-700 text-white hover:bg-brick-600 border border-brick-700',
   quiet: 'bg-transparent text-moss-800 border border-transparent hover:bg-sand-100',
+  quietDanger: 'bg-transparent text-brick-700 border border-transparent hover:bg-brick-50',
 };
 
 /** Class names of a button, for links that should look like one. */

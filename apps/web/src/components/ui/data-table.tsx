@@ -16,6 +16,8 @@ declare module '@tanstack/react-table' {
   interface ColumnMeta<TData extends RowData, TValue> {
     /** Right-aligned with tabular figures, so digits line up down the column. */
     isNumeric?: boolean;
+    /** Left out on phone widths, where only the columns that identify a row fit. */
+    isHiddenOnPhone?: boolean;
   }
 }
 
@@ -84,7 +86,11 @@ export function DataTable<T>(props: DataTableProps<T>) {
                       key={header.id}
                       scope="col"
                       aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
-                      className={cn('border-b border-line px-4 py-2 font-semibold whitespace-nowrap', isNumeric && 'text-right')}
+                      className={cn(
+                        'border-b border-line px-4 py-2 font-semibold whitespace-nowrap',
+                        isNumeric && 'text-right',
+                        header.column.columnDef.meta?.isHiddenOnPhone && 'hidden sm:table-cell',
+                      )}
                     >
                       {canSort ? (
                         <button
@@ -112,7 +118,11 @@ export function DataTable<T>(props: DataTableProps<T>) {
                 {row.getVisibleCells().map((cell) => (
                   <td
                     key={cell.id}
-                    className={cn('px-4 py-3 align-top', cell.column.columnDef.meta?.isNumeric && 'text-right tabular-nums')}
+                    className={cn(
+                      'px-4 py-3 align-top',
+                      cell.column.columnDef.meta?.isNumeric && 'text-right tabular-nums',
+                      cell.column.columnDef.meta?.isHiddenOnPhone && 'hidden sm:table-cell',
+                    )}
                   >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>

@@ -35,6 +35,7 @@ export function customerColumns(timeZone: string) {
     column.accessor('email', {
       header: 'E-mail',
       enableSorting: false,
+      meta: { isHiddenOnPhone: true },
       cell: (info) => info.getValue() ?? dash,
     }),
     column.accessor('siteCount', {
@@ -46,7 +47,7 @@ export function customerColumns(timeZone: string) {
     column.accessor('createdAt', {
       id: 'createdAt',
       header: 'Added',
-      meta: { isNumeric: true },
+      meta: { isNumeric: true, isHiddenOnPhone: true },
       cell: (info) => <span className="whitespace-nowrap">{formatDate(info.getValue(), timeZone)}</span>,
     }),
   ];

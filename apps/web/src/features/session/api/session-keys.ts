@@ -1,5 +1,7 @@
+import { sessionMeKey } from '../../../lib/query-client';
+
 /** Query keys of the signed-in session. */
 export const sessionKeys = {
   all: ['session'] as const,
-  me: () => [...sessionKeys.all, 'me'] as const,
+  me: () => sessionMeKey,
 };

@@ -61,7 +61,7 @@ export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean
         {canWrite ? (
           <div className="flex gap-2 print:hidden">
             <Button variant="secondary" onClick={() => setIsEditing(true)} aria-label={`Edit site ${title}`}>Edit</Button>
-            <Button variant="quiet" className="text-brick-700" onClick={() => setIsConfirming(true)} aria-label={`Delete site ${title}`}>Delete</Button>
+            <Button variant="quietDanger" onClick={() => setIsConfirming(true)} aria-label={`Delete site ${title}`}>Delete</Button>
           </div>
         ) : null}
       </div>

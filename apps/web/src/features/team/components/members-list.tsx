@@ -53,7 +53,7 @@ export function MembersList() {
                   ))}
                 </select>
                 {isSelf ? null : (
-                  <Button variant="quiet" className="text-brick-700" onClick={() => setLeaving(member)} aria-label={`Remove ${member.name}`}>
+                  <Button variant="quietDanger" onClick={() => setLeaving(member)} aria-label={`Remove ${member.name}`}>
                     Remove
                   </Button>
                 )}
