@@ -24,7 +24,7 @@ describe('members', () => {
     expect(row?.role).toBe('owner');
 
     const office = await addMember(app, owner.client, 'office');
-    const officeRow = (await owner.client.get('/api/members').expect(200)).body.data.find((m: Member) => m.userId === office.me.user.id) as Member;
+    const officeRow = ((await owner.client.get('/api/members').expect(200)).body.data as Member[]).find((m) => m.userId === office.me.user.id)!;
     const promoted = await owner.client.patch(`/api/members/${officeRow.id}`, { role: 'owner' }).expect(200);
     expect(promoted.body.data.role).toBe('owner');
     await owner.client.patch(`/api/members/${self.id}`, { role: 'office' }).expect(200);
@@ -35,7 +35,7 @@ describe('members', () => {
     const owner = await signUpCompany(app);
     const office = await addMember(app, owner.client, 'office');
     await office.client.get('/api/customers').expect(200);
-    const member = (await owner.client.get('/api/members').expect(200)).body.data.find((m: Member) => m.userId === office.me.user.id) as Member;
+    const member = ((await owner.client.get('/api/members').expect(200)).body.data as Member[]).find((m) => m.userId === office.me.user.id)!;
     await owner.client.del(`/api/members/${member.id}`).expect(204);
     await office.client.get('/api/customers').expect(401);
     const audit = await owner.client.get('/api/audit-events').expect(200);
@@ -47,7 +47,7 @@ describe('members', () => {
     const owner = await signUpCompany(app);
     const office = await addMember(app, owner.client, 'office');
     await office.client.post('/api/customers', { name: 'Before demotion' }).expect(201);
-    const member = (await owner.client.get('/api/members').expect(200)).body.data.find((m: Member) => m.userId === office.me.user.id) as Member;
+    const member = ((await owner.client.get('/api/members').expect(200)).body.data as Member[]).find((m) => m.userId === office.me.user.id)!;
     await owner.client.patch(`/api/members/${member.id}`, { role: 'bookkeeper' }).expect(200);
     await office.client.post('/api/customers', { name: 'After demotion' }).expect(403);
     const bad = await owner.client.patch(`/api/members/${member.id}`, { role: 'admiral' }).expect(400);

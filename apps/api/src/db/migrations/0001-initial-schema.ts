@@ -4,9 +4,10 @@ import { DataTypes } from 'sequelize';
 import type { Migration } from './types.js';
 
 const id = { type: DataTypes.UUID, primaryKey: true, allowNull: false };
+// Millisecond precision so "newest first" lists order events made within one second.
 const timestamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false },
-  updated_at: { type: DataTypes.DATE, allowNull: false },
+  created_at: { type: DataTypes.DATE(3), allowNull: false },
+  updated_at: { type: DataTypes.DATE(3), allowNull: false },
 };
 const companyRef = {
   type: DataTypes.UUID,
@@ -72,7 +73,7 @@ export const initialSchema: Migration = {
       token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
       expires_at: { type: DataTypes.DATE, allowNull: false },
       used_at: { type: DataTypes.DATE, allowNull: true },
-      created_at: { type: DataTypes.DATE, allowNull: false },
+      created_at: { type: DataTypes.DATE(3), allowNull: false },
     });
 
     await qi.createTable('customers', {
@@ -120,7 +121,7 @@ export const initialSchema: Migration = {
       entity: { type: DataTypes.STRING(40), allowNull: false },
       entity_id: { type: DataTypes.UUID, allowNull: true },
       data: { type: DataTypes.JSON, allowNull: true },
-      created_at: { type: DataTypes.DATE, allowNull: false },
+      created_at: { type: DataTypes.DATE(3), allowNull: false },
     });
     await qi.addIndex('audit_events', ['company_id', 'created_at'], { name: 'audit_events_company_created' });
 

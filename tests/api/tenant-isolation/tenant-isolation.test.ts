@@ -1,0 +1,200 @@
+// Walks every API route: company B's owner must never read, change or delete company A's rows
+// (always 404, never A's data), and no list may include A's rows. The table below must name
+// every route the app registers, so a new route fails this test until its isolation is proved.
+import { beforeAll, describe, expect, it } from 'vitest';
+import { selectRows } from '@seamwright/api';
+import { testApp } from '../../fixtures/app.js';
+import type { Client } from '../../fixtures/client.js';
+import { addMember, createCustomer, createSite, signUpCompany, uniqueEmail } from '../../fixtures/factories.js';
+import type { SignedIn } from '../../fixtures/factories.js';
+
+interface World {
+  a: SignedIn;
+  b: SignedIn;
+  aCustomerId: string;
+  aSiteId: string;
+  aInvitationId: string;
+  aOwnerMemberId: string;
+  aOfficeMemberId: string;
+}
+
+type Probe = { kind: 'public'; why: string } | { kind: 'tenant'; run: (b: Client, w: World) => Promise<void> };
+
+const notFound = async (pending: PromiseLike<{ status: number; body: { code?: string } }>) => {
+  const res = await pending;
+  expect(res.status).toBe(404);
+  expect(res.body.code).toBe('NOT_FOUND');
+};
+
+const idsOf = (body: unknown) => (body as { data: { id: string }[] }).data.map((row) => row.id);
+
+const probes: Record<string, Probe> = {
+  'get /api/health': { kind: 'public', why: 'no company data' },
+  'get /api/auth/csrf': { kind: 'public', why: 'issues a CSRF token only' },
+  'post /api/auth/signup': { kind: 'public', why: 'creates a new company' },
+  'post /api/auth/login': { kind: 'public', why: 'credentials, no company data' },
+  'post /api/auth/logout': { kind: 'public', why: 'ends the caller\'s own session' },
+  'post /api/auth/password-reset': { kind: 'public', why: 'always 202, no data' },
+  'post /api/auth/password-reset/:token': { kind: 'public', why: 'the e-mailed token is the credential' },
+  'get /api/invitations/:token': { kind: 'public', why: 'the e-mailed token is the credential' },
+  'post /api/invitations/:token/accept': { kind: 'public', why: 'the e-mailed token is the credential' },
+
+  'get /api/me': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/me').expect(200);
+      expect(res.body.data.company.id).toBe(w.b.me.company.id);
+      expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
+    },
+  },
+  'post /api/me/company': { kind: 'tenant', run: (b, w) => notFound(b.post('/api/me/company', { companyId: w.a.me.company.id })) },
+  'get /api/company': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      expect((await b.get('/api/company').expect(200)).body.data.id).toBe(w.b.me.company.id);
+    },
+  },
+  'patch /api/company': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.patch('/api/company', { name: 'B renamed', id: w.a.me.company.id, companyId: w.a.me.company.id }).expect(200);
+      expect(res.body.data.id).toBe(w.b.me.company.id);
+    },
+  },
+  'get /api/members': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const ids = idsOf((await b.get('/api/members').expect(200)).body);
+      expect(ids).toHaveLength(1);
+      expect(ids).not.toContain(w.aOwnerMemberId);
+    },
+  },
+  'patch /api/members/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/members/${w.aOfficeMemberId}`, { role: 'owner' })) },
+  'delete /api/members/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/members/${w.aOfficeMemberId}`)) },
+  'get /api/invitations': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      expect(idsOf((await b.get('/api/invitations').expect(200)).body)).not.toContain(w.aInvitationId);
+    },
+  },
+  'post /api/invitations': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      await b.post('/api/invitations', { email: uniqueEmail('b-invite'), role: 'office', companyId: w.a.me.company.id }).expect(201);
+    },
+  },
+  'delete /api/invitations/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/invitations/${w.aInvitationId}`)) },
+  'get /api/customers': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/customers?status=all&pageSize=100').expect(200);
+      expect(idsOf(res.body)).not.toContain(w.aCustomerId);
+      expect(res.body.meta.total).toBe(1);
+      const search = await b.get('/api/customers?status=all&q=Alpha').expect(200);
+      expect(search.body.data).toEqual([]);
+    },
+  },
+  'post /api/customers': {
+    kind: 'tenant',
+    run: async (b) => {
+      await b.post('/api/customers', { name: 'B extra' }).expect(201);
+    },
+  },
+  'get /api/customers/:id': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}`)) },
+  'patch /api/customers/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/customers/${w.aCustomerId}`, { name: 'Hijacked', archived: true })) },
+  'delete /api/customers/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/customers/${w.aCustomerId}`)) },
+  'get /api/customers/:id/sites': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}/sites`)) },
+  'post /api/customers/:id/sites': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/customers/${w.aCustomerId}/sites`, { addressLine1: '1 Intruder Way', city: 'Elsewhere' })),
+  },
+  'get /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/sites/${w.aSiteId}`)) },
+  'patch /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/sites/${w.aSiteId}`, { hazards: 'Hijacked' })) },
+  'delete /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/sites/${w.aSiteId}`)) },
+  'get /api/audit-events': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/audit-events?pageSize=100').expect(200);
+      expect(JSON.stringify(res.body)).not.toContain(w.aCustomerId);
+      expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
+    },
+  },
+};
+
+async function snapshotOfA(w: World) {
+  const { sequelize } = testApp();
+  const company = w.a.me.company.id;
+  const q = (sql: string) => selectRows(sequelize, sql, [company]);
+  return {
+    company: await q('SELECT name, time_zone FROM companies WHERE id = ?'),
+    members: await q('SELECT id, user_id, role FROM memberships WHERE company_id = ? ORDER BY id'),
+    invitations: await q('SELECT id, email, accepted_at FROM invitations WHERE company_id = ? ORDER BY id'),
+    customers: await q('SELECT id, name, archived_at, updated_at FROM customers WHERE company_id = ? ORDER BY id'),
+    sites: await q('SELECT id, hazards, updated_at FROM sites WHERE company_id = ? ORDER BY id'),
+  };
+}
+
+describe('tenant isolation', () => {
+  let world: World;
+
+  beforeAll(async () => {
+    const { app } = testApp();
+    const a = await signUpCompany(app, 'Alpha Turf Isolation');
+    const b = await signUpCompany(app, 'Bravo Turf Isolation');
+    const office = await addMember(app, a.client, 'office');
+    const aCustomer = await createCustomer(a.client, { name: 'Alpha Customer', email: 'alpha@example.test' });
+    const aSite = await createSite(a.client, aCustomer.id, { hazards: 'Alpha hazard' });
+    const invitation = await a.client.post('/api/invitations', { email: uniqueEmail('alpha-pending'), role: 'bookkeeper' }).expect(201);
+    const members = (await a.client.get('/api/members').expect(200)).body.data as { id: string; userId: string }[];
+    await createCustomer(b.client, { name: 'Bravo Customer' });
+    world = {
+      a,
+      b,
+      aCustomerId: aCustomer.id,
+      aSiteId: aSite.id,
+      aInvitationId: invitation.body.data.id,
+      aOwnerMemberId: members.find((m) => m.userId === a.me.user.id)!.id,
+      aOfficeMemberId: members.find((m) => m.userId === office.me.user.id)!.id,
+    };
+  });
+
+  it('has an isolation probe for every registered route, and no probe for a route that is gone', () => {
+    const registered = (testApp().app.locals.apiRoutes).map((r) => `${r.method} ${r.path}`);
+    expect(registered.length).toBeGreaterThan(20);
+    expect(registered.filter((key) => !(key in probes))).toEqual([]);
+    expect(Object.keys(probes).filter((key) => !registered.includes(key))).toEqual([]);
+  });
+
+  it('routes marked public in the table are public in the app, and every other route needs a member', () => {
+    for (const route of testApp().app.locals.apiRoutes) {
+      const probe = probes[`${route.method} ${route.path}`];
+      expect({ route: `${route.method} ${route.path}`, access: route.access }).toEqual({
+        route: `${route.method} ${route.path}`,
+        access: probe?.kind === 'public' ? 'public' : 'tenant',
+      });
+    }
+  });
+
+  it("gives company B 404 (never A's data) on every tenant route, and leaves A's rows untouched", async () => {
+    const before = await snapshotOfA(world);
+    for (const [key, probe] of Object.entries(probes)) {
+      if (probe.kind !== 'tenant') continue;
+      try {
+        await probe.run(world.b.client, world);
+      } catch (error) {
+        throw new Error(`${key}: ${error instanceof Error ? error.message : String(error)}`);
+      }
+    }
+    expect(await snapshotOfA(world)).toEqual(before);
+    // A still sees its own data.
+    await world.a.client.get(`/api/customers/${world.aCustomerId}`).expect(200);
+    await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
+  });
+
+  it('ignores a companyId sent in the body: rows land in the caller\'s own company', async () => {
+    const { sequelize } = testApp();
+    const res = await world.b.client.post('/api/customers', { name: 'Smuggled', companyId: world.a.me.company.id }).expect(201);
+    const [row] = await selectRows(sequelize, 'SELECT company_id FROM customers WHERE id = ?', [res.body.data.id]);
+    expect(row?.company_id).toBe(world.b.me.company.id);
+  });
+});
