@@ -8,7 +8,8 @@ import { LayoutInputError, parseLayoutRequest, planLayout } from '../index.js';
 
 async function readStdin(): Promise<string> {
   const chunks: Buffer[] = [];
-  for await (const chunk of process.stdin) chunks.push(typeof chunk === 'string' ? Buffer.from(chunk) : (chunk as Buffer));
+  for await (const chunk of process.stdin)
+    chunks.push(typeof chunk === 'string' ? Buffer.from(chunk) : (chunk as Buffer));
   return Buffer.concat(chunks).toString('utf8');
 }
 
@@ -23,7 +24,9 @@ async function main(): Promise<void> {
   try {
     json = JSON.parse(text);
   } catch (error) {
-    fail(`invalid JSON on standard input: ${error instanceof Error ? error.message : String(error)}`);
+    fail(
+      `invalid JSON on standard input: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
   try {
     const plan = planLayout(parseLayoutRequest(json));

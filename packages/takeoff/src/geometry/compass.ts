@@ -1,4 +1,13 @@
-const WORDS = ['east', 'north-east', 'north', 'north-west', 'west', 'south-west', 'south', 'south-east'];
+const WORDS = [
+  'east',
+  'north-east',
+  'north',
+  'north-west',
+  'west',
+  'south-west',
+  'south',
+  'south-east',
+];
 const LETTERS = ['E', 'NE', 'N', 'NW', 'W', 'SW', 'S', 'SE'];
 
 function octant(angleDeg: number): number {

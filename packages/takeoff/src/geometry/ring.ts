@@ -56,12 +56,18 @@ export function normalizeRing(points: readonly Point[]): Point[] {
   }
   const first = result[0];
   const last = result[result.length - 1];
-  if (result.length > 1 && first && last && first[0] === last[0] && first[1] === last[1]) result.pop();
+  if (result.length > 1 && first && last && first[0] === last[0] && first[1] === last[1])
+    result.pop();
   return result;
 }
 
 /** Axis-aligned bounding box of some rings. */
-export function boundingBox(rings: readonly Ring[]): { minX: number; minY: number; maxX: number; maxY: number } {
+export function boundingBox(rings: readonly Ring[]): {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+} {
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;

@@ -65,7 +65,10 @@ function capsuleInterval(p: Point, q: Point, capsule: Capsule): Interval | null 
   }
   if (pieces.length === 0) return null;
   // A capsule is convex, so its pieces along a line join into one interval.
-  const hull: Interval = [Math.min(...pieces.map((x) => x[0])), Math.max(...pieces.map((x) => x[1]))];
+  const hull: Interval = [
+    Math.min(...pieces.map((x) => x[0])),
+    Math.max(...pieces.map((x) => x[1])),
+  ];
   return intersect(hull, [0, 1]);
 }
 

@@ -71,17 +71,25 @@ export function findRingProblem(outer: Ring, holes: readonly Ring[]): RingProble
   for (const [i, hole] of holes.entries()) {
     const path = `area.holes[${i}]`;
     const contact = findContactBetween(outer, hole);
-    if (contact) return { path, detail: `hole touches or crosses the outer ring at ${formatPoint(contact)}` };
-    if (!isPointInRing(hole[0] as Point, outer)) return { path, detail: 'hole lies outside the outer ring' };
+    if (contact)
+      return { path, detail: `hole touches or crosses the outer ring at ${formatPoint(contact)}` };
+    if (!isPointInRing(hole[0] as Point, outer))
+      return { path, detail: 'hole lies outside the outer ring' };
   }
   for (const [i, hole] of holes.entries()) {
     for (let j = i + 1; j < holes.length; j += 1) {
       const other = holes[j] as Ring;
       const contact = findContactBetween(hole, other);
       const overlaps =
-        contact ?? (isPointInRing(other[0] as Point, hole) || isPointInRing(hole[0] as Point, other) ? other[0] : null);
+        contact ??
+        (isPointInRing(other[0] as Point, hole) || isPointInRing(hole[0] as Point, other)
+          ? other[0]
+          : null);
       if (overlaps) {
-        return { path: `area.holes[${j}]`, detail: `hole overlaps area.holes[${i}] at ${formatPoint(overlaps)}` };
+        return {
+          path: `area.holes[${j}]`,
+          detail: `hole overlaps area.holes[${i}] at ${formatPoint(overlaps)}`,
+        };
       }
     }
   }

@@ -2,12 +2,14 @@ import * as polygonClippingModule from 'polygon-clipping';
 import type { MultiPolygon, Polygon } from 'polygon-clipping';
 import { SLIVER_FT } from './band-scan.js';
 import type { BandPart } from './band-scan.js';
+import { framePairs } from './frame-polygon.js';
 import type { FramePolygon } from './frame-polygon.js';
 
 // polygon-clipping ships its functions as one default export object, while its type file
 // declares named exports; take whichever this loader (tsx, vitest) hands us.
 const polygonClipping =
-  (polygonClippingModule as unknown as { default?: typeof polygonClippingModule }).default ?? polygonClippingModule;
+  (polygonClippingModule as unknown as { default?: typeof polygonClippingModule }).default ??
+  polygonClippingModule;
 
 /** A part from polygon clipping: its extents and its outline (for butt-seam lines). */
 export interface ClippedPart extends BandPart {
@@ -48,16 +50,21 @@ function partOf(band: number, piece: Polygon): ClippedPart {
  */
 export function clipParts(polygon: FramePolygon, lines: readonly number[]): ClippedPart[] {
   const parts: ClippedPart[] = [];
+  const area = framePairs(polygon);
   for (const parity of [0, 1]) {
     const bands: number[] = [];
     for (let band = parity; band + 1 < lines.length; band += 2) bands.push(band);
     if (bands.length === 0) continue;
-    const strips: MultiPolygon = bands.map((band) => bandRectangle(polygon, lines[band] as number, lines[band + 1] as number));
-    const clipped = polygonClipping.intersection(polygon.rings, strips);
+    const strips: MultiPolygon = bands.map((band) =>
+      bandRectangle(polygon, lines[band] as number, lines[band + 1] as number),
+    );
+    const clipped = polygonClipping.intersection(area, strips);
     for (const piece of clipped) {
       const centre = partOf(0, piece);
       const middle = (centre.uMin + centre.uMax) / 2;
-      const band = bands.find((b) => (lines[b] as number) <= middle && middle <= (lines[b + 1] as number)) ?? 0;
+      const band =
+        bands.find((b) => (lines[b] as number) <= middle && middle <= (lines[b + 1] as number)) ??
+        0;
       parts.push({ ...centre, band });
     }
   }

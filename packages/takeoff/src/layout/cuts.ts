@@ -48,7 +48,10 @@ export function unitsFor(lengthFt: number, rules: CutRules): number {
  * the longest piece become several cuts end to end, joined by butt seams. Full-length cuts
  * come first and the remainder last, so most pieces are whole roll lengths.
  */
-export function partsToCuts(parts: readonly BandPart[], rules: CutRules): { cuts: FrameCut[]; buttLines: ButtLine[] } {
+export function partsToCuts(
+  parts: readonly BandPart[],
+  rules: CutRules,
+): { cuts: FrameCut[]; buttLines: ButtLine[] } {
   const cuts: FrameCut[] = [];
   const buttLines: ButtLine[] = [];
   parts.forEach((part, index) => {
@@ -58,7 +61,8 @@ export function partsToCuts(parts: readonly BandPart[], rules: CutRules): { cuts
     let vStart = part.vMin - rules.trimFt;
     while (done < total) {
       const units = Math.min(rules.maxUnits, total - done);
-      if (done > 0) buttLines.push({ part: index, v: vStart, uMin: part.uMin, uMax: part.uMin + acrossFt });
+      if (done > 0)
+        buttLines.push({ part: index, v: vStart, uMin: part.uMin, uMax: part.uMin + acrossFt });
       cuts.push({ band: part.band, part: index, uMin: part.uMin, acrossFt, vStart, units });
       done += units;
       vStart += units * rules.stepFt;

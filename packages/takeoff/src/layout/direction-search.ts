@@ -1,18 +1,19 @@
 import type { Capsule } from '../geometry/traffic.js';
 import { edgeLengths } from '../geometry/ring.js';
 import { compareCandidates } from './evaluate-offset.js';
-import type { AngleContext, LayoutCandidate } from './evaluate-offset.js';
+import type { AngleContext } from './evaluate-offset.js';
+import type { OffsetScore, SearchBound } from './score-offset.js';
 import { searchOffsets } from './offset-search.js';
 import { angleContext, finishAngle } from './plan-at-angle.js';
 import type { AngleLayout } from './plan-at-angle.js';
 import type { LayoutRequest } from './types.js';
 
 /** Longest edges whose directions are tried besides the whole degrees. */
-const EDGE_DIRECTIONS = 24;
+const EDGE_DIRECTIONS = 16;
 /** Directions around which finer angles are tried, and how many are rebuilt at the end. */
 const REFINE_DIRECTIONS = 3;
 const FINAL_DIRECTIONS = 3;
-const REFINE_STEPS_DEG = [-0.5, -0.4, -0.3, -0.2, -0.1, -0.05, 0.05, 0.1, 0.2, 0.3, 0.4, 0.5];
+const REFINE_STEPS_DEG = [-0.5, -0.25, -0.1, 0.1, 0.25, 0.5];
 
 /** Rounds a direction to 1/10000 degree in [0, 180), so a reported angle replays exactly. */
 export function roundDirection(angleDeg: number): number {
@@ -40,7 +41,7 @@ function edgeDirections(request: LayoutRequest): number[] {
 interface Screened {
   readonly angle: number;
   readonly context: AngleContext;
-  readonly layouts: LayoutCandidate[];
+  readonly layouts: OffsetScore[];
 }
 
 function screenAll(
@@ -48,13 +49,14 @@ function screenAll(
   angles: readonly number[],
   walkways: readonly (readonly Capsule[])[],
   seen: Set<number>,
+  bound: SearchBound,
 ): Screened[] {
   const result: Screened[] = [];
   for (const angle of angles) {
     if (seen.has(angle)) continue;
     seen.add(angle);
     const context = angleContext(request, angle, walkways);
-    result.push({ angle, context, layouts: searchOffsets(context) });
+    result.push({ angle, context, layouts: searchOffsets(context, bound) });
   }
   return result;
 }
@@ -62,28 +64,60 @@ function screenAll(
 function rank(screened: Screened[]): Screened[] {
   return screened
     .map((entry, order) => ({ entry, order }))
-    .sort((a, b) => compareCandidates(a.entry.layouts[0]!, b.entry.layouts[0]!) || a.order - b.order)
+    .sort(
+      (a, b) => compareCandidates(a.entry.layouts[0]!, b.entry.layouts[0]!) || a.order - b.order,
+    )
     .map(({ entry }) => entry);
+}
+
+/** The winning direction's layout and the screen figures of other directions worth showing. */
+export interface DirectionSearch {
+  readonly winner: AngleLayout;
+  readonly others: readonly { readonly angle: number; readonly score: OffsetScore }[];
+}
+
+function angleGap(a: number, b: number): number {
+  const gap = Math.abs(a - b) % 180;
+  return Math.min(gap, 180 - gap);
 }
 
 /**
  * Free direction: every whole degree 0–179, the directions of the longest edges, then finer
- * angles around the best few — each screened over strip offsets with the fast scan. The best
- * few directions are rebuilt with polygon clipping and the best rebuilt layout wins. Ties go
- * to the direction tried first (whole degrees in order, then edge directions, then refinements).
- * Returns the winner first, then the other rebuilt directions.
+ * angles around the best few — each screened over strip offsets with the fast scan (a shared
+ * bound lets hopeless offsets skip packing). The best direction is rebuilt with polygon
+ * clipping; should its figures differ from the screen, the next ones are rebuilt as well and
+ * the best rebuilt layout wins. Ties go to the direction tried first (whole degrees in order,
+ * then edge directions, then refinements).
  */
-export function searchDirections(request: LayoutRequest, walkways: readonly (readonly Capsule[])[]): AngleLayout[] {
+export function searchDirections(
+  request: LayoutRequest,
+  walkways: readonly (readonly Capsule[])[],
+): DirectionSearch {
   const seen = new Set<number>();
+  const bound: SearchBound = { units: Infinity };
   const wholeDegrees = Array.from({ length: 180 }, (_, degree) => degree);
-  let screened = rank(screenAll(request, [...wholeDegrees, ...edgeDirections(request)], walkways, seen));
+  let screened = rank(
+    screenAll(request, [...wholeDegrees, ...edgeDirections(request)], walkways, seen, bound),
+  );
   const finer = screened
     .slice(0, REFINE_DIRECTIONS)
     .flatMap((entry) => REFINE_STEPS_DEG.map((delta) => roundDirection(entry.angle + delta)));
-  screened = rank([...screened, ...screenAll(request, finer, walkways, seen)]);
-  const finals = screened.slice(0, FINAL_DIRECTIONS).map((entry) => finishAngle(entry.context, entry.layouts));
-  return finals
-    .map((layout, order) => ({ layout, order }))
-    .sort((a, b) => compareCandidates(a.layout.candidate, b.layout.candidate) || a.order - b.order)
-    .map(({ layout }) => layout);
+  screened = rank([...screened, ...screenAll(request, finer, walkways, seen, bound)]);
+  let winner: AngleLayout | null = null;
+  for (const entry of screened.slice(0, FINAL_DIRECTIONS)) {
+    const layout = finishAngle(entry.context, entry.layouts);
+    if (!winner || compareCandidates(layout.candidate, winner.candidate) < 0) winner = layout;
+    if (compareCandidates(layout.candidate, entry.layouts[0]!) === 0) break;
+  }
+  if (!winner) throw new Error('no direction was evaluated');
+  const chosen = winner.context.polygon.frame.angleDeg;
+  const across = (Math.round(chosen) + 90) % 180;
+  const others = [
+    screened.find((entry) => angleGap(entry.angle, chosen) >= 10),
+    screened.find((entry) => entry.angle === across),
+  ]
+    .filter((entry): entry is Screened => entry !== undefined)
+    .filter((entry, i, list) => list.indexOf(entry) === i)
+    .map((entry) => ({ angle: entry.angle, score: entry.layouts[0]! }));
+  return { winner, others };
 }

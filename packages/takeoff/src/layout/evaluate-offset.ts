@@ -1,7 +1,6 @@
 import { fromFrame, snap } from '../geometry/grain-frame.js';
 import { lengthInsideCapsules } from '../geometry/traffic.js';
 import type { Capsule } from '../geometry/traffic.js';
-import { scanBands } from './band-scan.js';
 import type { BandPart, SideSeamSpan } from './band-scan.js';
 import { partsToCuts } from './cuts.js';
 import type { ButtLine, CutRules, FrameCut } from './cuts.js';
@@ -57,7 +56,13 @@ function trafficFeet(context: AngleContext, seams: readonly SideSeamSpan[]): num
   const { frame } = context.polygon;
   const capsules = context.walkways.flat();
   return seams.reduce(
-    (sum, seam) => sum + lengthInsideCapsules(fromFrame(frame, seam.u, seam.vFrom), fromFrame(frame, seam.u, seam.vTo), capsules),
+    (sum, seam) =>
+      sum +
+      lengthInsideCapsules(
+        fromFrame(frame, seam.u, seam.vFrom),
+        fromFrame(frame, seam.u, seam.vTo),
+        capsules,
+      ),
     0,
   );
 }
@@ -73,7 +78,9 @@ export function evaluateParts(
   const { cuts, buttLines } = partsToCuts(parts, context.rules);
   const simpleUnits = cuts.reduce((sum, cut) => sum + cut.units, 0);
   const items = cuts.map((cut) => ({ widthFt: cut.acrossFt, units: cut.units }));
-  const packed = canShare(items, context.rules.widthFt) ? packCuts(items, context.rules.widthFt) : null;
+  const packed = canShare(items, context.rules.widthFt)
+    ? packCuts(items, context.rules.widthFt)
+    : null;
   const packing = packed && packed.totalUnits < simpleUnits ? packed : null;
   return {
     offset,
@@ -90,21 +97,22 @@ export function evaluateParts(
   };
 }
 
-/** Fast evaluation of one offset with the band scan. */
-export function evaluateOffset(context: AngleContext, offset: number): LayoutCandidate {
-  const lines = boundaryLines(context.polygon, context.rules.widthFt, offset);
-  const scan = scanBands(context.polygon, lines);
-  return evaluateParts(context, offset, lines, scan.parts, scan.sideSeams);
-}
-
 const TRAFFIC_TOLERANCE_FT = 1e-6;
+
+/** The figures layouts are ranked by. */
+export interface RankFigures {
+  readonly orderedUnits: number;
+  readonly trafficSeamFt: number;
+  readonly seamCount: number;
+}
 
 /**
  * Order of preference: less turf bought, then fewer seam feet inside walkways, then fewer
  * seams. Returns < 0 when `a` is better, 0 on a tie (callers keep the earlier one).
  */
-export function compareCandidates(a: LayoutCandidate, b: LayoutCandidate): number {
+export function compareCandidates(a: RankFigures, b: RankFigures): number {
   if (a.orderedUnits !== b.orderedUnits) return a.orderedUnits - b.orderedUnits;
-  if (Math.abs(a.trafficSeamFt - b.trafficSeamFt) > TRAFFIC_TOLERANCE_FT) return a.trafficSeamFt - b.trafficSeamFt;
+  if (Math.abs(a.trafficSeamFt - b.trafficSeamFt) > TRAFFIC_TOLERANCE_FT)
+    return a.trafficSeamFt - b.trafficSeamFt;
   return a.seamCount - b.seamCount;
 }

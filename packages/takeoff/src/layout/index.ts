@@ -25,3 +25,5 @@ export type {
   TrafficPath,
   TrafficSeamCrossing,
 } from './types.js';
+export { sampleYards, beanYard, irregularYard, seededRandom } from './sample-yards.js';
+export type { SampleYard } from './sample-yards.js';

@@ -1,12 +1,14 @@
-import { compareCandidates, evaluateOffset } from './evaluate-offset.js';
-import type { AngleContext, LayoutCandidate } from './evaluate-offset.js';
+import type { AngleContext } from './evaluate-offset.js';
+import { compareCandidates } from './evaluate-offset.js';
+import { scoreOffset } from './score-offset.js';
+import type { OffsetScore, SearchBound } from './score-offset.js';
 
 /** Uniform offsets tried per direction, on top of the vertex-aligned ones. */
-const GRID_STEPS = 16;
-/** Halvings of the pattern search around the best offsets. */
-const REFINE_ROUNDS = 5;
-/** How many of the best offsets are refined. */
-const REFINE_SEEDS = 2;
+const GRID_STEPS = 12;
+/** Most vertex-aligned offsets tried per direction (the sharpest extremes are kept). */
+const MAX_EXTREMES = 24;
+/** Halvings of the pattern search around the best offset. */
+const REFINE_ROUNDS = 4;
 
 function residueKey(offset: number, origin: number, widthFt: number): number {
   const residue = (((offset - origin) % widthFt) + widthFt) % widthFt;
@@ -15,23 +17,14 @@ function residueKey(offset: number, origin: number, widthFt: number): number {
 }
 
 /**
- * Offsets worth trying: through every vertex that is a local extreme across the grain (where
- * parts appear, vanish or a straight yard edge runs with the grain, so a boundary there leaves
- * no sliver), then a uniform grid over one roll width. Deduplicated modulo the width, in a
- * fixed order so ties resolve the same way every time.
+ * Vertices that are local extremes across the grain: where parts appear or vanish, or where
+ * a yard edge runs with the grain. A boundary through one leaves no sliver there. Ranked by
+ * how sharply the ring turns back (the across-grain travel of the two edges), sharpest
+ * first, so noise wiggles on a long curve do not crowd out real corners.
  */
-export function offsetCandidates(context: AngleContext): number[] {
-  const { u, ringStart, uMin } = context.polygon;
-  const widthFt = context.rules.widthFt;
-  const seen = new Set<number>();
-  const result: number[] = [];
-  const add = (offset: number): void => {
-    const key = residueKey(offset, uMin, widthFt);
-    if (seen.has(key)) return;
-    seen.add(key);
-    result.push(offset);
-  };
-  const extremes: number[] = [];
+function extremeOffsets(context: AngleContext): number[] {
+  const { u, ringStart } = context.polygon;
+  const found: { at: number; weight: number }[] = [];
   for (let r = 0; r + 1 < ringStart.length; r += 1) {
     const start = ringStart[r] as number;
     const count = (ringStart[r + 1] as number) - start;
@@ -39,39 +32,67 @@ export function offsetCandidates(context: AngleContext): number[] {
       const here = u[start + i] as number;
       const prev = u[start + ((i + count - 1) % count)] as number;
       const next = u[start + ((i + 1) % count)] as number;
-      if ((here <= prev && here <= next) || (here >= prev && here >= next)) extremes.push(here);
-    }
-  }
-  extremes.sort((a, b) => a - b).forEach(add);
-  for (let k = 0; k < GRID_STEPS; k += 1) add(uMin + (k * widthFt) / GRID_STEPS);
-  return result;
-}
-
-function sortBest(candidates: LayoutCandidate[]): LayoutCandidate[] {
-  return candidates
-    .map((candidate, order) => ({ candidate, order }))
-    .sort((a, b) => compareCandidates(a.candidate, b.candidate) || a.order - b.order)
-    .map(({ candidate }) => candidate);
-}
-
-/**
- * Tries every candidate offset with the fast scan, then refines around the best few with a
- * shrinking pattern search (the turf bought is a step function of the offset, so the
- * refinement looks for a better step nearby). Returns all evaluated layouts, best first.
- */
-export function searchOffsets(context: AngleContext): LayoutCandidate[] {
-  const evaluated = offsetCandidates(context).map((offset) => evaluateOffset(context, offset));
-  const seeds = sortBest(evaluated).slice(0, REFINE_SEEDS);
-  for (const seed of seeds) {
-    let best = seed;
-    let step = context.rules.widthFt / GRID_STEPS / 2;
-    for (let round = 0; round < REFINE_ROUNDS; round += 1, step /= 2) {
-      for (const offset of [best.offset - step, best.offset + step]) {
-        const candidate = evaluateOffset(context, offset);
-        evaluated.push(candidate);
-        if (compareCandidates(candidate, best) < 0) best = candidate;
+      if ((here <= prev && here <= next) || (here >= prev && here >= next)) {
+        const weight =
+          here === prev || here === next
+            ? Infinity
+            : Math.min(Math.abs(prev - here), Math.abs(next - here));
+        found.push({ at: here, weight });
       }
     }
   }
-  return sortBest(evaluated);
+  return found
+    .sort((a, b) => b.weight - a.weight || a.at - b.at)
+    .slice(0, MAX_EXTREMES)
+    .map((extreme) => extreme.at);
+}
+
+/**
+ * Offsets worth trying, deduplicated modulo the roll width and in a fixed order (so ties
+ * resolve the same way every time): vertex-aligned extremes, then a uniform grid.
+ */
+export function offsetCandidates(context: AngleContext): number[] {
+  const { uMin } = context.polygon;
+  const widthFt = context.rules.widthFt;
+  const seen: number[] = [];
+  const result: number[] = [];
+  const grid = Array.from({ length: GRID_STEPS }, (_, k) => uMin + (k * widthFt) / GRID_STEPS);
+  for (const offset of [...extremeOffsets(context), ...grid]) {
+    const key = residueKey(offset, uMin, widthFt);
+    if (seen.includes(key)) continue;
+    seen.push(key);
+    result.push(offset);
+  }
+  return result;
+}
+
+/** Sorts scores best first; ties keep their evaluation order. */
+export function sortBest<T extends OffsetScore>(scores: T[]): T[] {
+  return scores
+    .map((score, order) => ({ score, order }))
+    .sort((a, b) => compareCandidates(a.score, b.score) || a.order - b.order)
+    .map(({ score }) => score);
+}
+
+/**
+ * Scores every candidate offset with the fast scan, then refines around the best with a
+ * shrinking pattern search (the turf bought is a step function of the offset, so this
+ * looks for a better step nearby). Returns all scores, best first. `bound` carries the best
+ * amount seen so far (also across directions) so that hopeless offsets skip packing.
+ */
+export function searchOffsets(
+  context: AngleContext,
+  bound: SearchBound = { units: Infinity },
+): OffsetScore[] {
+  const scores = offsetCandidates(context).map((offset) => scoreOffset(context, offset, bound));
+  let best = sortBest(scores)[0];
+  let step = context.rules.widthFt / GRID_STEPS / 2;
+  for (let round = 0; best && round < REFINE_ROUNDS; round += 1, step /= 2) {
+    for (const offset of [best.offset - step, best.offset + step]) {
+      const score = scoreOffset(context, offset, bound);
+      scores.push(score);
+      if (compareCandidates(score, best) < 0) best = score;
+    }
+  }
+  return sortBest(scores);
 }

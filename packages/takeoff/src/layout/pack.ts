@@ -30,7 +30,12 @@ interface FreeRect {
 
 type SplitRule = 'full-length-right' | 'full-width-top';
 
-function packInOrder(items: readonly PackItem[], order: readonly number[], widthFt: number, rule: SplitRule): Packing {
+function packInOrder(
+  items: readonly PackItem[],
+  order: readonly number[],
+  widthFt: number,
+  rule: SplitRule,
+): Packing {
   const pieceUnits: number[] = [];
   const placements: Placement[] = new Array<Placement>(items.length);
   let free: FreeRect[] = [];
@@ -57,8 +62,20 @@ function packInOrder(items: readonly PackItem[], order: readonly number[], width
     placements[index] = { piece: rect.piece, acrossOffsetFt: rect.x, alongOffsetUnits: rect.y };
     const rightH = rule === 'full-length-right' ? rect.h : item.units;
     const topW = rule === 'full-length-right' ? item.widthFt : rect.w;
-    const right = { piece: rect.piece, x: rect.x + item.widthFt, y: rect.y, w: rect.w - item.widthFt, h: rightH };
-    const top = { piece: rect.piece, x: rect.x, y: rect.y + item.units, w: topW, h: rect.h - item.units };
+    const right = {
+      piece: rect.piece,
+      x: rect.x + item.widthFt,
+      y: rect.y,
+      w: rect.w - item.widthFt,
+      h: rightH,
+    };
+    const top = {
+      piece: rect.piece,
+      x: rect.x,
+      y: rect.y + item.units,
+      w: topW,
+      h: rect.h - item.units,
+    };
     for (const next of [right, top]) if (next.w > FIT_TOLERANCE_FT && next.h > 0) free.push(next);
   }
   return { pieceUnits, placements, totalUnits: pieceUnits.reduce((sum, units) => sum + units, 0) };
@@ -67,7 +84,10 @@ function packInOrder(items: readonly PackItem[], order: readonly number[], width
 /** Can any two items share a piece side by side? If not, packing cannot save anything. */
 export function canShare(items: readonly PackItem[], widthFt: number): boolean {
   const widths = items.map((item) => item.widthFt).sort((a, b) => a - b);
-  return widths.length >= 2 && (widths[0] as number) + (widths[1] as number) <= widthFt + FIT_TOLERANCE_FT;
+  return (
+    widths.length >= 2 &&
+    (widths[0] as number) + (widths[1] as number) <= widthFt + FIT_TOLERANCE_FT
+  );
 }
 
 /**
@@ -90,7 +110,8 @@ export function packCuts(items: readonly PackItem[], widthFt: number): Packing {
       if (
         !best ||
         packing.totalUnits < best.totalUnits ||
-        (packing.totalUnits === best.totalUnits && packing.pieceUnits.length < best.pieceUnits.length)
+        (packing.totalUnits === best.totalUnits &&
+          packing.pieceUnits.length < best.pieceUnits.length)
       ) {
         best = packing;
       }
@@ -103,7 +124,13 @@ function area(item: PackItem): number {
   return item.widthFt * item.units;
 }
 
-function byDesc(items: readonly PackItem[], a: number, b: number, first: keyof PackItem, second: keyof PackItem): number {
+function byDesc(
+  items: readonly PackItem[],
+  a: number,
+  b: number,
+  first: keyof PackItem,
+  second: keyof PackItem,
+): number {
   const x = items[a] as PackItem;
   const y = items[b] as PackItem;
   return y[first] - x[first] || y[second] - x[second] || a - b;

@@ -18,7 +18,8 @@ export const DEFAULT_WALKWAY_WIDTH_FT = 3;
 export const DEFAULT_MAX_LENGTH_FT = 100;
 
 function readPoint(path: string, value: unknown): Point {
-  if (!Array.isArray(value) || value.length !== 2) throw new LayoutInputError(path, 'must be a pair [x, y] of numbers');
+  if (!Array.isArray(value) || value.length !== 2)
+    throw new LayoutInputError(path, 'must be a pair [x, y] of numbers');
   const x = readNumber(`${path}[0]`, value[0]);
   const y = readNumber(`${path}[1]`, value[1]);
   if (Math.abs(x) > MAX_COORDINATE_FT || Math.abs(y) > MAX_COORDINATE_FT) {
@@ -29,7 +30,8 @@ function readPoint(path: string, value: unknown): Point {
 
 function readRing(path: string, value: unknown): Point[] {
   const points = requireArray(path, value);
-  if (points.length > MAX_RING_POINTS + 1) throw new LayoutInputError(path, `has more than ${MAX_RING_POINTS} points`);
+  if (points.length > MAX_RING_POINTS + 1)
+    throw new LayoutInputError(path, `has more than ${MAX_RING_POINTS} points`);
   const ring = normalizeRing(points.map((point, i) => readPoint(`${path}[${i}]`, point)));
   if (ring.length < 3) throw new LayoutInputError(path, 'needs at least 3 points');
   return ring;
@@ -37,10 +39,12 @@ function readRing(path: string, value: unknown): Point[] {
 
 function readTags(path: string, value: unknown, count: number): (EdgeTag | null)[] {
   const tags = requireArray(path, value);
-  if (tags.length !== count) throw new LayoutInputError(path, `must have one tag per edge (${count})`);
+  if (tags.length !== count)
+    throw new LayoutInputError(path, `must have one tag per edge (${count})`);
   return tags.map((tag, i) => {
     if (tag === null || tag === undefined || tag === 'unknown') return null;
-    if (typeof tag === 'string' && (EDGE_TAGS as readonly string[]).includes(tag)) return tag as EdgeTag;
+    if (typeof tag === 'string' && (EDGE_TAGS as readonly string[]).includes(tag))
+      return tag as EdgeTag;
     throw new LayoutInputError(`${path}[${i}]`, `must be one of ${EDGE_TAGS.join(', ')} or null`);
   });
 }
@@ -49,9 +53,13 @@ function readTrafficPath(path: string, value: unknown): TrafficPath {
   const isPlain = Array.isArray(value);
   const record = isPlain ? { points: value } : requireRecord(path, value);
   const pointsPath = isPlain ? path : `${path}.points`;
-  const points = requireArray(pointsPath, record.points).map((p, i) => readPoint(`${pointsPath}[${i}]`, p));
+  const points = requireArray(pointsPath, record.points).map((p, i) =>
+    readPoint(`${pointsPath}[${i}]`, p),
+  );
   if (points.length < 2) throw new LayoutInputError(pointsPath, 'needs at least 2 points');
-  const widthFt = readOptionalNumber(`${path}.widthFt`, record.widthFt, { positive: true }) ?? DEFAULT_WALKWAY_WIDTH_FT;
+  const widthFt =
+    readOptionalNumber(`${path}.widthFt`, record.widthFt, { positive: true }) ??
+    DEFAULT_WALKWAY_WIDTH_FT;
   return { points, widthFt };
 }
 
@@ -71,27 +79,42 @@ export function parseLayoutRequest(json: unknown): LayoutRequest {
   const body = requireRecord('request', json);
   const area = requireRecord('area', body.area);
   const outer = readRing('area.outer', area.outer);
-  const holes = (area.holes === undefined || area.holes === null ? [] : requireArray('area.holes', area.holes)).map(
-    (hole, i) => readRing(`area.holes[${i}]`, hole),
-  );
+  const holes = (
+    area.holes === undefined || area.holes === null ? [] : requireArray('area.holes', area.holes)
+  ).map((hole, i) => readRing(`area.holes[${i}]`, hole));
   const problem = findRingProblem(outer, holes);
   if (problem) throw new LayoutInputError(problem.path, problem.detail);
   const roll = requireRecord('roll', body.roll);
   const widthFt = readNumber('roll.widthFt', roll.widthFt, { positive: true });
-  const lengthStepFt = readOptionalNumber('lengthStepFt', body.lengthStepFt, { positive: true }) ?? 1;
-  const maxLengthFt = readOptionalNumber('roll.maxLengthFt', roll.maxLengthFt, { positive: true }) ?? DEFAULT_MAX_LENGTH_FT;
-  if (maxLengthFt < lengthStepFt) throw new LayoutInputError('roll.maxLengthFt', 'must be at least lengthStepFt');
-  const trimAllowanceFt = readOptionalNumber('trimAllowanceFt', body.trimAllowanceFt, { nonNegative: true }) ?? 0;
+  const lengthStepFt =
+    readOptionalNumber('lengthStepFt', body.lengthStepFt, { positive: true }) ?? 1;
+  const maxLengthFt =
+    readOptionalNumber('roll.maxLengthFt', roll.maxLengthFt, { positive: true }) ??
+    DEFAULT_MAX_LENGTH_FT;
+  if (maxLengthFt < lengthStepFt)
+    throw new LayoutInputError('roll.maxLengthFt', 'must be at least lengthStepFt');
+  const trimAllowanceFt =
+    readOptionalNumber('trimAllowanceFt', body.trimAllowanceFt, { nonNegative: true }) ?? 0;
   const [originX, originY] = outer[0] as Point;
-  const span = Math.max(...[outer, ...holes].flat().map(([x, y]) => Math.hypot(x - originX, y - originY)));
+  const span = Math.max(
+    ...[outer, ...holes].flat().map(([x, y]) => Math.hypot(x - originX, y - originY)),
+  );
   if ((2 * span) / widthFt > MAX_STRIPS) {
-    throw new LayoutInputError('roll.widthFt', `is too narrow for this area (more than ${MAX_STRIPS} strips)`);
+    throw new LayoutInputError(
+      'roll.widthFt',
+      `is too narrow for this area (more than ${MAX_STRIPS} strips)`,
+    );
   }
   const trafficPaths =
     body.trafficPaths === undefined || body.trafficPaths === null
       ? []
-      : requireArray('trafficPaths', body.trafficPaths).map((p, i) => readTrafficPath(`trafficPaths[${i}]`, p));
-  const edges = body.edges === undefined || body.edges === null ? undefined : readTags('edges', body.edges, outer.length);
+      : requireArray('trafficPaths', body.trafficPaths).map((p, i) =>
+          readTrafficPath(`trafficPaths[${i}]`, p),
+        );
+  const edges =
+    body.edges === undefined || body.edges === null
+      ? undefined
+      : readTags('edges', body.edges, outer.length);
   const holeEdges =
     body.holeEdges === undefined || body.holeEdges === null
       ? undefined

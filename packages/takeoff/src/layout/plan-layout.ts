@@ -42,11 +42,15 @@ export function planLayout(input: LayoutRequestInput | LayoutRequest): LayoutPla
     const across = roundDirection(grainAngleDeg + 90);
     alternatives = [alternativeOf(planAtAngle(request, across, walkways), across)];
   } else {
-    const [best, ...others] = searchDirections(request, walkways);
-    if (!best) throw new Error('no direction was evaluated');
-    chosen = best;
+    const search = searchDirections(request, walkways);
+    chosen = search.winner;
     grainAngleDeg = chosen.context.polygon.frame.angleDeg;
-    alternatives = others.map((layout) => alternativeOf(layout, layout.context.polygon.frame.angleDeg));
+    const { stepFt, widthFt } = chosen.context.rules;
+    alternatives = search.others.map(({ angle, score }) => ({
+      grainAngleDeg: angle,
+      orderedSqFt: roundSqFt(score.orderedUnits * stepFt * widthFt),
+      seamCount: score.seamCount,
+    }));
   }
   const { pieces, cuts } = piecesAndCuts(chosen);
   const seamLines = seamLinesOf(chosen);

@@ -4,7 +4,8 @@ import { LayoutInputError } from './errors.js';
 
 export function requireRecord(path: string, value: unknown): Record<string, unknown> {
   if (value === undefined || value === null) throw new LayoutInputError(path, 'is missing');
-  if (typeof value !== 'object' || Array.isArray(value)) throw new LayoutInputError(path, 'must be an object');
+  if (typeof value !== 'object' || Array.isArray(value))
+    throw new LayoutInputError(path, 'must be an object');
   return value as Record<string, unknown>;
 }
 
@@ -21,12 +22,22 @@ interface NumberRule {
 
 export function readNumber(path: string, value: unknown, rule: NumberRule = {}): number {
   if (value === undefined || value === null) throw new LayoutInputError(path, 'is missing');
-  const kind = rule.positive ? 'a positive number' : rule.nonNegative ? 'a number ≥ 0' : 'a finite number';
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new LayoutInputError(path, `must be ${kind}`);
-  if ((rule.positive && value <= 0) || (rule.nonNegative && value < 0)) throw new LayoutInputError(path, `must be ${kind}`);
+  const kind = rule.positive
+    ? 'a positive number'
+    : rule.nonNegative
+      ? 'a number ≥ 0'
+      : 'a finite number';
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw new LayoutInputError(path, `must be ${kind}`);
+  if ((rule.positive && value <= 0) || (rule.nonNegative && value < 0))
+    throw new LayoutInputError(path, `must be ${kind}`);
   return value;
 }
 
-export function readOptionalNumber(path: string, value: unknown, rule: NumberRule = {}): number | undefined {
+export function readOptionalNumber(
+  path: string,
+  value: unknown,
+  rule: NumberRule = {},
+): number | undefined {
   return value === undefined || value === null ? undefined : readNumber(path, value, rule);
 }

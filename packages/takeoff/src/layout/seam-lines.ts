@@ -20,14 +20,21 @@ function insideStretches(polygon: Polygon, at: number): [number, number][] {
   }
   crossings.sort((a, b) => a - b);
   const stretches: [number, number][] = [];
-  for (let k = 0; k + 1 < crossings.length; k += 2) stretches.push([crossings[k] as number, crossings[k + 1] as number]);
+  for (let k = 0; k + 1 < crossings.length; k += 2)
+    stretches.push([crossings[k] as number, crossings[k + 1] as number]);
   return stretches;
 }
 
 /** Side and butt seams of a layout as segments in area coordinates. */
 export function seamLinesOf(layout: AngleLayout): SeamLine[] {
   const { frame } = layout.context.polygon;
-  const seam = (kind: SeamLine['kind'], u0: number, v0: number, u1: number, v1: number): SeamLine => ({
+  const seam = (
+    kind: SeamLine['kind'],
+    u0: number,
+    v0: number,
+    u1: number,
+    v1: number,
+  ): SeamLine => ({
     kind,
     from: roundPoint(fromFrame(frame, u0, v0)),
     to: roundPoint(fromFrame(frame, u1, v1)),
@@ -45,7 +52,10 @@ export function seamLinesOf(layout: AngleLayout): SeamLine[] {
 }
 
 /** Seams that run through a walkway, with the length inside each path. */
-export function trafficCrossings(seams: readonly SeamLine[], walkways: readonly (readonly Capsule[])[]): TrafficSeamCrossing[] {
+export function trafficCrossings(
+  seams: readonly SeamLine[],
+  walkways: readonly (readonly Capsule[])[],
+): TrafficSeamCrossing[] {
   const crossings: TrafficSeamCrossing[] = [];
   seams.forEach((line, seam) => {
     walkways.forEach((capsules, path) => {

@@ -40,12 +40,17 @@ export interface LayoutRequest {
  * as in {@link LayoutRequest}); traffic paths may be plain polylines.
  */
 export interface LayoutRequestInput {
-  readonly area: { readonly outer: readonly Point[]; readonly holes?: readonly (readonly Point[])[] };
+  readonly area: {
+    readonly outer: readonly Point[];
+    readonly holes?: readonly (readonly Point[])[];
+  };
   readonly roll: { readonly widthFt: number; readonly maxLengthFt?: number };
   readonly grain?: { readonly angleDeg: number } | null;
   readonly lengthStepFt?: number;
   readonly trimAllowanceFt?: number;
-  readonly trafficPaths?: readonly (readonly Point[] | { readonly points: readonly Point[]; readonly widthFt?: number })[];
+  readonly trafficPaths?: readonly (
+    readonly Point[] | { readonly points: readonly Point[]; readonly widthFt?: number }
+  )[];
   readonly edges?: readonly (EdgeTag | null)[];
   readonly holeEdges?: readonly (readonly (EdgeTag | null)[])[];
 }

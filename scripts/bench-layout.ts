@@ -1,0 +1,51 @@
+/**
+ * bench-layout — prints how long the layout planner takes on a fixed set of sample yards,
+ * with the grain given and with the direction left to the planner, and the turf ordered
+ * against the area. Usage: `pnpm bench:layout [--runs N]`. Read-only; safe anywhere.
+ */
+import { cpus } from 'node:os';
+import { performance } from 'node:perf_hooks';
+import { planLayout, sampleYards } from '@seamwright/takeoff';
+import type { LayoutPlan, LayoutRequestInput } from '@seamwright/takeoff';
+
+const runsFlag = process.argv.indexOf('--runs');
+const runs = runsFlag > 0 ? Number(process.argv[runsFlag + 1]) : 15;
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)] ?? NaN;
+}
+
+function time(request: LayoutRequestInput): { ms: number; plan: LayoutPlan } {
+  let plan = planLayout(request);
+  const times: number[] = [];
+  for (let i = 0; i < runs; i += 1) {
+    const start = performance.now();
+    plan = planLayout(request);
+    times.push(performance.now() - start);
+  }
+  return { ms: median(times), plan };
+}
+
+const rows: string[] = [
+  '| yard | vertices | area sq ft | grain 90°: ms | ordered | waste % | free: ms | grain | ordered | waste % | reuse |',
+  '|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---|',
+];
+for (const yard of sampleYards()) {
+  const base = {
+    area: { outer: yard.outer, holes: yard.holes },
+    roll: { widthFt: 15, maxLengthFt: 100 },
+  };
+  const fixed = time({ ...base, grain: { angleDeg: 90 } });
+  const free = time(base);
+  const vertices = yard.outer.length + yard.holes.reduce((sum, hole) => sum + hole.length, 0);
+  rows.push(
+    `| ${yard.name} | ${vertices} | ${free.plan.areaSqFt.toFixed(1)} | ${fixed.ms.toFixed(1)} | ${fixed.plan.orderedSqFt} | ` +
+      `${fixed.plan.wastePct.toFixed(1)} | ${free.ms.toFixed(1)} | ${free.plan.grainAngleDeg}° | ${free.plan.orderedSqFt} | ` +
+      `${free.plan.wastePct.toFixed(1)} | ${free.plan.offcutReuse ? 'yes' : 'no'} |`,
+  );
+}
+console.log(
+  `Layout planner benchmark — ${new Date().toISOString().slice(0, 10)}, ${cpus().length} cores, Node ${process.version}, median of ${runs} runs, 15 ft roll, 100 ft max length`,
+);
+console.log(rows.join('\n'));
