@@ -10,6 +10,7 @@ import { registerHealthRoutes } from './modules/health/health.routes.js';
 import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
+import { registerPlansRoutes } from './modules/plans/plans.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
 
 export function registerApiRoutes(
@@ -26,6 +27,5 @@ export function registerApiRoutes(
   registerCustomersRoutes(routes, deps);
   registerSitesRoutes(routes, deps);
   registerAuditRoutes(routes);
-  // PLANS: `POST /api/plans/preview` is registered here once @seamwright/takeoff exports
-  // parseLayoutRequest and planLayout (see modules/plans).
+  registerPlansRoutes(routes);
 }

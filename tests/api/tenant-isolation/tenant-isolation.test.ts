@@ -111,6 +111,14 @@ const probes: Record<string, Probe> = {
   'get /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/sites/${w.aSiteId}`)) },
   'patch /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/sites/${w.aSiteId}`, { hazards: 'Hijacked' })) },
   'delete /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/sites/${w.aSiteId}`)) },
+  'post /api/plans/preview': {
+    kind: 'tenant',
+    run: async (b) => {
+      // Stateless computation: reads and writes no company rows.
+      const body = { area: { outer: [[0, 0], [12, 0], [12, 10], [0, 10]] }, roll: { widthFt: 12 } };
+      await b.post('/api/plans/preview', body).expect(200);
+    },
+  },
   'get /api/audit-events': {
     kind: 'tenant',
     run: async (b, w) => {
