@@ -1,4 +1,4 @@
-/* eslint-disable @typescript-eslint/no-unsafe-call, @typescript-eslint/no-unsafe-argument -- supertest response bodies are untyped JSON */
+/* eslint-disable @typescript-eslint/no-unsafe-call -- supertest response bodies are untyped JSON */
 import { describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';
 import type { CustomerView } from '@seamwright/shared';
