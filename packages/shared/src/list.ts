@@ -34,8 +34,10 @@ export function sortSchema<const F extends readonly [string, ...string[]]>(
   return z
     .enum(allowed)
     .default(fallback)
-    .transform((raw) => ({
-      field: raw.replace(/^-/, '') as F[number],
-      direction: raw.startsWith('-') ? ('desc' as const) : ('asc' as const),
-    }));
+    .transform((raw) => {
+      const name = raw.replace(/^-/, '');
+      // The enum above admits only these names, so the lookup always finds one.
+      const field: F[number] = fields.find((f) => f === name) ?? fields[0];
+      return { field, direction: raw.startsWith('-') ? ('desc' as const) : ('asc' as const) };
+    });
 }
