@@ -37,8 +37,19 @@ function installedPnpmVersion() {
 
 if (installedPnpmVersion() !== pnpmVersion) {
   console.log(`[setup] installing pnpm ${pnpmVersion}`);
-  if (run('npm', ['install', '--global', '--silent', '--no-fund', '--no-audit', `pnpm@${pnpmVersion}`]) !== 0) {
-    console.error(`[setup] could not install pnpm ${pnpmVersion}; install it with: npm i -g pnpm@${pnpmVersion}`);
+  if (
+    run('npm', [
+      'install',
+      '--global',
+      '--silent',
+      '--no-fund',
+      '--no-audit',
+      `pnpm@${pnpmVersion}`,
+    ]) !== 0
+  ) {
+    console.error(
+      `[setup] could not install pnpm ${pnpmVersion}; install it with: npm i -g pnpm@${pnpmVersion}`,
+    );
     process.exit(1);
   }
 }

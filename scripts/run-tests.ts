@@ -53,12 +53,20 @@ function step(name: string, action: () => boolean | Promise<boolean>): Promise<b
 function vitest(project: string[], report: string): boolean {
   const file = join(reportDir, report);
   const args = ['exec', 'vitest', 'run', ...project.flatMap((p) => ['--project', p])];
-  const code = runStep('pnpm', [...args, '--reporter=default', '--reporter=json', `--outputFile.json=${file}`]);
+  const code = runStep('pnpm', [
+    ...args,
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile.json=${file}`,
+  ]);
   counts = addCounts(counts, readVitestCounts(file));
   return code === 0;
 }
 
-await step('typecheck', () => runStep('pnpm', ['-r', '--workspace-concurrency=2', 'run', 'typecheck']) === 0);
+await step(
+  'typecheck',
+  () => runStep('pnpm', ['-r', '--workspace-concurrency=2', 'run', 'typecheck']) === 0,
+);
 await step('lint', () => runStep('pnpm', ['exec', 'eslint', '.', '--max-warnings=0']) === 0);
 await step('unit tests', () => vitest(['unit', 'web'], 'unit.json'));
 await step('API tests (MariaDB)', () => vitest(['api'], 'api.json'));
@@ -75,12 +83,16 @@ await step('end-to-end tests (Chromium)', async () => {
   try {
     await waitForHttp(`${baseUrl}/api/health`, 60_000, api);
     const file = join(reportDir, 'e2e.json');
-    const code = runStep('pnpm', ['--filter', '@seamwright/tests', 'run', 'e2e', '--reporter=list,json'], {
-      ...process.env,
-      E2E_BASE_URL: baseUrl,
-      E2E_MAIL_URL: mail.webUrl,
-      PLAYWRIGHT_JSON_OUTPUT_NAME: file,
-    });
+    const code = runStep(
+      'pnpm',
+      ['--filter', '@seamwright/tests', 'run', 'e2e', '--reporter=list,json'],
+      {
+        ...process.env,
+        E2E_BASE_URL: baseUrl,
+        E2E_MAIL_URL: mail.webUrl,
+        PLAYWRIGHT_JSON_OUTPUT_NAME: file,
+      },
+    );
     counts = addCounts(counts, readPlaywrightCounts(file));
     return code === 0;
   } finally {
@@ -94,7 +106,9 @@ if (db.startedHere) db.stop();
 
 console.log('\n  Test run summary');
 for (const r of results) {
-  console.log(`    ${r.ok ? 'ok  ' : 'FAIL'}  ${r.step.padEnd(30)} ${r.seconds.toFixed(1).padStart(6)} s`);
+  console.log(
+    `    ${r.ok ? 'ok  ' : 'FAIL'}  ${r.step.padEnd(30)} ${r.seconds.toFixed(1).padStart(6)} s`,
+  );
 }
 const allOk = results.every((r) => r.ok);
 console.log(`\n  ${allOk ? 'All steps passed.' : 'Some steps failed.'}`);

@@ -6,14 +6,26 @@ import { createSequelize, loadEnv, migrateDatabase, seedDemoData } from '@seamwr
 import { instances } from './lib/instances.js';
 import { fail, say } from './lib/log.js';
 
-if (process.argv[2] && process.argv[2] !== 'dev') fail('seed', 'only the dev instance takes demo data: seed-demo.ts [dev]');
+if (process.argv[2] && process.argv[2] !== 'dev')
+  fail('seed', 'only the dev instance takes demo data: seed-demo.ts [dev]');
 const { db } = instances.dev;
 const env = loadEnv({ NODE_ENV: 'development' });
-const sequelize = createSequelize({ host: '127.0.0.1', port: db.port, name: db.database, user: db.user, password: db.password });
+const sequelize = createSequelize({
+  host: '127.0.0.1',
+  port: db.port,
+  name: db.database,
+  user: db.user,
+  password: db.password,
+});
 try {
   await migrateDatabase(sequelize);
   const result = await seedDemoData(sequelize, env);
-  say('seed', result.created ? `created "${result.companyName}"` : `"${result.companyName}" already exists; nothing changed`);
+  say(
+    'seed',
+    result.created
+      ? `created "${result.companyName}"`
+      : `"${result.companyName}" already exists; nothing changed`,
+  );
   say('seed', `sign in with password "${result.password}" as:`);
   for (const user of result.users) say('seed', `  ${user.role.padEnd(10)} ${user.email}`);
 } catch (error) {

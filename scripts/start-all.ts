@@ -17,8 +17,10 @@ const db = await startMariadb('dev', settings.db.port);
 ensureDatabase(db, settings.db);
 
 const env = apiEnv('dev');
-if (runStep('pnpm', ['exec', 'tsx', 'scripts/migrate-db.ts', 'dev'], env) !== 0) fail('db', 'migrations failed');
-if (runStep('pnpm', ['exec', 'tsx', 'scripts/seed-demo.ts', 'dev'], env) !== 0) fail('seed', 'demo data failed');
+if (runStep('pnpm', ['exec', 'tsx', 'scripts/migrate-db.ts', 'dev'], env) !== 0)
+  fail('db', 'migrations failed');
+if (runStep('pnpm', ['exec', 'tsx', 'scripts/seed-demo.ts', 'dev'], env) !== 0)
+  fail('seed', 'demo data failed');
 if (!buildWebIfChanged()) fail('web', 'the web build failed');
 
 const mail = await startMailSink('dev', settings.smtpPort, settings.mailWebPort);

@@ -2,7 +2,10 @@
 import { instances, type InstanceName } from './instances.js';
 import { webDistDir } from './web-build.js';
 
-export function apiEnv(name: InstanceName, overrides: { database?: string } = {}): NodeJS.ProcessEnv {
+export function apiEnv(
+  name: InstanceName,
+  overrides: { database?: string } = {},
+): NodeJS.ProcessEnv {
   const settings = instances[name];
   return {
     ...process.env,

@@ -33,5 +33,6 @@ export function ensureDebianPackages(command: string, packages: string[]): void 
     stdio: 'inherit',
     env,
   });
-  if (!hasCommand(command)) fail('setup', `${command} is still missing after installing ${packages.join(' ')}`);
+  if (!hasCommand(command))
+    fail('setup', `${command} is still missing after installing ${packages.join(' ')}`);
 }

@@ -9,7 +9,12 @@ export const instances = {
     processorPort: 12111,
   },
   test: {
-    db: { port: 3308, database: 'seamwright_test', user: 'seamwright', password: 'seamwright-local' },
+    db: {
+      port: 3308,
+      database: 'seamwright_test',
+      user: 'seamwright',
+      password: 'seamwright-local',
+    },
     apiPort: 5171,
     smtpPort: 1026,
     mailWebPort: 1081,

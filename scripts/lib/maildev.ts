@@ -12,7 +12,11 @@ export interface MailSink {
 }
 
 /** Starts maildev on the given ports, bound to loopback only. */
-export async function startMailSink(name: string, smtpPort: number, webPort: number): Promise<MailSink> {
+export async function startMailSink(
+  name: string,
+  smtpPort: number,
+  webPort: number,
+): Promise<MailSink> {
   const mailDirectory = join(dataRoot, name, 'mail');
   mkdirSync(mailDirectory, { recursive: true });
   const maildev = new MailDev({

@@ -38,7 +38,9 @@ function paths(name: string) {
 
 function isAlive(socket: string): boolean {
   if (!existsSync(socket)) return false;
-  const result = spawnSync('mariadb-admin', ['--socket', socket, '--user=root', 'ping'], { stdio: 'ignore' });
+  const result = spawnSync('mariadb-admin', ['--socket', socket, '--user=root', 'ping'], {
+    stdio: 'ignore',
+  });
   return result.status === 0;
 }
 
@@ -82,7 +84,9 @@ export async function startMariadb(name: string, port: number): Promise<MariadbI
   ensureDebianPackages('mariadbd', ['mariadb-server', 'mariadb-client']);
   const p = paths(name);
   const stop = () => {
-    spawnSync('mariadb-admin', ['--socket', p.socket, '--user=root', 'shutdown'], { stdio: 'ignore' });
+    spawnSync('mariadb-admin', ['--socket', p.socket, '--user=root', 'shutdown'], {
+      stdio: 'ignore',
+    });
   };
   if (isAlive(p.socket)) {
     say('db', `reusing MariaDB "${name}" on 127.0.0.1:${port}`);
@@ -113,8 +117,11 @@ export async function startMariadb(name: string, port: number): Promise<MariadbI
 }
 
 function sql(socket: string, statement: string): void {
-  const result = spawnSync('mariadb', ['--socket', socket, '--user=root', '-e', statement], { encoding: 'utf8' });
-  if (result.status !== 0) fail('db', `SQL failed (${statement.split(' ')[0]}): ${result.stderr.trim()}`);
+  const result = spawnSync('mariadb', ['--socket', socket, '--user=root', '-e', statement], {
+    encoding: 'utf8',
+  });
+  if (result.status !== 0)
+    fail('db', `SQL failed (${statement.split(' ')[0]}): ${result.stderr.trim()}`);
 }
 
 const identifier = /^[a-z0-9_]+$/;

@@ -4,14 +4,22 @@ import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { projectRoot } from './paths.js';
 
 /** Runs a command in the project root with inherited output; returns its exit code. */
-export function runStep(command: string, args: string[], env: NodeJS.ProcessEnv = process.env): number {
+export function runStep(
+  command: string,
+  args: string[],
+  env: NodeJS.ProcessEnv = process.env,
+): number {
   const result = spawnSync(command, args, { cwd: projectRoot, stdio: 'inherit', env });
   if (result.error) throw result.error;
   return result.status ?? 1;
 }
 
 /** Starts a long-running service in its own process group so it can be stopped whole. */
-export function startService(command: string, args: string[], env: NodeJS.ProcessEnv): ChildProcess {
+export function startService(
+  command: string,
+  args: string[],
+  env: NodeJS.ProcessEnv,
+): ChildProcess {
   return spawn(command, args, { cwd: projectRoot, stdio: 'inherit', env, detached: true });
 }
 
@@ -36,10 +44,15 @@ export async function stopService(child: ChildProcess, graceMs = 5000): Promise<
 }
 
 /** Polls `url` until it answers 2xx, or fails after `timeoutMs`. */
-export async function waitForHttp(url: string, timeoutMs: number, child?: ChildProcess): Promise<void> {
+export async function waitForHttp(
+  url: string,
+  timeoutMs: number,
+  child?: ChildProcess,
+): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
-    if (child && child.exitCode !== null) throw new Error(`process exited (code ${child.exitCode}) before ${url} answered`);
+    if (child && child.exitCode !== null)
+      throw new Error(`process exited (code ${child.exitCode}) before ${url} answered`);
     try {
       const response = await fetch(url);
       if (response.ok) return;

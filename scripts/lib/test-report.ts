@@ -40,7 +40,11 @@ export function readPlaywrightCounts(file: string): Counts | null {
 
 export function addCounts(a: Counts, b: Counts | null): Counts {
   if (!b) return a;
-  return { passed: a.passed + b.passed, failed: a.failed + b.failed, skipped: a.skipped + b.skipped };
+  return {
+    passed: a.passed + b.passed,
+    failed: a.failed + b.failed,
+    skipped: a.skipped + b.skipped,
+  };
 }
 
 export const zeroCounts = none;
