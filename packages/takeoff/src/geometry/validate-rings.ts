@@ -64,9 +64,9 @@ export function findRingProblem(outer: Ring, holes: readonly Ring[]): RingProble
   ];
   for (const { path, ring } of rings) {
     if (ring.length < 3) return { path, detail: 'needs at least 3 points' };
-    if (signedArea(ring) === 0) return { path, detail: 'ring has zero area' };
     const contact = findSelfContact(ring);
     if (contact) return { path, detail: `ring self-intersects at ${formatPoint(contact)}` };
+    if (signedArea(ring) === 0) return { path, detail: 'ring has zero area' };
   }
   for (const [i, hole] of holes.entries()) {
     const path = `area.holes[${i}]`;

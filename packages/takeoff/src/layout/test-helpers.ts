@@ -31,7 +31,7 @@ export function directionGap(a: number, b: number): number {
 
 /** Do two cuts placed on one piece overlap (in the piece's own coordinates)? */
 export function cutsOverlapOnPiece(a: LayoutCut, b: LayoutCut): boolean {
-  const eps = 1e-6;
+  const eps = 2e-4; // offsets and widths are each rounded to 1/10000 ft
   return (
     a.acrossOffsetFt + a.acrossFt > b.acrossOffsetFt + eps &&
     b.acrossOffsetFt + b.acrossFt > a.acrossOffsetFt + eps &&

@@ -1,0 +1,68 @@
+import { spawnSync } from 'node:child_process';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+const here = dirname(fileURLToPath(import.meta.url));
+const root = join(here, '../../../..');
+const script = join(here, 'plan-layout.ts');
+
+function run(input: string): { status: number | null; stdout: string; stderr: string } {
+  const result = spawnSync(process.execPath, ['--import', 'tsx', script], {
+    cwd: root,
+    input,
+    encoding: 'utf8',
+  });
+  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+describe('plan-layout command', () => {
+  it('reads a request on stdin and prints the plan on stdout', () => {
+    const request = {
+      area: {
+        outer: [
+          [0, 0],
+          [30, 0],
+          [30, 20],
+          [0, 20],
+        ],
+        holes: [],
+      },
+      roll: { widthFt: 15, maxLengthFt: 100 },
+      grain: { angleDeg: 90 },
+      lengthStepFt: 1,
+    };
+    const { status, stdout, stderr } = run(JSON.stringify(request));
+    expect(status).toBe(0);
+    expect(stderr).toBe('');
+    const plan = JSON.parse(stdout) as { orderedSqFt: number; seams: unknown };
+    expect(plan.orderedSqFt).toBe(600);
+    expect(plan.seams).toEqual({ count: 1, sideFt: 20, buttFt: 0 });
+  });
+
+  it('exits non-zero with one stderr line on invalid JSON', () => {
+    const { status, stdout, stderr } = run('{ "area": ');
+    expect(status).toBe(1);
+    expect(stdout).toBe('');
+    expect(stderr.trimEnd().split('\n')).toHaveLength(1);
+    expect(stderr).toMatch(/^invalid JSON/);
+  });
+
+  it('exits non-zero with one stderr line on bad geometry', () => {
+    const { status, stderr } = run(
+      JSON.stringify({
+        area: {
+          outer: [
+            [0, 0],
+            [6, 8],
+            [6, 0],
+            [0, 8],
+          ],
+        },
+        roll: { widthFt: 15 },
+      }),
+    );
+    expect(status).toBe(1);
+    expect(stderr).toBe('area.outer: ring self-intersects at (3, 4)\n');
+  });
+});
