@@ -74,8 +74,10 @@ describe('takeoff properties', () => {
     fc.assert(
       fc.property(inputArbitrary, (input) => {
         for (const line of computeTakeoff(input, defaultTakeoffSettings)) {
+          // Rounding up ignores float noise below 1e-9 (so 10.000000001 bags stay 10), hence
+          // the slack: a raw 1.0000000001e-9 legitimately rounds to 0.
           if (line.rounding.startsWith('rounded up'))
-            expect(line.quantity).toBeGreaterThanOrEqual(line.rawQuantity - 1e-9);
+            expect(line.quantity).toBeGreaterThanOrEqual(line.rawQuantity - 2e-9);
         }
       }),
       { numRuns: 200 },
