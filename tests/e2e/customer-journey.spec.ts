@@ -4,7 +4,7 @@
 import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { expectAccessible } from './support/a11y';
 import { linkFromMail } from './support/mail';
-import { acceptInvitation, emailFor, invite, rail, runStamp, signUpCompany } from './support/people';
+import { acceptInvitation, emailFor, invite, password, rail, runStamp, signUpCompany } from './support/people';
 import { baseUrl } from './support/servers';
 
 test.describe.configure({ mode: 'serial' });
@@ -14,6 +14,8 @@ const officeEmail = emailFor('office-a');
 const crewEmail = emailFor('crew-a');
 const customerName = `Marlow Pettigrew ${runStamp}`;
 let customerPath = '';
+let secondOwnerPage: Page | undefined;
+const secondCompanyName = `Larchmere Lawns ${runStamp}`;
 
 const contexts: BrowserContext[] = [];
 async function newPage(browser: Browser, viewport = { width: 1280, height: 800 }): Promise<Page> {
@@ -139,7 +141,8 @@ test('on a phone the crew lead gets one column and a bottom bar with Today only'
 
 test('a second company sees none of the first company’s customers', async ({ browser }) => {
   const page = await newPage(browser);
-  await signUpCompany(page, { companyName: `Larchmere Lawns ${runStamp}`, name: 'Oona Fairweather', email: emailFor('owner-b') });
+  secondOwnerPage = page;
+  await signUpCompany(page, { companyName: secondCompanyName, name: 'Oona Fairweather', email: emailFor('owner-b') });
 
   await page.goto(`/customers?q=${encodeURIComponent('Pettigrew')}&status=all`);
   await expect(page.getByRole('heading', { name: 'No customers match' })).toBeVisible();
@@ -152,4 +155,40 @@ test('a second company sees none of the first company’s customers', async ({ b
   const detail = await page.request.get(`/api${customerPath}`);
   expect(detail.status()).toBe(404);
   await expectAccessible(page, 'Customer page (other company, not found)');
+});
+
+test('someone in two companies switches between them and sees only the active one’s customers', async ({ browser }) => {
+  const owner = secondOwnerPage;
+  if (!owner) throw new Error('the second company was not set up');
+  await owner.goto('/settings');
+  await invite(owner, officeEmail, 'Bookkeeper');
+
+  // The office user already has an account: the invitation asks only for the password.
+  const page = await newPage(browser);
+  const invitationPath = await linkFromMail(officeEmail, /\/invitations\/[A-Za-z0-9_-]+/);
+  await page.goto(invitationPath);
+  await expect(page.getByText('You already have a Seamwright account')).toBeVisible();
+  await expect(page.getByLabel('Your name')).toHaveCount(0);
+  await page.getByLabel('Your password').fill(password);
+  await page.getByRole('button', { name: `Join ${secondCompanyName}` }).click();
+
+  const sidebar = page.getByRole('complementary').first();
+  await expect(sidebar.getByText(secondCompanyName)).toBeVisible();
+  await rail(page).getByRole('link', { name: 'Customers' }).click();
+  await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
+
+  await sidebar.getByText('Switch company').click();
+  await sidebar.getByRole('button', { name: new RegExp(firstCompany.companyName) }).click();
+  // The rail names the new company and role, and the switch list has closed.
+  await expect(sidebar.getByText('Office', { exact: true })).toBeVisible();
+  await expect(sidebar.getByRole('button', { name: new RegExp(firstCompany.companyName) })).toHaveCount(0);
+  await expect(sidebar.getByText(firstCompany.companyName)).toBeVisible();
+  await rail(page).getByRole('link', { name: 'Customers' }).click();
+  await expect(page.getByRole('link', { name: customerName })).toBeVisible();
+
+  await sidebar.getByText('Switch company').click();
+  await sidebar.getByRole('button', { name: new RegExp(secondCompanyName) }).click();
+  await rail(page).getByRole('link', { name: 'Customers' }).click();
+  await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
+  await expect(page.getByRole('link', { name: customerName })).toHaveCount(0);
 });

@@ -23,7 +23,8 @@ export function CompanySwitcher({ tone = 'dark' }: { tone?: 'dark' | 'light' }) 
       <p className="text-lg leading-tight font-bold">{me.company.name}</p>
       <p className={`text-sm ${muted}`}>{roleLabels[me.role]}</p>
       {others.length > 0 ? (
-        <details className="mt-2">
+        // Keyed by company so the list closes once the switch is done.
+        <details key={me.company.id} className="mt-2">
           <summary className={`min-h-11 cursor-pointer py-2 font-semibold underline ${tone === 'dark' ? 'text-sand-100' : 'text-moss-800'}`}>
             Switch company
           </summary>
