@@ -70,6 +70,16 @@ test('archive can be undone, delete asks once, and a site can be edited and dele
   await page.goto('/customers');
   await page.getByRole('link', { name: 'Quenby Marsh' }).click();
 
+  await page.getByRole('button', { name: 'Edit', exact: true }).click();
+  const editForm = page.getByRole('form', { name: 'Save changes' });
+  await editForm.getByLabel('Name').fill('');
+  await expect(editForm.getByText('Name is required')).toBeVisible();
+  await expectAccessible(page, 'Edit customer with an error showing');
+  await editForm.getByLabel('Name').fill('Quenby Marsh');
+  await editForm.getByLabel('Notes').fill('Prefers calls after 4 pm.');
+  await editForm.getByRole('button', { name: 'Save changes' }).click();
+  await expect(page.getByText('Prefers calls after 4 pm.')).toBeVisible();
+
   await page.getByRole('button', { name: 'Archive' }).click();
   await expect(page.getByText(/^Archived on /)).toBeVisible();
   await page.getByRole('button', { name: 'Undo' }).click();
@@ -109,4 +119,12 @@ test('archive can be undone, delete asks once, and a site can be edited and dele
   await dialog.getByRole('button', { name: 'Delete customer' }).click();
   await expect(page).toHaveURL(/\/customers$/);
   await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
+});
+
+test('an address that is not a page says so inside the app frame', async ({ page }) => {
+  await signUpCompany(page, { companyName: `Wickham Sward ${runStamp}`, name: 'Nell Ambrose', email: emailFor('owner-404') });
+  await page.goto('/no-such-page');
+  await expect(page.getByRole('heading', { name: 'There is no page here' })).toBeVisible();
+  await expect(page.getByRole('navigation', { name: 'Sections' }).first()).toBeVisible();
+  await expectAccessible(page, 'Not found');
 });

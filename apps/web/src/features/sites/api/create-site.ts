@@ -16,6 +16,7 @@ export function useCreateSite(customerId: string) {
     mutationFn: (input: CreateSiteInput) => createSite(customerId, input),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: siteKeys.list(customerId) });
+      // The customers feature's key root, named rather than imported: features stay independent.
       await queryClient.invalidateQueries({ queryKey: ['customers'] });
     },
   });

@@ -13,6 +13,7 @@ export function useDeleteSite(customerId: string, siteId: string) {
     mutationFn: () => deleteSite(siteId),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: siteKeys.list(customerId) });
+      // The customers feature's key root (its site count changes), named rather than imported.
       await queryClient.invalidateQueries({ queryKey: ['customers'] });
     },
   });
