@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { NavLink } from 'react-router-dom';
 import { TurfMark } from '../../../components/ui/icons';
+import { NavigationProgress } from '../../../components/ui/navigation-progress';
 import { cn } from '../../../components/ui/cn';
 import { paths } from '../../../config/paths';
 import { useSession } from '../../../lib/session';
@@ -19,6 +20,7 @@ export function AppShell({ children }: { children: ReactNode }) {
 
   return (
     <div className="min-h-dvh md:flex">
+      <NavigationProgress />
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:z-50 focus:m-2 focus:rounded focus:bg-white focus:p-3">
         Skip to content
       </a>
