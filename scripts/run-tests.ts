@@ -13,7 +13,7 @@ import { say } from './lib/log.js';
 import { startMailSink } from './lib/maildev.js';
 import { ensureDatabase, recreateDatabase, startMariadb } from './lib/mariadb.js';
 import { projectRoot } from './lib/paths.js';
-import { runStep, startService, stopService, waitForHttp } from './lib/processes.js';
+import { runStep, runStepAsync, startService, stopService, waitForHttp } from './lib/processes.js';
 import {
   addCounts,
   readPlaywrightCounts,
@@ -83,7 +83,7 @@ await step('end-to-end tests (Chromium)', async () => {
   try {
     await waitForHttp(`${baseUrl}/api/health`, 60_000, api);
     const file = join(reportDir, 'e2e.json');
-    const code = runStep(
+    const code = await runStepAsync(
       'pnpm',
       ['--filter', '@seamwright/tests', 'run', 'e2e', '--reporter=list,json'],
       {

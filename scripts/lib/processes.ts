@@ -63,3 +63,19 @@ export async function waitForHttp(
   }
   throw new Error(`${url} did not answer within ${timeoutMs / 1000} s`);
 }
+
+/**
+ * Like runStep, but keeps this process's event loop running while the command works, for steps
+ * that talk to services hosted in this process (the mail sink, the processor fake).
+ */
+export function runStepAsync(
+  command: string,
+  args: string[],
+  env: NodeJS.ProcessEnv = process.env,
+): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(command, args, { cwd: projectRoot, stdio: 'inherit', env });
+    child.once('error', reject);
+    child.once('exit', (code) => resolve(code ?? 1));
+  });
+}
