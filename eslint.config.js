@@ -8,13 +8,23 @@ import globals from 'globals';
 const pureRestrictions = {
   patterns: [
     { group: ['node:*'], message: 'Pure packages do no I/O: no Node built-ins.' },
-    { group: ['express', 'sequelize', 'react', 'react-dom'], message: 'Pure packages stay framework-free.' },
+    {
+      group: ['express', 'sequelize', 'react', 'react-dom'],
+      message: 'Pure packages stay framework-free.',
+    },
   ],
 };
 
 export default tseslint.config(
   {
-    ignores: ['**/node_modules/**', '**/dist/**', '.data/**', '.tmp/**', '**/test-results/**', '**/playwright-report/**'],
+    ignores: [
+      '**/node_modules/**',
+      '**/dist/**',
+      '.data/**',
+      '.tmp/**',
+      '**/test-results/**',
+      '**/playwright-report/**',
+    ],
   },
   js.configs.recommended,
   ...tseslint.configs.recommendedTypeChecked,
@@ -25,7 +35,10 @@ export default tseslint.config(
     },
     rules: {
       '@typescript-eslint/no-floating-promises': 'error',
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       '@typescript-eslint/consistent-type-imports': 'error',
       'max-lines': ['warn', { max: 300, skipBlankLines: true, skipComments: true }],
     },
@@ -40,11 +53,18 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.browser } },
     rules: {
       ...reactHooks.configs.recommended.rules,
-      '@typescript-eslint/no-misused-promises': ['error', { checksVoidReturn: { attributes: false } }],
+      '@typescript-eslint/no-misused-promises': [
+        'error',
+        { checksVoidReturn: { attributes: false } },
+      ],
     },
   },
   {
-    files: ['packages/takeoff/src/**/*.ts', 'packages/domain/src/**/*.ts', 'packages/shared/src/**/*.ts'],
+    files: [
+      'packages/takeoff/src/**/*.ts',
+      'packages/domain/src/**/*.ts',
+      'packages/shared/src/**/*.ts',
+    ],
     ignores: ['**/*.test.ts', '**/cli/**'],
     rules: { 'no-restricted-imports': ['error', pureRestrictions] },
   },

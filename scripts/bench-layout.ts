@@ -32,7 +32,8 @@ const rows: string[] = [
   '|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---|',
 ];
 // Warm the JIT on every yard first so the first row is not penalised.
-for (const yard of sampleYards()) planLayout({ area: { outer: yard.outer, holes: yard.holes }, roll: { widthFt: 15 } });
+for (const yard of sampleYards())
+  planLayout({ area: { outer: yard.outer, holes: yard.holes }, roll: { widthFt: 15 } });
 for (const yard of sampleYards()) {
   const base = {
     area: { outer: yard.outer, holes: yard.holes },

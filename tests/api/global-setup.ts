@@ -13,7 +13,13 @@ export async function setup(): Promise<void> {
   const { db } = instances.test;
   const mariadb = await startMariadb('test', db.port);
   recreateDatabase(mariadb, db);
-  const sequelize = createSequelize({ host: '127.0.0.1', port: db.port, name: db.database, user: db.user, password: db.password });
+  const sequelize = createSequelize({
+    host: '127.0.0.1',
+    port: db.port,
+    name: db.database,
+    user: db.user,
+    password: db.password,
+  });
   try {
     await migrateDatabase(sequelize);
   } finally {

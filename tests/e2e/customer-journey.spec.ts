@@ -4,12 +4,24 @@
 import { expect, test, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { expectAccessible } from './support/a11y';
 import { linkFromMail } from './support/mail';
-import { acceptInvitation, emailFor, invite, password, rail, runStamp, signUpCompany } from './support/people';
+import {
+  acceptInvitation,
+  emailFor,
+  invite,
+  password,
+  rail,
+  runStamp,
+  signUpCompany,
+} from './support/people';
 import { baseUrl } from './support/servers';
 
 test.describe.configure({ mode: 'serial' });
 
-const firstCompany = { companyName: `Fernhollow Turf ${runStamp}`, name: 'Wren Halloway', email: emailFor('owner-a') };
+const firstCompany = {
+  companyName: `Fernhollow Turf ${runStamp}`,
+  name: 'Wren Halloway',
+  email: emailFor('owner-a'),
+};
 const officeEmail = emailFor('office-a');
 const crewEmail = emailFor('crew-a');
 const customerName = `Marlow Pettigrew ${runStamp}`;
@@ -29,7 +41,9 @@ test.afterAll(async () => {
   await Promise.all(contexts.map((c) => c.close()));
 });
 
-test('an owner signs up a company and invites an office user and a crew lead', async ({ browser }) => {
+test('an owner signs up a company and invites an office user and a crew lead', async ({
+  browser,
+}) => {
   const page = await newPage(browser);
   await signUpCompany(page, firstCompany);
   await expect(page.getByText(firstCompany.companyName).first()).toBeVisible();
@@ -47,11 +61,15 @@ test('an owner signs up a company and invites an office user and a crew lead', a
   await expect(waiting.getByText(crewEmail)).toBeVisible();
 });
 
-test('the office user follows the e-mailed link, sets a password and adds a customer with a site', async ({ browser }) => {
+test('the office user follows the e-mailed link, sets a password and adds a customer with a site', async ({
+  browser,
+}) => {
   const page = await newPage(browser);
   const invitationPath = await linkFromMail(officeEmail, /\/invitations\/[A-Za-z0-9_-]+/);
   await page.goto(invitationPath);
-  await expect(page.getByRole('heading', { name: `Join ${firstCompany.companyName}` })).toBeVisible();
+  await expect(
+    page.getByRole('heading', { name: `Join ${firstCompany.companyName}` }),
+  ).toBeVisible();
   await expect(page.getByText(officeEmail)).toBeVisible();
   await expect(page.getByText('Office', { exact: true })).toBeVisible();
   await expectAccessible(page, 'invitation');
@@ -104,16 +122,22 @@ test('the crew lead cannot open customers or their billing details', async ({ br
   const invitationPath = await linkFromMail(crewEmail, /\/invitations\/[A-Za-z0-9_-]+/);
   await acceptInvitation(page, invitationPath, 'Tamsin Orlov');
 
-  await expect(page.getByRole('heading', { name: 'No jobs assigned to your crew yet' })).toBeVisible();
+  await expect(
+    page.getByRole('heading', { name: 'No jobs assigned to your crew yet' }),
+  ).toBeVisible();
   await expect(page.getByRole('complementary', { name: /^Caution:/ })).toContainText('local codes');
   await expect(rail(page).getByRole('link', { name: 'Customers' })).toHaveCount(0);
   await expectAccessible(page, 'Today (crew lead)');
 
   await page.goto('/customers');
-  await expect(page.getByRole('heading', { name: 'Customers is not available for your role' })).toBeVisible();
+  await expect(
+    page.getByRole('heading', { name: 'Customers is not available for your role' }),
+  ).toBeVisible();
   await expectAccessible(page, 'Customers (crew lead, refused)');
   await page.goto(customerPath);
-  await expect(page.getByRole('heading', { name: 'Customers is not available for your role' })).toBeVisible();
+  await expect(
+    page.getByRole('heading', { name: 'Customers is not available for your role' }),
+  ).toBeVisible();
   await expect(page.getByText('marlow.p@example.test')).toHaveCount(0);
 
   // The server refuses as well; the client only hides.
@@ -128,7 +152,9 @@ test('the crew lead cannot open customers or their billing details', async ({ br
   await expectAccessible(page, 'Settings (crew lead)');
 });
 
-test('on a phone the crew lead gets one column and a bottom bar with Today only', async ({ browser }) => {
+test('on a phone the crew lead gets one column and a bottom bar with Today only', async ({
+  browser,
+}) => {
   const page = await newPage(browser, { width: 390, height: 844 });
   await page.goto('/sign-in');
   await page.getByLabel('E-mail').fill(crewEmail);
@@ -142,7 +168,11 @@ test('on a phone the crew lead gets one column and a bottom bar with Today only'
 test('a second company sees none of the first company’s customers', async ({ browser }) => {
   const page = await newPage(browser);
   secondOwnerPage = page;
-  await signUpCompany(page, { companyName: secondCompanyName, name: 'Oona Fairweather', email: emailFor('owner-b') });
+  await signUpCompany(page, {
+    companyName: secondCompanyName,
+    name: 'Oona Fairweather',
+    email: emailFor('owner-b'),
+  });
 
   await page.goto(`/customers?q=${encodeURIComponent('Pettigrew')}&status=all`);
   await expect(page.getByRole('heading', { name: 'No customers match' })).toBeVisible();
@@ -157,7 +187,9 @@ test('a second company sees none of the first company’s customers', async ({ b
   await expectAccessible(page, 'Customer page (other company, not found)');
 });
 
-test('someone in two companies switches between them and sees only the active one’s customers', async ({ browser }) => {
+test('someone in two companies switches between them and sees only the active one’s customers', async ({
+  browser,
+}) => {
   const owner = secondOwnerPage;
   if (!owner) throw new Error('the second company was not set up');
   await owner.goto('/settings');
@@ -181,7 +213,9 @@ test('someone in two companies switches between them and sees only the active on
   await sidebar.getByRole('button', { name: new RegExp(firstCompany.companyName) }).click();
   // The rail names the new company and role, and the switch list has closed.
   await expect(sidebar.getByText('Office', { exact: true })).toBeVisible();
-  await expect(sidebar.getByRole('button', { name: new RegExp(firstCompany.companyName) })).toHaveCount(0);
+  await expect(
+    sidebar.getByRole('button', { name: new RegExp(firstCompany.companyName) }),
+  ).toHaveCount(0);
   await expect(sidebar.getByText(firstCompany.companyName)).toBeVisible();
   await rail(page).getByRole('link', { name: 'Customers' }).click();
   await expect(page.getByRole('link', { name: customerName })).toBeVisible();

@@ -28,10 +28,32 @@ function nameCells(page: Page) {
   return page.getByRole('table').getByRole('row').locator('td:first-child a');
 }
 
-test('sorting, status filter and page size are kept in the URL and survive a reload', async ({ page }) => {
-  await signUpCompany(page, { companyName: `Brindle Yards ${runStamp}`, name: 'Perrin Vale', email: emailFor('owner-list') });
-  const ids = await addCustomers(page, ['Alder Nook', 'Bracken Hill', 'Cobble Lane', 'Dunlin Farm', 'Elmstead Park', 'Fallow Rise', 'Gorse End', 'Heron Reach', 'Ivybridge Court', 'Juniper Row', 'Kestrel Way', 'Lapwing Hollow']);
-  const archived = await page.request.patch(`/api/customers/${ids.get('Lapwing Hollow')}`, { data: { archived: true }, headers: await csrfHeaders(page) });
+test('sorting, status filter and page size are kept in the URL and survive a reload', async ({
+  page,
+}) => {
+  await signUpCompany(page, {
+    companyName: `Brindle Yards ${runStamp}`,
+    name: 'Perrin Vale',
+    email: emailFor('owner-list'),
+  });
+  const ids = await addCustomers(page, [
+    'Alder Nook',
+    'Bracken Hill',
+    'Cobble Lane',
+    'Dunlin Farm',
+    'Elmstead Park',
+    'Fallow Rise',
+    'Gorse End',
+    'Heron Reach',
+    'Ivybridge Court',
+    'Juniper Row',
+    'Kestrel Way',
+    'Lapwing Hollow',
+  ]);
+  const archived = await page.request.patch(`/api/customers/${ids.get('Lapwing Hollow')}`, {
+    data: { archived: true },
+    headers: await csrfHeaders(page),
+  });
   expect(archived.status()).toBe(200);
 
   await page.goto('/customers');
@@ -49,7 +71,10 @@ test('sorting, status filter and page size are kept in the URL and survive a rel
   await page.getByRole('button', { name: /^Name/ }).click();
   await expect(page).toHaveURL(/sort=-name/);
   await expect(nameCells(page).first()).toHaveText('Kestrel Way');
-  await expect(page.getByRole('columnheader', { name: /Name/ })).toHaveAttribute('aria-sort', 'descending');
+  await expect(page.getByRole('columnheader', { name: /Name/ })).toHaveAttribute(
+    'aria-sort',
+    'descending',
+  );
 
   await page.getByLabel('Rows per page').selectOption('10');
   await expect(page).toHaveURL(/pageSize=10/);
@@ -64,8 +89,14 @@ test('sorting, status filter and page size are kept in the URL and survive a rel
   await expectAccessible(page, 'Customers, page 2');
 });
 
-test('archive can be undone, delete asks once, and a site can be edited and deleted', async ({ page }) => {
-  await signUpCompany(page, { companyName: `Thornbury Greens ${runStamp}`, name: 'Ada Merrow', email: emailFor('owner-edit') });
+test('archive can be undone, delete asks once, and a site can be edited and deleted', async ({
+  page,
+}) => {
+  await signUpCompany(page, {
+    companyName: `Thornbury Greens ${runStamp}`,
+    name: 'Ada Merrow',
+    email: emailFor('owner-edit'),
+  });
   await addCustomers(page, ['Quenby Marsh']);
   await page.goto('/customers');
   await page.getByRole('link', { name: 'Quenby Marsh' }).click();
@@ -100,8 +131,14 @@ test('archive can be undone, delete asks once, and a site can be edited and dele
   await expect(page.getByText('Not counted yet')).toBeVisible();
 
   await page.getByRole('button', { name: 'Edit site 3 Sedge Walk' }).click();
-  await page.getByRole('form', { name: 'Save site' }).getByLabel('Pets').fill('Two terriers; keep the side gate shut.');
-  await page.getByRole('form', { name: 'Save site' }).getByRole('button', { name: 'Save site' }).click();
+  await page
+    .getByRole('form', { name: 'Save site' })
+    .getByLabel('Pets')
+    .fill('Two terriers; keep the side gate shut.');
+  await page
+    .getByRole('form', { name: 'Save site' })
+    .getByRole('button', { name: 'Save site' })
+    .click();
   await expect(page.getByText('Two terriers; keep the side gate shut.')).toBeVisible();
 
   await page.getByRole('button', { name: 'Delete site 3 Sedge Walk' }).click();
@@ -122,7 +159,11 @@ test('archive can be undone, delete asks once, and a site can be edited and dele
 });
 
 test('an address that is not a page says so inside the app frame', async ({ page }) => {
-  await signUpCompany(page, { companyName: `Wickham Sward ${runStamp}`, name: 'Nell Ambrose', email: emailFor('owner-404') });
+  await signUpCompany(page, {
+    companyName: `Wickham Sward ${runStamp}`,
+    name: 'Nell Ambrose',
+    email: emailFor('owner-404'),
+  });
   await page.goto('/no-such-page');
   await expect(page.getByRole('heading', { name: 'There is no page here' })).toBeVisible();
   await expect(page.getByRole('navigation', { name: 'Sections' }).first()).toBeVisible();

@@ -7,9 +7,15 @@ import { emailFor, runStamp, signUpCompany } from './support/people';
 
 test.use({ bypassCSP: true });
 
-test('a forgotten password is replaced through the e-mailed link, then sign-in returns to where you were', async ({ page }) => {
+test('a forgotten password is replaced through the e-mailed link, then sign-in returns to where you were', async ({
+  page,
+}) => {
   const email = emailFor('owner-reset');
-  await signUpCompany(page, { companyName: `Osier Fields ${runStamp}`, name: 'Bram Tolliver', email });
+  await signUpCompany(page, {
+    companyName: `Osier Fields ${runStamp}`,
+    name: 'Bram Tolliver',
+    email,
+  });
 
   await page.getByRole('complementary').getByText('Bram Tolliver').click();
   await page.getByRole('complementary').getByRole('button', { name: 'Sign out' }).click();

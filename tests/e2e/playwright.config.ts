@@ -33,7 +33,5 @@ export default defineConfig({
       ],
     },
   },
-  projects: [
-    { name: 'desktop', use: { viewport: { width: 1280, height: 800 } } },
-  ],
+  projects: [{ name: 'desktop', use: { viewport: { width: 1280, height: 800 } } }],
 });

@@ -4,7 +4,9 @@ import { expectAccessible } from './support/a11y';
 
 test.use({ bypassCSP: true }); // axe is injected as an inline script
 
-test('sign-in is reachable and accessible, and asks for a return path when sent there', async ({ page }) => {
+test('sign-in is reachable and accessible, and asks for a return path when sent there', async ({
+  page,
+}) => {
   await page.goto('/customers?q=lawn');
   await expect(page).toHaveURL(/\/sign-in\?next=%2Fcustomers%3Fq%3Dlawn/);
   await expect(page.getByRole('heading', { name: 'Sign in' })).toBeVisible();
@@ -33,7 +35,9 @@ test('forgot password confirms without saying whether the account exists', async
   await expectAccessible(page, 'Forgot password');
   await page.getByLabel('E-mail').fill('someone@e2e.seamwright.test');
   await page.getByRole('button', { name: 'Send me a reset link' }).click();
-  await expect(page.getByRole('status')).toContainText('If someone@e2e.seamwright.test has a Seamwright account');
+  await expect(page.getByRole('status')).toContainText(
+    'If someone@e2e.seamwright.test has a Seamwright account',
+  );
 });
 
 test('a reset link that does not work says so', async ({ page }) => {
@@ -46,6 +50,8 @@ test('a reset link that does not work says so', async ({ page }) => {
 
 test('an invitation link that does not work says so', async ({ page }) => {
   await page.goto('/invitations/not-a-real-token');
-  await expect(page.getByRole('heading', { name: 'This invitation link no longer works' })).toBeVisible();
+  await expect(
+    page.getByRole('heading', { name: 'This invitation link no longer works' }),
+  ).toBeVisible();
   await expectAccessible(page, 'Invitation (dead link)');
 });

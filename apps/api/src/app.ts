@@ -42,7 +42,12 @@ declare global {
 export function createApp(deps: AppDeps): Express {
   const { env, sequelize } = deps;
   const logger = deps.logger ?? createLogger(env.logLevel);
-  const services: ServiceDeps = { env, sequelize, logger, mailer: deps.mailer ?? createMailer(env.smtp) };
+  const services: ServiceDeps = {
+    env,
+    sequelize,
+    logger,
+    mailer: deps.mailer ?? createMailer(env.smtp),
+  };
   const store = deps.sessionStore ?? createSessionStore(sequelize, 0);
   const csrf = createCsrf(env);
 
@@ -57,7 +62,13 @@ export function createApp(deps: AppDeps): Express {
   registerApiRoutes(routes, services, csrf.issueToken);
   app.locals.apiRoutes = routes.entries;
 
-  app.use('/api', express.json({ limit: '1mb' }), createSessionMiddleware(env, store), csrf.verify, routes.router);
+  app.use(
+    '/api',
+    express.json({ limit: '1mb' }),
+    createSessionMiddleware(env, store),
+    csrf.verify,
+    routes.router,
+  );
   app.use('/api', apiNotFound);
   if (env.webDistDir) serveWebApp(app, env.webDistDir);
   app.use(errorHandler);

@@ -7,7 +7,11 @@ export class AppError extends Error {
   /** Extra response headers (e.g. Retry-After). */
   readonly headers: Record<string, string> | undefined;
 
-  constructor(code: ErrorCode, detail: string, options: { errors?: FieldError[]; headers?: Record<string, string> } = {}) {
+  constructor(
+    code: ErrorCode,
+    detail: string,
+    options: { errors?: FieldError[]; headers?: Record<string, string> } = {},
+  ) {
     super(detail);
     this.name = 'AppError';
     this.code = code;

@@ -11,17 +11,32 @@ describe('sign-up', () => {
     const client = await newClient(app);
     const email = uniqueEmail('signup');
     const res = await client
-      .post('/api/auth/signup', { companyName: 'Marrowgate Greens', name: 'Ada Owner', email: email.toUpperCase(), password: testPassword })
+      .post('/api/auth/signup', {
+        companyName: 'Marrowgate Greens',
+        name: 'Ada Owner',
+        email: email.toUpperCase(),
+        password: testPassword,
+      })
       .expect(201);
-    expect(res.body.data).toMatchObject({ user: { name: 'Ada Owner', email }, role: 'owner', company: { name: 'Marrowgate Greens', currency: 'USD' } });
+    expect(res.body.data).toMatchObject({
+      user: { name: 'Ada Owner', email },
+      role: 'owner',
+      company: { name: 'Marrowgate Greens', currency: 'USD' },
+    });
     expect(res.body.data.companies).toHaveLength(1);
     const cookie = String(res.headers['set-cookie']);
     expect(cookie).toMatch(/sw\.sid=.*HttpOnly/);
     expect(cookie).toMatch(/SameSite=Lax/);
     await client.get('/api/me').expect(200);
-    const rows = await selectRows(sequelize, 'SELECT password_hash FROM users WHERE email = ?', [email]);
+    const rows = await selectRows(sequelize, 'SELECT password_hash FROM users WHERE email = ?', [
+      email,
+    ]);
     expect(String(rows[0]?.password_hash)).toMatch(/^\$2[aby]\$04\$/);
-    const audit = await selectRows(sequelize, 'SELECT action FROM audit_events WHERE company_id = ?', [res.body.data.company.id]);
+    const audit = await selectRows(
+      sequelize,
+      'SELECT action FROM audit_events WHERE company_id = ?',
+      [res.body.data.company.id],
+    );
     expect(audit.map((a) => a.action)).toContain('company.created');
   });
 
@@ -30,21 +45,32 @@ describe('sign-up', () => {
     const first = await signUpCompany(app);
     const client = await newClient(app);
     const res = await client
-      .post('/api/auth/signup', { companyName: 'Duplicate Turf', name: 'Someone', email: first.email, password: testPassword })
+      .post('/api/auth/signup', {
+        companyName: 'Duplicate Turf',
+        name: 'Someone',
+        email: first.email,
+        password: testPassword,
+      })
       .expect(409);
     expect(res.body.code).toBe('EMAIL_TAKEN');
-    expect(await selectRows(sequelize, "SELECT id FROM companies WHERE name = 'Duplicate Turf'")).toHaveLength(0);
+    expect(
+      await selectRows(sequelize, "SELECT id FROM companies WHERE name = 'Duplicate Turf'"),
+    ).toHaveLength(0);
   });
 
   it('answers 400 with field paths for bad input and saves nothing', async () => {
     const { app, sequelize } = testApp();
     const client = await newClient(app);
     const email = uniqueEmail('bad');
-    const res = await client.post('/api/auth/signup', { companyName: '', name: 'X', email, password: 'short' }).expect(400);
+    const res = await client
+      .post('/api/auth/signup', { companyName: '', name: 'X', email, password: 'short' })
+      .expect(400);
     expect(res.body.code).toBe('VALIDATION_FAILED');
     const paths = (res.body.errors as { path: string }[]).map((e) => e.path);
     expect(paths).toEqual(expect.arrayContaining(['companyName', 'password']));
-    expect(await selectRows(sequelize, 'SELECT id FROM users WHERE email = ?', [email])).toHaveLength(0);
+    expect(
+      await selectRows(sequelize, 'SELECT id FROM users WHERE email = ?', [email]),
+    ).toHaveLength(0);
   });
 });
 
@@ -52,7 +78,10 @@ describe('CSRF', () => {
   it('rejects a state-changing request without the token with 403 CSRF_INVALID', async () => {
     const { app } = testApp();
     const client = await newClient(app);
-    const res = await client.agent.post('/api/auth/login').send({ email: 'x@y.test', password: 'whatever-long' }).expect(403);
+    const res = await client.agent
+      .post('/api/auth/login')
+      .send({ email: 'x@y.test', password: 'whatever-long' })
+      .expect(403);
     expect(res.body.code).toBe('CSRF_INVALID');
     expect(res.headers['content-type']).toMatch(/problem\+json/);
   });
@@ -69,7 +98,9 @@ describe('CSRF', () => {
     const { app } = testApp();
     const owner = await signUpCompany(app);
     await owner.client.post('/api/auth/logout').expect(204);
-    await owner.client.post('/api/auth/login', { email: owner.email, password: testPassword }).expect(200);
+    await owner.client
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(200);
     await owner.client.post('/api/customers', { name: 'After login' }).expect(201);
   });
 });
@@ -78,15 +109,35 @@ describe('sign-in, me and sign-out', () => {
   it('signs in with a new session id, reports me, and signs out clearing the session', async () => {
     const { app, sequelize } = testApp();
     const owner = await signUpCompany(app);
-    const before = String(owner.client.agent.jar.getCookie('sw.sid', { path: '/', domain: '127.0.0.1', secure: false, script: false })?.value);
-    const login = await owner.client.post('/api/auth/login', { email: owner.email, password: testPassword }).expect(200);
+    const before = String(
+      owner.client.agent.jar.getCookie('sw.sid', {
+        path: '/',
+        domain: '127.0.0.1',
+        secure: false,
+        script: false,
+      })?.value,
+    );
+    const login = await owner.client
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(200);
     expect(login.body.data.user.email).toBe(owner.email);
-    const after = String(owner.client.agent.jar.getCookie('sw.sid', { path: '/', domain: '127.0.0.1', secure: false, script: false })?.value);
+    const after = String(
+      owner.client.agent.jar.getCookie('sw.sid', {
+        path: '/',
+        domain: '127.0.0.1',
+        secure: false,
+        script: false,
+      })?.value,
+    );
     expect(after).not.toBe(before);
     const me = await owner.client.get('/api/me').expect(200);
     expect(me.body.data).toMatchObject({ role: 'owner', company: { id: owner.me.company.id } });
 
-    const sessionsBefore = await selectRows(sequelize, 'SELECT sid FROM sessions WHERE user_id = ?', [owner.me.user.id]);
+    const sessionsBefore = await selectRows(
+      sequelize,
+      'SELECT sid FROM sessions WHERE user_id = ?',
+      [owner.me.user.id],
+    );
     expect(sessionsBefore.length).toBeGreaterThan(0);
     const out = await owner.client.post('/api/auth/logout').expect(204);
     expect(String(out.headers['set-cookie'])).toMatch(/sw\.sid=;/);
@@ -97,8 +148,12 @@ describe('sign-in, me and sign-out', () => {
     const { app } = testApp();
     const owner = await signUpCompany(app);
     const client = await newClient(app);
-    const wrong = await client.post('/api/auth/login', { email: owner.email, password: 'not-the-password' }).expect(401);
-    const unknown = await client.post('/api/auth/login', { email: uniqueEmail('nobody'), password: 'not-the-password' }).expect(401);
+    const wrong = await client
+      .post('/api/auth/login', { email: owner.email, password: 'not-the-password' })
+      .expect(401);
+    const unknown = await client
+      .post('/api/auth/login', { email: uniqueEmail('nobody'), password: 'not-the-password' })
+      .expect(401);
     expect(wrong.body.code).toBe('INVALID_CREDENTIALS');
     expect(unknown.body.code).toBe('INVALID_CREDENTIALS');
     expect(unknown.body.detail).toBe(wrong.body.detail);
@@ -113,15 +168,27 @@ describe('sign-in, me and sign-out', () => {
     const { app } = testApp();
     const owner = await signUpCompany(app);
     const client = await newClient(app);
-    for (let i = 0; i < 4; i += 1) await client.post('/api/auth/login', { email: owner.email, password: 'wrong-password' }).expect(401);
-    await client.post('/api/auth/login', { email: owner.email, password: testPassword }).expect(200);
+    for (let i = 0; i < 4; i += 1)
+      await client
+        .post('/api/auth/login', { email: owner.email, password: 'wrong-password' })
+        .expect(401);
+    await client
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(200);
     // The success cleared the failures: five more wrong answers are allowed before the limit.
-    for (let i = 0; i < 5; i += 1) await client.post('/api/auth/login', { email: owner.email, password: 'wrong-password' }).expect(401);
-    const limited = await client.post('/api/auth/login', { email: owner.email, password: testPassword }).expect(429);
+    for (let i = 0; i < 5; i += 1)
+      await client
+        .post('/api/auth/login', { email: owner.email, password: 'wrong-password' })
+        .expect(401);
+    const limited = await client
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(429);
     expect(limited.body.code).toBe('RATE_LIMITED');
     expect(Number(limited.headers['retry-after'])).toBeGreaterThan(0);
     // Another e-mail from the same address is counted separately.
-    await client.post('/api/auth/login', { email: uniqueEmail('other'), password: 'wrong-password' }).expect(401);
+    await client
+      .post('/api/auth/login', { email: uniqueEmail('other'), password: 'wrong-password' })
+      .expect(401);
   });
 
   it('answers 400 for a malformed JSON body', async () => {

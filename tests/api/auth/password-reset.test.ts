@@ -26,13 +26,21 @@ describe('password reset', () => {
     // One hour, give or take the second the row took to write.
     expect(Math.abs(Number(reset?.seconds) - 3600)).toBeLessThanOrEqual(2);
 
-    await anonymous.post(`/api/auth/password-reset/${token}`, { password: newPassword }).expect(204);
+    await anonymous
+      .post(`/api/auth/password-reset/${token}`, { password: newPassword })
+      .expect(204);
     // The owner's earlier session is gone.
     await owner.client.get('/api/me').expect(401);
-    await anonymous.post('/api/auth/login', { email: owner.email, password: testPassword }).expect(401);
-    await anonymous.post('/api/auth/login', { email: owner.email, password: newPassword }).expect(200);
+    await anonymous
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(401);
+    await anonymous
+      .post('/api/auth/login', { email: owner.email, password: newPassword })
+      .expect(200);
 
-    const reused = await anonymous.post(`/api/auth/password-reset/${token}`, { password: 'yet-another-password' }).expect(410);
+    const reused = await anonymous
+      .post(`/api/auth/password-reset/${token}`, { password: 'yet-another-password' })
+      .expect(410);
     expect(reused.body.code).toBe('TOKEN_INVALID');
   });
 
@@ -58,14 +66,20 @@ describe('password reset', () => {
       [owner.me.user.id],
     );
     await client.post(`/api/auth/password-reset/${token}`, { password: newPassword }).expect(410);
-    await client.post('/api/auth/login', { email: owner.email, password: testPassword }).expect(200);
+    await client
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(200);
   });
 
   it('answers 410 for a made-up token and 400 for a too-short password', async () => {
     const { app } = testApp();
     const client = await newClient(app);
-    await client.post('/api/auth/password-reset/not-a-real-token', { password: newPassword }).expect(410);
-    const short = await client.post('/api/auth/password-reset/whatever', { password: 'short' }).expect(400);
+    await client
+      .post('/api/auth/password-reset/not-a-real-token', { password: newPassword })
+      .expect(410);
+    const short = await client
+      .post('/api/auth/password-reset/whatever', { password: 'short' })
+      .expect(400);
     expect(short.body.errors[0].path).toBe('password');
   });
 });

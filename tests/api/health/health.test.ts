@@ -26,7 +26,9 @@ describe('HTTP conventions', () => {
     const app = testApp().app;
     const kept = await request(app).get('/api/health').set('x-request-id', 'client-req-12345678');
     expect(kept.headers['x-request-id']).toBe('client-req-12345678');
-    const replaced = await request(app).get('/api/health').set('x-request-id', 'bad id with spaces<script>');
+    const replaced = await request(app)
+      .get('/api/health')
+      .set('x-request-id', 'bad id with spaces<script>');
     expect(replaced.headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
   });
 

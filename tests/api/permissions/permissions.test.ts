@@ -17,7 +17,10 @@ describe('permissions per role', () => {
     office = await addMember(app, owner.client, 'office');
     bookkeeper = await addMember(app, owner.client, 'bookkeeper');
     crew = await addMember(app, owner.client, 'crew_lead');
-    const customer = await createCustomer(owner.client, { email: 'billing@example.test', phone: '555 014 1234' });
+    const customer = await createCustomer(owner.client, {
+      email: 'billing@example.test',
+      phone: '555 014 1234',
+    });
     customerId = customer.id;
     siteId = (await createSite(owner.client, customerId)).id;
   });
@@ -45,22 +48,39 @@ describe('permissions per role', () => {
     await bookkeeper.client.post('/api/customers', { name: 'Nope' }).expect(403);
     await bookkeeper.client.patch(`/api/customers/${customerId}`, { name: 'Nope' }).expect(403);
     await bookkeeper.client.del(`/api/customers/${customerId}`).expect(403);
-    await bookkeeper.client.post(`/api/customers/${customerId}/sites`, { addressLine1: '1 A', city: 'B' }).expect(403);
+    await bookkeeper.client
+      .post(`/api/customers/${customerId}/sites`, { addressLine1: '1 A', city: 'B' })
+      .expect(403);
     await bookkeeper.client.patch(`/api/sites/${siteId}`, { label: 'x' }).expect(403);
   });
 
   it('office staff write customers and sites but cannot manage members, invitations, company or audit', async () => {
-    await office.client.patch(`/api/customers/${customerId}`, { notes: 'Office was here' }).expect(200);
+    await office.client
+      .patch(`/api/customers/${customerId}`, { notes: 'Office was here' })
+      .expect(200);
     await office.client.patch(`/api/sites/${siteId}`, { label: 'Front' }).expect(200);
     await office.client.get('/api/members').expect(403);
-    await office.client.post('/api/invitations', { email: 'x@example.test', role: 'office' }).expect(403);
+    await office.client
+      .post('/api/invitations', { email: 'x@example.test', role: 'office' })
+      .expect(403);
     await office.client.patch('/api/company', { name: 'Taken over' }).expect(403);
     await office.client.get('/api/audit-events').expect(403);
   });
 
   it('owners update the company settings', async () => {
-    const res = await owner.client.patch('/api/company', { name: 'Renamed Turf', timeZone: 'America/Chicago', measurementSystem: 'metric' }).expect(200);
-    expect(res.body.data).toMatchObject({ name: 'Renamed Turf', timeZone: 'America/Chicago', measurementSystem: 'metric', currency: 'USD' });
+    const res = await owner.client
+      .patch('/api/company', {
+        name: 'Renamed Turf',
+        timeZone: 'America/Chicago',
+        measurementSystem: 'metric',
+      })
+      .expect(200);
+    expect(res.body.data).toMatchObject({
+      name: 'Renamed Turf',
+      timeZone: 'America/Chicago',
+      measurementSystem: 'metric',
+      currency: 'USD',
+    });
     const bad = await owner.client.patch('/api/company', { timeZone: 'Mars/Olympus' }).expect(400);
     expect(bad.body.errors[0].path).toBe('timeZone');
   });

@@ -5,7 +5,15 @@ import { addMember, signUpCompany } from '../../fixtures/factories.js';
 
 // The request and plan shapes are the planner contract in DOMAIN.md.
 const rectangle = {
-  area: { outer: [[0, 0], [30, 0], [30, 20], [0, 20]], holes: [] },
+  area: {
+    outer: [
+      [0, 0],
+      [30, 0],
+      [30, 20],
+      [0, 20],
+    ],
+    holes: [],
+  },
   roll: { widthFt: 15, maxLengthFt: 100 },
   grain: { angleDeg: 90 },
   lengthStepFt: 1,
@@ -23,11 +31,20 @@ describe('POST /api/plans/preview', () => {
     expect(res.body.data.seams.count).toBe(1);
   });
 
-  it('answers 422 with the planner\'s message and a field path for an impossible area', async () => {
+  it("answers 422 with the planner's message and a field path for an impossible area", async () => {
     const { app } = testApp();
     const owner = await signUpCompany(app);
     const res = await owner.client
-      .post('/api/plans/preview', { ...rectangle, area: { outer: [[0, 0], [10, 0]], holes: [] } })
+      .post('/api/plans/preview', {
+        ...rectangle,
+        area: {
+          outer: [
+            [0, 0],
+            [10, 0],
+          ],
+          holes: [],
+        },
+      })
       .expect(422);
     expect(res.body.code).toBe('UNPROCESSABLE');
     expect(res.body.detail).toContain('area.outer');
@@ -45,6 +62,10 @@ describe('POST /api/plans/preview', () => {
       .expect(400);
     const anonymous = request.agent(app);
     const token = (await anonymous.get('/api/auth/csrf')).body.data.token as string;
-    await anonymous.post('/api/plans/preview').set('x-csrf-token', token).send(rectangle).expect(401);
+    await anonymous
+      .post('/api/plans/preview')
+      .set('x-csrf-token', token)
+      .send(rectangle)
+      .expect(401);
   });
 });

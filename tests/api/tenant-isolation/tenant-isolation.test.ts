@@ -5,7 +5,13 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
-import { addMember, createCustomer, createSite, signUpCompany, uniqueEmail } from '../../fixtures/factories.js';
+import {
+  addMember,
+  createCustomer,
+  createSite,
+  signUpCompany,
+  uniqueEmail,
+} from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
 interface World {
@@ -18,7 +24,8 @@ interface World {
   aOfficeMemberId: string;
 }
 
-type Probe = { kind: 'public'; why: string } | { kind: 'tenant'; run: (b: Client, w: World) => Promise<void> };
+type Probe =
+  { kind: 'public'; why: string } | { kind: 'tenant'; run: (b: Client, w: World) => Promise<void> };
 
 const notFound = async (pending: PromiseLike<{ status: number; body: { code?: string } }>) => {
   const res = await pending;
@@ -33,11 +40,17 @@ const probes: Record<string, Probe> = {
   'get /api/auth/csrf': { kind: 'public', why: 'issues a CSRF token only' },
   'post /api/auth/signup': { kind: 'public', why: 'creates a new company' },
   'post /api/auth/login': { kind: 'public', why: 'credentials, no company data' },
-  'post /api/auth/logout': { kind: 'public', why: 'ends the caller\'s own session' },
+  'post /api/auth/logout': { kind: 'public', why: "ends the caller's own session" },
   'post /api/auth/password-reset': { kind: 'public', why: 'always 202, no data' },
-  'post /api/auth/password-reset/:token': { kind: 'public', why: 'the e-mailed token is the credential' },
+  'post /api/auth/password-reset/:token': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
   'get /api/invitations/:token': { kind: 'public', why: 'the e-mailed token is the credential' },
-  'post /api/invitations/:token/accept': { kind: 'public', why: 'the e-mailed token is the credential' },
+  'post /api/invitations/:token/accept': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
 
   'get /api/me': {
     kind: 'tenant',
@@ -47,7 +60,10 @@ const probes: Record<string, Probe> = {
       expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
     },
   },
-  'post /api/me/company': { kind: 'tenant', run: (b, w) => notFound(b.post('/api/me/company', { companyId: w.a.me.company.id })) },
+  'post /api/me/company': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post('/api/me/company', { companyId: w.a.me.company.id })),
+  },
   'get /api/company': {
     kind: 'tenant',
     run: async (b, w) => {
@@ -57,7 +73,13 @@ const probes: Record<string, Probe> = {
   'patch /api/company': {
     kind: 'tenant',
     run: async (b, w) => {
-      const res = await b.patch('/api/company', { name: 'B renamed', id: w.a.me.company.id, companyId: w.a.me.company.id }).expect(200);
+      const res = await b
+        .patch('/api/company', {
+          name: 'B renamed',
+          id: w.a.me.company.id,
+          companyId: w.a.me.company.id,
+        })
+        .expect(200);
       expect(res.body.data.id).toBe(w.b.me.company.id);
     },
   },
@@ -69,21 +91,38 @@ const probes: Record<string, Probe> = {
       expect(ids).not.toContain(w.aOwnerMemberId);
     },
   },
-  'patch /api/members/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/members/${w.aOfficeMemberId}`, { role: 'owner' })) },
-  'delete /api/members/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/members/${w.aOfficeMemberId}`)) },
+  'patch /api/members/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/members/${w.aOfficeMemberId}`, { role: 'owner' })),
+  },
+  'delete /api/members/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/members/${w.aOfficeMemberId}`)),
+  },
   'get /api/invitations': {
     kind: 'tenant',
     run: async (b, w) => {
-      expect(idsOf((await b.get('/api/invitations').expect(200)).body)).not.toContain(w.aInvitationId);
+      expect(idsOf((await b.get('/api/invitations').expect(200)).body)).not.toContain(
+        w.aInvitationId,
+      );
     },
   },
   'post /api/invitations': {
     kind: 'tenant',
     run: async (b, w) => {
-      await b.post('/api/invitations', { email: uniqueEmail('b-invite'), role: 'office', companyId: w.a.me.company.id }).expect(201);
+      await b
+        .post('/api/invitations', {
+          email: uniqueEmail('b-invite'),
+          role: 'office',
+          companyId: w.a.me.company.id,
+        })
+        .expect(201);
     },
   },
-  'delete /api/invitations/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/invitations/${w.aInvitationId}`)) },
+  'delete /api/invitations/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/invitations/${w.aInvitationId}`)),
+  },
   'get /api/customers': {
     kind: 'tenant',
     run: async (b, w) => {
@@ -100,22 +139,60 @@ const probes: Record<string, Probe> = {
       await b.post('/api/customers', { name: 'B extra' }).expect(201);
     },
   },
-  'get /api/customers/:id': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}`)) },
-  'patch /api/customers/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/customers/${w.aCustomerId}`, { name: 'Hijacked', archived: true })) },
-  'delete /api/customers/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/customers/${w.aCustomerId}`)) },
-  'get /api/customers/:id/sites': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}/sites`)) },
+  'get /api/customers/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}`)),
+  },
+  'patch /api/customers/:id': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.patch(`/api/customers/${w.aCustomerId}`, { name: 'Hijacked', archived: true })),
+  },
+  'delete /api/customers/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/customers/${w.aCustomerId}`)),
+  },
+  'get /api/customers/:id/sites': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}/sites`)),
+  },
   'post /api/customers/:id/sites': {
     kind: 'tenant',
-    run: (b, w) => notFound(b.post(`/api/customers/${w.aCustomerId}/sites`, { addressLine1: '1 Intruder Way', city: 'Elsewhere' })),
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/customers/${w.aCustomerId}/sites`, {
+          addressLine1: '1 Intruder Way',
+          city: 'Elsewhere',
+        }),
+      ),
   },
-  'get /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.get(`/api/sites/${w.aSiteId}`)) },
-  'patch /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.patch(`/api/sites/${w.aSiteId}`, { hazards: 'Hijacked' })) },
-  'delete /api/sites/:id': { kind: 'tenant', run: (b, w) => notFound(b.del(`/api/sites/${w.aSiteId}`)) },
+  'get /api/sites/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/sites/${w.aSiteId}`)),
+  },
+  'patch /api/sites/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/sites/${w.aSiteId}`, { hazards: 'Hijacked' })),
+  },
+  'delete /api/sites/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/sites/${w.aSiteId}`)),
+  },
   'post /api/plans/preview': {
     kind: 'tenant',
     run: async (b) => {
       // Stateless computation: reads and writes no company rows.
-      const body = { area: { outer: [[0, 0], [12, 0], [12, 10], [0, 10]] }, roll: { widthFt: 12 } };
+      const body = {
+        area: {
+          outer: [
+            [0, 0],
+            [12, 0],
+            [12, 10],
+            [0, 10],
+          ],
+        },
+        roll: { widthFt: 12 },
+      };
       await b.post('/api/plans/preview', body).expect(200);
     },
   },
@@ -136,8 +213,12 @@ async function snapshotOfA(w: World) {
   return {
     company: await q('SELECT name, time_zone FROM companies WHERE id = ?'),
     members: await q('SELECT id, user_id, role FROM memberships WHERE company_id = ? ORDER BY id'),
-    invitations: await q('SELECT id, email, accepted_at FROM invitations WHERE company_id = ? ORDER BY id'),
-    customers: await q('SELECT id, name, archived_at, updated_at FROM customers WHERE company_id = ? ORDER BY id'),
+    invitations: await q(
+      'SELECT id, email, accepted_at FROM invitations WHERE company_id = ? ORDER BY id',
+    ),
+    customers: await q(
+      'SELECT id, name, archived_at, updated_at FROM customers WHERE company_id = ? ORDER BY id',
+    ),
     sites: await q('SELECT id, hazards, updated_at FROM sites WHERE company_id = ? ORDER BY id'),
   };
 }
@@ -150,10 +231,18 @@ describe('tenant isolation', () => {
     const a = await signUpCompany(app, 'Alpha Turf Isolation');
     const b = await signUpCompany(app, 'Bravo Turf Isolation');
     const office = await addMember(app, a.client, 'office');
-    const aCustomer = await createCustomer(a.client, { name: 'Alpha Customer', email: 'alpha@example.test' });
+    const aCustomer = await createCustomer(a.client, {
+      name: 'Alpha Customer',
+      email: 'alpha@example.test',
+    });
     const aSite = await createSite(a.client, aCustomer.id, { hazards: 'Alpha hazard' });
-    const invitation = await a.client.post('/api/invitations', { email: uniqueEmail('alpha-pending'), role: 'bookkeeper' }).expect(201);
-    const members = (await a.client.get('/api/members').expect(200)).body.data as { id: string; userId: string }[];
+    const invitation = await a.client
+      .post('/api/invitations', { email: uniqueEmail('alpha-pending'), role: 'bookkeeper' })
+      .expect(201);
+    const members = (await a.client.get('/api/members').expect(200)).body.data as {
+      id: string;
+      userId: string;
+    }[];
     await createCustomer(b.client, { name: 'Bravo Customer' });
     world = {
       a,
@@ -167,7 +256,7 @@ describe('tenant isolation', () => {
   });
 
   it('has an isolation probe for every registered route, and no probe for a route that is gone', () => {
-    const registered = (testApp().app.locals.apiRoutes).map((r) => `${r.method} ${r.path}`);
+    const registered = testApp().app.locals.apiRoutes.map((r) => `${r.method} ${r.path}`);
     expect(registered.length).toBeGreaterThan(20);
     expect(registered.filter((key) => !(key in probes))).toEqual([]);
     expect(Object.keys(probes).filter((key) => !registered.includes(key))).toEqual([]);
@@ -199,10 +288,14 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
   });
 
-  it('ignores a companyId sent in the body: rows land in the caller\'s own company', async () => {
+  it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {
     const { sequelize } = testApp();
-    const res = await world.b.client.post('/api/customers', { name: 'Smuggled', companyId: world.a.me.company.id }).expect(201);
-    const [row] = await selectRows(sequelize, 'SELECT company_id FROM customers WHERE id = ?', [res.body.data.id]);
+    const res = await world.b.client
+      .post('/api/customers', { name: 'Smuggled', companyId: world.a.me.company.id })
+      .expect(201);
+    const [row] = await selectRows(sequelize, 'SELECT company_id FROM customers WHERE id = ?', [
+      res.body.data.id,
+    ]);
     expect(row?.company_id).toBe(world.b.me.company.id);
   });
 });

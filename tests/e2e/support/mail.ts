@@ -26,7 +26,9 @@ export async function linkFromMail(address: string, pattern: RegExp): Promise<st
   await expect
     .poll(
       async () => {
-        const messages = (await listMail()).filter((m) => m.to.some((to) => to.address.toLowerCase() === address.toLowerCase()));
+        const messages = (await listMail()).filter((m) =>
+          m.to.some((to) => to.address.toLowerCase() === address.toLowerCase()),
+        );
         messages.sort((a, b) => b.time.localeCompare(a.time));
         for (const message of messages) {
           const body = `${message.text ?? ''}\n${message.html ?? ''}`;

@@ -29,13 +29,21 @@ const envSchema = z
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
     /** Failed sign-ins allowed per IP + e-mail within the window before 429. */
     LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(5),
-    LOGIN_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
+    LOGIN_WINDOW_MS: z.coerce
+      .number()
+      .int()
+      .min(1000)
+      .default(15 * 60 * 1000),
     /** Serve sessions over https only (defaults to true in production). */
     COOKIE_SECURE: booleanish.optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV === 'production' && !value.SESSION_SECRET) {
-      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'SESSION_SECRET is required in production' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SESSION_SECRET'],
+        message: 'SESSION_SECRET is required in production',
+      });
     }
   });
 
@@ -76,7 +84,13 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
   return {
     nodeEnv: e.NODE_ENV,
     port: e.PORT,
-    db: { host: e.DB_HOST, port: e.DB_PORT, name: e.DB_NAME, user: e.DB_USER, password: e.DB_PASSWORD },
+    db: {
+      host: e.DB_HOST,
+      port: e.DB_PORT,
+      name: e.DB_NAME,
+      user: e.DB_USER,
+      password: e.DB_PASSWORD,
+    },
     sessionSecret: e.SESSION_SECRET ?? devSessionSecret,
     appUrl: (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, ''),
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, from: e.MAIL_FROM },

@@ -12,6 +12,10 @@ export function selectRows<T extends object = Record<string, unknown>>(
 }
 
 /** Runs an UPDATE/DELETE/INSERT statement. */
-export async function executeSql(sequelize: Sequelize, sql: string, replacements: unknown[] = []): Promise<void> {
+export async function executeSql(
+  sequelize: Sequelize,
+  sql: string,
+  replacements: unknown[] = [],
+): Promise<void> {
   await sequelize.query(sql, { replacements, type: QueryTypes.UPDATE });
 }

@@ -37,11 +37,16 @@ export function scoped<M extends TenantModel>(ctx: RequestContext, model: ModelS
     ...(options.order ? { order: options.order } : {}),
     ...(options.limit !== undefined ? { limit: options.limit } : {}),
     ...(options.offset !== undefined ? { offset: options.offset } : {}),
-    ...(options.tx ? { transaction: options.tx, ...(options.lock ? { lock: options.tx.LOCK.UPDATE } : {}) } : {}),
+    ...(options.tx
+      ? { transaction: options.tx, ...(options.lock ? { lock: options.tx.LOCK.UPDATE } : {}) }
+      : {}),
   });
 
   return {
-    async findById(id: string, options: Omit<ScopedFindOptions<M>, 'where'> = {}): Promise<Attributes<M> | null> {
+    async findById(
+      id: string,
+      options: Omit<ScopedFindOptions<M>, 'where'> = {},
+    ): Promise<Attributes<M> | null> {
       const row = await model.findOne(findOptions({ ...options, where: asWhere({ id }) }));
       return row ? (row.get({ plain: true }) as Attributes<M>) : null;
     },
@@ -53,11 +58,18 @@ export function scoped<M extends TenantModel>(ctx: RequestContext, model: ModelS
       return model.count({ where: withCompany(where), ...(tx ? { transaction: tx } : {}) });
     },
     async create(values: Omit<CreationAttributes<M>, 'companyId'>, tx: Tx): Promise<Attributes<M>> {
-      const row = await model.create({ ...values, companyId: ctx.companyId } as unknown as CreationAttributes<M>, { transaction: tx });
+      const row = await model.create(
+        { ...values, companyId: ctx.companyId } as unknown as CreationAttributes<M>,
+        { transaction: tx },
+      );
       return row.get({ plain: true }) as Attributes<M>;
     },
     /** Updates the row with `id` in this company; returns false when there is none. */
-    async update(id: string, values: Partial<Omit<Attributes<M>, 'companyId' | 'id'>>, tx: Tx): Promise<boolean> {
+    async update(
+      id: string,
+      values: Partial<Omit<Attributes<M>, 'companyId' | 'id'>>,
+      tx: Tx,
+    ): Promise<boolean> {
       const [count] = await model.update(values as unknown as Partial<Attributes<M>>, {
         where: withCompany(asWhere({ id })),
         transaction: tx,

@@ -23,7 +23,8 @@ function readCookie(req: Request, name: string): string | undefined {
   if (!header) return undefined;
   for (const part of header.split(';')) {
     const index = part.indexOf('=');
-    if (index > 0 && part.slice(0, index).trim() === name) return decodeURIComponent(part.slice(index + 1).trim());
+    if (index > 0 && part.slice(0, index).trim() === name)
+      return decodeURIComponent(part.slice(index + 1).trim());
   }
   return undefined;
 }
@@ -39,7 +40,12 @@ function safeEqual(a: string, b: string): boolean {
 }
 
 export function createCsrf(env: Env) {
-  const cookieOptions = { httpOnly: true, sameSite: 'lax' as const, secure: env.cookieSecure, path: '/' };
+  const cookieOptions = {
+    httpOnly: true,
+    sameSite: 'lax' as const,
+    secure: env.cookieSecure,
+    path: '/',
+  };
 
   /** Returns the token for the caller's secret, creating and setting the secret if needed. */
   function issueToken(req: Request, res: Response): string {
@@ -56,8 +62,18 @@ export function createCsrf(env: Env) {
     if (safeMethods.has(req.method)) return next();
     const secret = readCookie(req, csrfCookieName);
     const sent = req.get(csrfHeaderName);
-    if (!secret || !secretPattern.test(secret) || !sent || !safeEqual(sent, tokenFor(secret, env.sessionSecret))) {
-      return next(new AppError('CSRF_INVALID', 'Missing or invalid CSRF token; fetch GET /api/auth/csrf and send it in x-csrf-token'));
+    if (
+      !secret ||
+      !secretPattern.test(secret) ||
+      !sent ||
+      !safeEqual(sent, tokenFor(secret, env.sessionSecret))
+    ) {
+      return next(
+        new AppError(
+          'CSRF_INVALID',
+          'Missing or invalid CSRF token; fetch GET /api/auth/csrf and send it in x-csrf-token',
+        ),
+      );
     }
     next();
   };

@@ -24,7 +24,10 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, req, res, _nex
     appError = new AppError('PAYLOAD_TOO_LARGE', 'The request body is too large');
   } else {
     req.log.error({ err: error, requestId }, 'unhandled error');
-    appError = new AppError('INTERNAL', 'An unexpected error occurred. Quote the request id if you report it.');
+    appError = new AppError(
+      'INTERNAL',
+      'An unexpected error occurred. Quote the request id if you report it.',
+    );
   }
   if (res.headersSent) return;
   sendProblem(res, appError, requestId);

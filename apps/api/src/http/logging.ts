@@ -9,7 +9,10 @@ import { pinoHttp } from 'pino-http';
 const wellFormedRequestId = /^[A-Za-z0-9._-]{8,128}$/;
 
 export function createLogger(level: string): Logger {
-  return pino({ level, redact: ['req.headers.cookie', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]'] });
+  return pino({
+    level,
+    redact: ['req.headers.cookie', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]'],
+  });
 }
 
 /** pino-http middleware that also assigns and echoes `x-request-id`. */
@@ -18,13 +21,20 @@ export function createHttpLogger(logger: Logger) {
     logger,
     genReqId(req: IncomingMessage, res: ServerResponse) {
       const incoming = req.headers['x-request-id'];
-      const id = typeof incoming === 'string' && wellFormedRequestId.test(incoming) ? incoming : randomUUID();
+      const id =
+        typeof incoming === 'string' && wellFormedRequestId.test(incoming)
+          ? incoming
+          : randomUUID();
       res.setHeader('x-request-id', id);
       return id;
     },
     customProps: (req) => ({ requestId: req.id }),
     serializers: {
-      req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+      req: (req: { id: unknown; method: string; url: string }) => ({
+        id: req.id,
+        method: req.method,
+        url: req.url,
+      }),
     },
   });
 }

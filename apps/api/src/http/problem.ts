@@ -36,7 +36,11 @@ const titles: Record<ErrorCode, string> = {
   INTERNAL: 'Something went wrong on our side',
 };
 
-export function problemFor(code: ErrorCode, detail: string | undefined, requestId: string | undefined): ProblemDetails {
+export function problemFor(
+  code: ErrorCode,
+  detail: string | undefined,
+  requestId: string | undefined,
+): ProblemDetails {
   return {
     type: `https://seamwright.test/problems/${code.toLowerCase().replace(/_/g, '-')}`,
     title: titles[code],

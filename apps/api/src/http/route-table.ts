@@ -30,11 +30,21 @@ export class RouteTable {
 
   constructor(private readonly prefix: string) {}
 
-  add(method: HttpMethod, path: string, options: RouteOptions, ...handlers: RequestHandler[]): void {
+  add(
+    method: HttpMethod,
+    path: string,
+    options: RouteOptions,
+    ...handlers: RequestHandler[]
+  ): void {
     const chain: RequestHandler[] = [];
     if (options.access === 'tenant') chain.push(requireTenant);
     if (options.permission) chain.push(requirePermission(options.permission));
     this.router[method](path, ...chain, ...handlers);
-    this.entries.push({ method, path: `${this.prefix}${path}`, access: options.access, permission: options.permission ?? null });
+    this.entries.push({
+      method,
+      path: `${this.prefix}${path}`,
+      access: options.access,
+      permission: options.permission ?? null,
+    });
   }
 }

@@ -23,14 +23,20 @@ export type SessionStore = InstanceType<typeof SequelizeStore>;
  * The store. `checkExpirationInterval` 0 disables the background sweep (tests); the server
  * passes a real interval and calls `stopExpiringSessions()` on shutdown.
  */
-export function createSessionStore(sequelize: Sequelize, checkExpirationIntervalMs: number): SessionStore {
+export function createSessionStore(
+  sequelize: Sequelize,
+  checkExpirationIntervalMs: number,
+): SessionStore {
   return new SequelizeStore({
     db: sequelize,
     table: 'Session',
     checkExpirationInterval: checkExpirationIntervalMs,
     expiration: sessionMaxAgeMs,
     // Copy the user id into its own column so a password reset can end that user's sessions.
-    extendDefaultFields: (defaults, data: { userId?: string }) => ({ ...defaults, userId: data.userId ?? null }),
+    extendDefaultFields: (defaults, data: { userId?: string }) => ({
+      ...defaults,
+      userId: data.userId ?? null,
+    }),
   });
 }
 
@@ -54,18 +60,29 @@ export function createSessionMiddleware(env: Env, store: SessionStore): RequestH
 
 /** Starts a fresh session (new id, defeating fixation) for the user in the given company. */
 export async function signIn(req: Request, userId: string, companyId: string): Promise<void> {
-  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err as Error) : resolve())));
+  await new Promise<void>((resolve, reject) =>
+    req.session.regenerate((err) => (err ? reject(err as Error) : resolve())),
+  );
   req.session.userId = userId;
   req.session.companyId = companyId;
   await saveSession(req);
 }
 
 export function saveSession(req: Request): Promise<void> {
-  return new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err as Error) : resolve())));
+  return new Promise<void>((resolve, reject) =>
+    req.session.save((err) => (err ? reject(err as Error) : resolve())),
+  );
 }
 
 /** Destroys the session row and clears the cookie. */
 export async function signOut(req: Request, res: Response, env: Env): Promise<void> {
-  await new Promise<void>((resolve, reject) => req.session.destroy((err) => (err ? reject(err as Error) : resolve())));
-  res.clearCookie(sessionCookieName, { httpOnly: true, sameSite: 'lax', secure: env.cookieSecure, path: '/' });
+  await new Promise<void>((resolve, reject) =>
+    req.session.destroy((err) => (err ? reject(err as Error) : resolve())),
+  );
+  res.clearCookie(sessionCookieName, {
+    httpOnly: true,
+    sameSite: 'lax',
+    secure: env.cookieSecure,
+    path: '/',
+  });
 }

@@ -17,6 +17,7 @@ const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{1
 
 /** A path id that is not a UUID cannot name any row: answer 404 rather than hit the database. */
 export function parseId(value: unknown, what: string): string {
-  if (typeof value !== 'string' || !uuidPattern.test(value)) throw new AppError('NOT_FOUND', `${what} not found`);
+  if (typeof value !== 'string' || !uuidPattern.test(value))
+    throw new AppError('NOT_FOUND', `${what} not found`);
   return value.toLowerCase();
 }

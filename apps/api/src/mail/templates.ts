@@ -18,7 +18,12 @@ function htmlFrom(paragraphs: string[], link: { href: string; label: string }): 
   return `<!doctype html><html><body style="font-family: sans-serif">${body}\n${button}</body></html>`;
 }
 
-export function invitationMail(input: { companyName: string; inviterName: string; role: Role; link: string }): MailContent {
+export function invitationMail(input: {
+  companyName: string;
+  inviterName: string;
+  role: Role;
+  link: string;
+}): MailContent {
   const lines = [
     `${input.inviterName} has asked you to join ${input.companyName} on Seamwright as ${roleLabels[input.role]}.`,
     'Open the link below to set up your sign-in. The link works for 7 days and only once.',

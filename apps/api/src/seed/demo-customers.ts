@@ -27,7 +27,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '(555) 014-2207',
     notes: 'Wants the back yard done before the spring party.',
     sites: [
-      { label: 'Back yard', addressLine1: '14 Larkspur Bend', accessNotes: 'Side gate code 4471; latch sticks.', pets: 'Two beagles, kept inside on install days.', hazards: 'Shallow gas line along the north fence (marked last year).', sprinklerHeads: 9 },
+      {
+        label: 'Back yard',
+        addressLine1: '14 Larkspur Bend',
+        accessNotes: 'Side gate code 4471; latch sticks.',
+        pets: 'Two beagles, kept inside on install days.',
+        hazards: 'Shallow gas line along the north fence (marked last year).',
+        sprinklerHeads: 9,
+      },
     ],
   },
   {
@@ -36,8 +43,22 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555-014-3390',
     notes: null,
     sites: [
-      { label: 'Front lawn', addressLine1: '202 Thimbleweed Row', accessNotes: 'Park on the street; driveway is shared.', pets: null, hazards: 'Steep slope by the mailbox.', sprinklerHeads: 6 },
-      { label: 'Dog run', addressLine1: '202 Thimbleweed Row', accessNotes: 'Through the garage.', pets: 'Large husky; needs pet infill.', hazards: null, sprinklerHeads: 0 },
+      {
+        label: 'Front lawn',
+        addressLine1: '202 Thimbleweed Row',
+        accessNotes: 'Park on the street; driveway is shared.',
+        pets: null,
+        hazards: 'Steep slope by the mailbox.',
+        sprinklerHeads: 6,
+      },
+      {
+        label: 'Dog run',
+        addressLine1: '202 Thimbleweed Row',
+        accessNotes: 'Through the garage.',
+        pets: 'Large husky; needs pet infill.',
+        hazards: null,
+        sprinklerHeads: 0,
+      },
     ],
   },
   {
@@ -46,7 +67,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555 014 8812',
     notes: 'Play area: fall-height padding under the climbing frame.',
     sites: [
-      { label: 'Play yard', addressLine1: '9 Corbel Street', accessNotes: 'Work only after 6 pm or on weekends.', pets: null, hazards: 'Children on site in daytime; fence the work area.', sprinklerHeads: 14 },
+      {
+        label: 'Play yard',
+        addressLine1: '9 Corbel Street',
+        accessNotes: 'Work only after 6 pm or on weekends.',
+        pets: null,
+        hazards: 'Children on site in daytime; fence the work area.',
+        sprinklerHeads: 14,
+      },
     ],
   },
   {
@@ -55,7 +83,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '(555) 014-6620',
     notes: null,
     sites: [
-      { label: null, addressLine1: '77 Hollowmint Lane', accessNotes: 'Narrow side path, 34 in wide: carry rolls by hand.', pets: 'Cat', hazards: null, sprinklerHeads: 4 },
+      {
+        label: null,
+        addressLine1: '77 Hollowmint Lane',
+        accessNotes: 'Narrow side path, 34 in wide: carry rolls by hand.',
+        pets: 'Cat',
+        hazards: null,
+        sprinklerHeads: 4,
+      },
     ],
   },
   {
@@ -64,7 +99,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555-014-1188',
     notes: 'Putting green; asks for a fast-roll surface.',
     sites: [
-      { label: 'Practice green', addressLine1: '1 Dunmore Pike', accessNotes: 'Check in at the clubhouse.', pets: null, hazards: 'Irrigation main crosses the east corner.', sprinklerHeads: 11 },
+      {
+        label: 'Practice green',
+        addressLine1: '1 Dunmore Pike',
+        accessNotes: 'Check in at the clubhouse.',
+        pets: null,
+        hazards: 'Irrigation main crosses the east corner.',
+        sprinklerHeads: 11,
+      },
     ],
   },
   {
@@ -73,7 +115,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555 014 7043',
     notes: 'Prefers phone calls; no e-mail.',
     sites: [
-      { label: 'Courtyard', addressLine1: '31 Saltbush Court', accessNotes: 'Key under the blue planter.', pets: null, hazards: 'Wasp nest under the eaves.', sprinklerHeads: 3 },
+      {
+        label: 'Courtyard',
+        addressLine1: '31 Saltbush Court',
+        accessNotes: 'Key under the blue planter.',
+        pets: null,
+        hazards: 'Wasp nest under the eaves.',
+        sprinklerHeads: 3,
+      },
     ],
   },
   {
@@ -82,8 +131,22 @@ export const demoCustomers: DemoCustomer[] = [
     phone: null,
     notes: null,
     sites: [
-      { label: 'Side strip', addressLine1: '508 Wrenfield Avenue', accessNotes: null, pets: 'Tortoise in the back yard; keep gates shut.', hazards: null, sprinklerHeads: 2 },
-      { label: 'Rental unit', addressLine1: '510 Wrenfield Avenue', accessNotes: 'Tenant must be told 48 h ahead.', pets: null, hazards: 'Loose pavers by the steps.', sprinklerHeads: 5 },
+      {
+        label: 'Side strip',
+        addressLine1: '508 Wrenfield Avenue',
+        accessNotes: null,
+        pets: 'Tortoise in the back yard; keep gates shut.',
+        hazards: null,
+        sprinklerHeads: 2,
+      },
+      {
+        label: 'Rental unit',
+        addressLine1: '510 Wrenfield Avenue',
+        accessNotes: 'Tenant must be told 48 h ahead.',
+        pets: null,
+        hazards: 'Loose pavers by the steps.',
+        sprinklerHeads: 5,
+      },
     ],
   },
   {
@@ -92,7 +155,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555-014-5501',
     notes: 'Board approves quotes at the monthly meeting.',
     sites: [
-      { label: 'Front verge', addressLine1: '60 Mill Race Road', accessNotes: 'Public footpath stays open.', pets: null, hazards: 'Overhead power line above the verge.', sprinklerHeads: 8 },
+      {
+        label: 'Front verge',
+        addressLine1: '60 Mill Race Road',
+        accessNotes: 'Public footpath stays open.',
+        pets: null,
+        hazards: 'Overhead power line above the verge.',
+        sprinklerHeads: 8,
+      },
     ],
   },
   {
@@ -101,7 +171,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '(555) 014-9034',
     notes: null,
     sites: [
-      { label: 'Back yard', addressLine1: '18 Gorsehill Crescent', accessNotes: 'Gate on the alley side.', pets: 'Two retrievers', hazards: 'Old septic lid near the shed.', sprinklerHeads: 12 },
+      {
+        label: 'Back yard',
+        addressLine1: '18 Gorsehill Crescent',
+        accessNotes: 'Gate on the alley side.',
+        pets: 'Two retrievers',
+        hazards: 'Old septic lid near the shed.',
+        sprinklerHeads: 12,
+      },
     ],
   },
   {
@@ -111,7 +188,14 @@ export const demoCustomers: DemoCustomer[] = [
     notes: 'Lost to a cheaper quote last season.',
     archived: true,
     sites: [
-      { label: null, addressLine1: '3 Quarrystone Walk', accessNotes: null, pets: null, hazards: null, sprinklerHeads: null },
+      {
+        label: null,
+        addressLine1: '3 Quarrystone Walk',
+        accessNotes: null,
+        pets: null,
+        hazards: null,
+        sprinklerHeads: null,
+      },
     ],
   },
   {
@@ -120,8 +204,22 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555-014-6002',
     notes: 'Six common-area strips; phased over two months.',
     sites: [
-      { label: 'Strip A (entrance)', addressLine1: '1–11 Castellan Row', accessNotes: 'Residents park along the strip until 8 am.', pets: 'Many dogs walked here; pet infill.', hazards: 'Drip line under mulch.', sprinklerHeads: 16 },
-      { label: 'Strip B (pool side)', addressLine1: '13–25 Castellan Row', accessNotes: 'Pool gate code from the manager.', pets: null, hazards: 'Wet deck; slip risk.', sprinklerHeads: 10 },
+      {
+        label: 'Strip A (entrance)',
+        addressLine1: '1–11 Castellan Row',
+        accessNotes: 'Residents park along the strip until 8 am.',
+        pets: 'Many dogs walked here; pet infill.',
+        hazards: 'Drip line under mulch.',
+        sprinklerHeads: 16,
+      },
+      {
+        label: 'Strip B (pool side)',
+        addressLine1: '13–25 Castellan Row',
+        accessNotes: 'Pool gate code from the manager.',
+        pets: null,
+        hazards: 'Wet deck; slip risk.',
+        sprinklerHeads: 10,
+      },
     ],
   },
   {
@@ -130,7 +228,14 @@ export const demoCustomers: DemoCustomer[] = [
     phone: '555 014 3318',
     notes: null,
     sites: [
-      { label: 'Roof terrace', addressLine1: '44 Lanternfield Mews, top floor', accessNotes: 'Rolls go up by the freight lift (max 9 ft long).', pets: null, hazards: 'Parapet 36 in high; harness near the edge.', sprinklerHeads: 0 },
+      {
+        label: 'Roof terrace',
+        addressLine1: '44 Lanternfield Mews, top floor',
+        accessNotes: 'Rolls go up by the freight lift (max 9 ft long).',
+        pets: null,
+        hazards: 'Parapet 36 in high; harness near the edge.',
+        sprinklerHeads: 0,
+      },
     ],
   },
 ];

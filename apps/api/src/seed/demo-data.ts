@@ -2,7 +2,13 @@
 import type { Role } from '@seamwright/shared';
 import type { Sequelize } from 'sequelize';
 import type { Env } from '../config/env.js';
-import { CompanyModel, CustomerModel, MembershipModel, SiteModel, UserModel } from '../db/models/index.js';
+import {
+  CompanyModel,
+  CustomerModel,
+  MembershipModel,
+  SiteModel,
+  UserModel,
+} from '../db/models/index.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 
@@ -30,19 +36,33 @@ export interface SeedResult {
   password: string;
 }
 
-export async function seedDemoData(sequelize: Sequelize, env: Pick<Env, 'bcryptCost'>): Promise<SeedResult> {
-  const result = { companyName: demoCompany.name, users: demoUsers.map(({ email, role }) => ({ email, role })), password: demoPassword };
-  if (await CompanyModel.findOne({ where: { slug: demoCompany.slug } })) return { created: false, ...result };
+export async function seedDemoData(
+  sequelize: Sequelize,
+  env: Pick<Env, 'bcryptCost'>,
+): Promise<SeedResult> {
+  const result = {
+    companyName: demoCompany.name,
+    users: demoUsers.map(({ email, role }) => ({ email, role })),
+    password: demoPassword,
+  };
+  if (await CompanyModel.findOne({ where: { slug: demoCompany.slug } }))
+    return { created: false, ...result };
   const passwordHash = await hashPassword(demoPassword, env.bcryptCost);
   await sequelize.transaction(async (transaction) => {
-    const company = await CompanyModel.create({ ...demoCompany, region: null, settings: {} }, { transaction });
+    const company = await CompanyModel.create(
+      { ...demoCompany, region: null, settings: {} },
+      { transaction },
+    );
     for (const demoUser of demoUsers) {
       const [user] = await UserModel.findOrCreate({
         where: { email: demoUser.email },
         defaults: { name: demoUser.name, email: demoUser.email, passwordHash },
         transaction,
       });
-      await MembershipModel.create({ companyId: company.id, userId: user.id, role: demoUser.role }, { transaction });
+      await MembershipModel.create(
+        { companyId: company.id, userId: user.id, role: demoUser.role },
+        { transaction },
+      );
     }
     for (const demo of demoCustomers) {
       const customer = await CustomerModel.create(
@@ -51,7 +71,9 @@ export async function seedDemoData(sequelize: Sequelize, env: Pick<Env, 'bcryptC
           name: demo.name,
           email: demo.email,
           phone: demo.phone,
-          billingAddress: demo.sites[0] ? `${demo.sites[0].addressLine1}, ${demoTown.city} ${demoTown.postalCode}` : null,
+          billingAddress: demo.sites[0]
+            ? `${demo.sites[0].addressLine1}, ${demoTown.city} ${demoTown.postalCode}`
+            : null,
           notes: demo.notes,
           archivedAt: demo.archived ? new Date() : null,
         },
@@ -59,7 +81,15 @@ export async function seedDemoData(sequelize: Sequelize, env: Pick<Env, 'bcryptC
       );
       for (const site of demo.sites) {
         await SiteModel.create(
-          { ...site, companyId: company.id, customerId: customer.id, addressLine2: null, city: demoTown.city, region: null, postalCode: demoTown.postalCode },
+          {
+            ...site,
+            companyId: company.id,
+            customerId: customer.id,
+            addressLine2: null,
+            city: demoTown.city,
+            region: null,
+            postalCode: demoTown.postalCode,
+          },
           { transaction },
         );
       }

@@ -3,11 +3,17 @@ import { ErrorCode } from '@seamwright/shared';
 import { ApiError, api, refreshCsrfToken } from './api-client';
 
 function problem(status: number, body: unknown): Response {
-  return new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/problem+json' } });
+  return new Response(JSON.stringify(body), {
+    status,
+    headers: { 'content-type': 'application/problem+json' },
+  });
 }
 
 function json(body: unknown, status = 200): Response {
-  return new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
+  return new Response(JSON.stringify(body), {
+    status,
+    headers: { 'content-type': 'application/json' },
+  });
 }
 
 /** A fake network that answers by URL and method and remembers what was sent. */
@@ -59,7 +65,13 @@ describe('api client error mapping', () => {
   });
 
   it('derives a code from the status when the body is not problem+json', async () => {
-    stubFetch(() => new Response('<html>Bad gateway</html>', { status: 502, headers: { 'content-type': 'text/html' } }));
+    stubFetch(
+      () =>
+        new Response('<html>Bad gateway</html>', {
+          status: 502,
+          headers: { 'content-type': 'text/html' },
+        }),
+    );
     const error = (await api.get('/me').catch((e: unknown) => e)) as ApiError;
     expect(error.code).toBe(ErrorCode.Internal);
     expect(error.status).toBe(502);
@@ -67,7 +79,11 @@ describe('api client error mapping', () => {
   });
 
   it('sends cookies, and the CSRF token on writes but not on reads', async () => {
-    const calls = stubFetch((url) => (url.endsWith('/auth/csrf') ? json({ data: { token: 'tok-1' } }) : json({ data: { id: 'c1' } }, 201)));
+    const calls = stubFetch((url) =>
+      url.endsWith('/auth/csrf')
+        ? json({ data: { token: 'tok-1' } })
+        : json({ data: { id: 'c1' } }, 201),
+    );
     await refreshCsrfToken();
     await api.get('/customers');
     await api.post('/customers', { name: 'Ada' });
@@ -97,7 +113,9 @@ describe('api client error mapping', () => {
 
   it('builds query strings and leaves out empty values', async () => {
     const calls = stubFetch(() => json({ data: [], meta: { page: 1, pageSize: 25, total: 0 } }));
-    await api.get('/customers', { query: { page: 2, q: '', status: 'all', sort: '-name', missing: undefined } });
+    await api.get('/customers', {
+      query: { page: 2, q: '', status: 'all', sort: '-name', missing: undefined },
+    });
     expect(calls[0]?.url).toBe('/api/customers?page=2&status=all&sort=-name');
   });
 });

@@ -25,9 +25,11 @@ export function setUnauthenticatedHandler(handler: (() => void) | null): void {
 }
 
 async function loadCsrfToken(): Promise<string> {
-  const response = await fetch(`${env.apiBaseUrl}/auth/csrf`, { credentials: 'include' }).catch(() => {
-    throw networkError();
-  });
+  const response = await fetch(`${env.apiBaseUrl}/auth/csrf`, { credentials: 'include' }).catch(
+    () => {
+      throw networkError();
+    },
+  );
   if (!response.ok) throw await toApiError(response);
   const body = (await response.json()) as { data: { token: string } };
   csrfToken = body.data.token;
@@ -82,7 +84,11 @@ async function send(method: Method, path: string, options: RequestOptions): Prom
  * The one way the app talks to the API. Answers the parsed JSON body (`{ data }` or
  * `{ data, meta }`), `undefined` for 204, and throws ApiError for everything else.
  */
-export async function apiRequest<T>(method: Method, path: string, options: RequestOptions = {}): Promise<T> {
+export async function apiRequest<T>(
+  method: Method,
+  path: string,
+  options: RequestOptions = {},
+): Promise<T> {
   let response = await send(method, path, options);
   if (!response.ok) {
     let error = await toApiError(response);

@@ -8,7 +8,9 @@ export class ApiError extends Error {
   readonly fieldErrors: FieldError[];
   readonly requestId: string | undefined;
 
-  constructor(problem: Pick<ProblemDetails, 'status' | 'code' | 'title'> & Partial<ProblemDetails>) {
+  constructor(
+    problem: Pick<ProblemDetails, 'status' | 'code' | 'title'> & Partial<ProblemDetails>,
+  ) {
     super(problem.detail ?? problem.title);
     this.name = 'ApiError';
     this.status = problem.status;

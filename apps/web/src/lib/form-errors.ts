@@ -22,6 +22,7 @@ export function applyServerErrors<T extends FieldValues>(
     }
   }
   if (error.fieldErrors.length > 0 && !unplaced) return null;
-  if (error.code === ErrorCode.ValidationFailed && error.fieldErrors.length > 0) return error.detail;
+  if (error.code === ErrorCode.ValidationFailed && error.fieldErrors.length > 0)
+    return error.detail;
   return error.detail;
 }

@@ -30,7 +30,11 @@ export function formatDateTime(iso: string, timeZone: string): string {
 
 /** The hour of day in the time zone, for a greeting. */
 export function hourIn(timeZone: string, now: Date = new Date()): number {
-  const hour = new Intl.DateTimeFormat('en-US', { timeZone, hour: 'numeric', hourCycle: 'h23' }).format(now);
+  const hour = new Intl.DateTimeFormat('en-US', {
+    timeZone,
+    hour: 'numeric',
+    hourCycle: 'h23',
+  }).format(now);
   return Number(hour);
 }
 

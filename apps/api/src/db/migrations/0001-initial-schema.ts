@@ -51,7 +51,10 @@ export const initialSchema: Migration = {
       role: { type: DataTypes.STRING(20), allowNull: false },
       ...timestamps,
     });
-    await qi.addIndex('memberships', ['company_id', 'user_id'], { unique: true, name: 'memberships_company_user' });
+    await qi.addIndex('memberships', ['company_id', 'user_id'], {
+      unique: true,
+      name: 'memberships_company_user',
+    });
     await qi.addIndex('memberships', ['user_id'], { name: 'memberships_user' });
 
     await qi.createTable('invitations', {
@@ -62,10 +65,17 @@ export const initialSchema: Migration = {
       token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
       expires_at: { type: DataTypes.DATE, allowNull: false },
       accepted_at: { type: DataTypes.DATE, allowNull: true },
-      invited_by: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+      invited_by: {
+        type: DataTypes.UUID,
+        allowNull: true,
+        references: { model: 'users', key: 'id' },
+        onDelete: 'SET NULL',
+      },
       ...timestamps,
     });
-    await qi.addIndex('invitations', ['company_id', 'email'], { name: 'invitations_company_email' });
+    await qi.addIndex('invitations', ['company_id', 'email'], {
+      name: 'invitations_company_email',
+    });
 
     await qi.createTable('password_resets', {
       id,
@@ -88,7 +98,9 @@ export const initialSchema: Migration = {
       ...timestamps,
     });
     await qi.addIndex('customers', ['company_id', 'name'], { name: 'customers_company_name' });
-    await qi.addIndex('customers', ['company_id', 'created_at'], { name: 'customers_company_created' });
+    await qi.addIndex('customers', ['company_id', 'created_at'], {
+      name: 'customers_company_created',
+    });
 
     await qi.createTable('sites', {
       id,
@@ -123,7 +135,9 @@ export const initialSchema: Migration = {
       data: { type: DataTypes.JSON, allowNull: true },
       created_at: { type: DataTypes.DATE(3), allowNull: false },
     });
-    await qi.addIndex('audit_events', ['company_id', 'created_at'], { name: 'audit_events_company_created' });
+    await qi.addIndex('audit_events', ['company_id', 'created_at'], {
+      name: 'audit_events_company_created',
+    });
 
     await qi.createTable('sessions', {
       sid: { type: DataTypes.STRING(64), primaryKey: true, allowNull: false },

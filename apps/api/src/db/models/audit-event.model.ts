@@ -1,8 +1,16 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 
 /** An append-only record of who changed what in a company. */
-export class AuditEventModel extends Model<InferAttributes<AuditEventModel>, InferCreationAttributes<AuditEventModel>> {
+export class AuditEventModel extends Model<
+  InferAttributes<AuditEventModel>,
+  InferCreationAttributes<AuditEventModel>
+> {
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare userId: string | null;

@@ -1,8 +1,16 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 
 /** The tenant. Not company-scoped itself. */
-export class CompanyModel extends Model<InferAttributes<CompanyModel>, InferCreationAttributes<CompanyModel>> {
+export class CompanyModel extends Model<
+  InferAttributes<CompanyModel>,
+  InferCreationAttributes<CompanyModel>
+> {
   declare id: CreationOptional<string>;
   declare name: string;
   declare slug: string;
@@ -25,7 +33,11 @@ export class CompanyModel extends Model<InferAttributes<CompanyModel>, InferCrea
         timeZone: { type: DataTypes.STRING(64), allowNull: false },
         region: { type: DataTypes.STRING(8), allowNull: true },
         currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'USD' },
-        measurementSystem: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'imperial' },
+        measurementSystem: {
+          type: DataTypes.STRING(8),
+          allowNull: false,
+          defaultValue: 'imperial',
+        },
         settings: { type: DataTypes.JSON, allowNull: false, defaultValue: {} },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -1,7 +1,15 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 
-export class CustomerModel extends Model<InferAttributes<CustomerModel>, InferCreationAttributes<CustomerModel>> {
+export class CustomerModel extends Model<
+  InferAttributes<CustomerModel>,
+  InferCreationAttributes<CustomerModel>
+> {
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare name: string;

@@ -1,9 +1,17 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { Role } from '@seamwright/shared';
 
 /** An invitation to join a company; only the SHA-256 of its token is stored. */
-export class InvitationModel extends Model<InferAttributes<InvitationModel>, InferCreationAttributes<InvitationModel>> {
+export class InvitationModel extends Model<
+  InferAttributes<InvitationModel>,
+  InferCreationAttributes<InvitationModel>
+> {
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare email: string;

@@ -1,9 +1,17 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { Role } from '@seamwright/shared';
 
 /** A user's role in one company (tenant-scoped). */
-export class MembershipModel extends Model<InferAttributes<MembershipModel>, InferCreationAttributes<MembershipModel>> {
+export class MembershipModel extends Model<
+  InferAttributes<MembershipModel>,
+  InferCreationAttributes<MembershipModel>
+> {
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare userId: string;

@@ -1,11 +1,19 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 
 /**
  * The express-session store's table (connect-session-sequelize uses this model by name).
  * `userId` is copied out of the session data so a password reset can end a user's sessions.
  */
-export class SessionModel extends Model<InferAttributes<SessionModel>, InferCreationAttributes<SessionModel>> {
+export class SessionModel extends Model<
+  InferAttributes<SessionModel>,
+  InferCreationAttributes<SessionModel>
+> {
   declare sid: string;
   declare userId: string | null;
   declare expires: Date | null;

@@ -1,8 +1,16 @@
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 
 /** A place where work happens, belonging to one customer. */
-export class SiteModel extends Model<InferAttributes<SiteModel>, InferCreationAttributes<SiteModel>> {
+export class SiteModel extends Model<
+  InferAttributes<SiteModel>,
+  InferCreationAttributes<SiteModel>
+> {
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare customerId: string;

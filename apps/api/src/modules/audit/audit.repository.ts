@@ -11,17 +11,37 @@ export interface AuditEntry {
 }
 
 /** Appends an audit event for the acting user in their company, inside the caller's transaction. */
-export async function recordAuditEvent(ctx: RequestContext, entry: AuditEntry, tx: Tx): Promise<void> {
+export async function recordAuditEvent(
+  ctx: RequestContext,
+  entry: AuditEntry,
+  tx: Tx,
+): Promise<void> {
   await scoped(ctx, AuditEventModel).create(
-    { userId: ctx.userId, action: entry.action, entity: entry.entity, entityId: entry.entityId, data: entry.data ?? null },
+    {
+      userId: ctx.userId,
+      action: entry.action,
+      entity: entry.entity,
+      entityId: entry.entityId,
+      data: entry.data ?? null,
+    },
     tx,
   );
 }
 
-export async function listAuditEvents(ctx: RequestContext, page: { limit: number; offset: number }) {
+export async function listAuditEvents(
+  ctx: RequestContext,
+  page: { limit: number; offset: number },
+) {
   const events = scoped(ctx, AuditEventModel);
   const [rows, total] = await Promise.all([
-    events.findAll({ order: [['createdAt', 'DESC'], ['id', 'ASC']], limit: page.limit, offset: page.offset }),
+    events.findAll({
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'ASC'],
+      ],
+      limit: page.limit,
+      offset: page.offset,
+    }),
     events.count(),
   ]);
   const userIds = [...new Set(rows.map((r) => r.userId).filter((id): id is string => id !== null))];
@@ -29,5 +49,8 @@ export async function listAuditEvents(ctx: RequestContext, page: { limit: number
     ? await UserModel.findAll({ where: { id: userIds }, attributes: ['id', 'name'] })
     : [];
   const names = new Map(users.map((u) => [u.id, u.name]));
-  return { rows: rows.map((r) => ({ ...r, userName: r.userId ? (names.get(r.userId) ?? null) : null })), total };
+  return {
+    rows: rows.map((r) => ({ ...r, userName: r.userId ? (names.get(r.userId) ?? null) : null })),
+    total,
+  };
 }

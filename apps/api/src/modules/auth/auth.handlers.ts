@@ -18,7 +18,12 @@ interface AuthHandlerDeps {
   onLoginSucceeded: (req: Request) => Promise<void> | void;
 }
 
-export function createAuthHandlers({ env, auth, issueCsrfToken, onLoginSucceeded }: AuthHandlerDeps) {
+export function createAuthHandlers({
+  env,
+  auth,
+  issueCsrfToken,
+  onLoginSucceeded,
+}: AuthHandlerDeps) {
   return {
     csrf: (req: Request, res: Response): void => {
       res.json({ data: { token: issueCsrfToken(req, res) } });

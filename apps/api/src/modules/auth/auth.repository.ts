@@ -3,7 +3,13 @@
 import { Op } from 'sequelize';
 import type { Role } from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
-import { CompanyModel, MembershipModel, PasswordResetModel, SessionModel, UserModel } from '../../db/models/index.js';
+import {
+  CompanyModel,
+  MembershipModel,
+  PasswordResetModel,
+  SessionModel,
+  UserModel,
+} from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 
@@ -17,15 +23,24 @@ export interface UserRecord {
 /** Unscoped on purpose: sign-in, sign-up and invitations must find a person by e-mail across companies. */
 export async function unsafeFindUserByEmail(email: string, tx?: Tx): Promise<UserRecord | null> {
   const row = await UserModel.findOne({ where: { email }, ...(tx ? { transaction: tx } : {}) });
-  return row ? { id: row.id, name: row.name, email: row.email, passwordHash: row.passwordHash } : null;
+  return row
+    ? { id: row.id, name: row.name, email: row.email, passwordHash: row.passwordHash }
+    : null;
 }
 
-export async function createUser(values: { name: string; email: string; passwordHash: string }, tx: Tx): Promise<UserRecord> {
+export async function createUser(
+  values: { name: string; email: string; passwordHash: string },
+  tx: Tx,
+): Promise<UserRecord> {
   const row = await UserModel.create(values, { transaction: tx });
   return { id: row.id, name: row.name, email: row.email, passwordHash: row.passwordHash };
 }
 
-export async function updateUserPassword(userId: string, passwordHash: string, tx: Tx): Promise<void> {
+export async function updateUserPassword(
+  userId: string,
+  passwordHash: string,
+  tx: Tx,
+): Promise<void> {
   await UserModel.update({ passwordHash }, { where: { id: userId }, transaction: tx });
 }
 
@@ -33,8 +48,14 @@ export async function isSlugTaken(slug: string, tx: Tx): Promise<boolean> {
   return (await CompanyModel.count({ where: { slug }, transaction: tx })) > 0;
 }
 
-export async function createCompany(values: { name: string; slug: string; timeZone: string }, tx: Tx): Promise<{ id: string }> {
-  const row = await CompanyModel.create({ ...values, address: null, region: null, settings: {} }, { transaction: tx });
+export async function createCompany(
+  values: { name: string; slug: string; timeZone: string },
+  tx: Tx,
+): Promise<{ id: string }> {
+  const row = await CompanyModel.create(
+    { ...values, address: null, region: null, settings: {} },
+    { transaction: tx },
+  );
   return { id: row.id };
 }
 
@@ -43,7 +64,11 @@ export async function addMembership(ctx: RequestContext, role: Role, tx: Tx): Pr
   await scoped(ctx, MembershipModel).create({ userId: ctx.userId, role }, tx);
 }
 
-export async function createPasswordReset(userId: string, tokenHash: string, expiresAt: Date): Promise<void> {
+export async function createPasswordReset(
+  userId: string,
+  tokenHash: string,
+  expiresAt: Date,
+): Promise<void> {
   await PasswordResetModel.create({ userId, tokenHash, expiresAt, usedAt: null });
 }
 

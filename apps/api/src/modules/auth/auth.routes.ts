@@ -22,5 +22,10 @@ export function registerAuthRoutes(
   routes.add('post', '/auth/login', { access: 'public' }, limiter.middleware, handlers.login);
   routes.add('post', '/auth/logout', { access: 'public' }, handlers.logout);
   routes.add('post', '/auth/password-reset', { access: 'public' }, handlers.requestPasswordReset);
-  routes.add('post', '/auth/password-reset/:token', { access: 'public' }, handlers.completePasswordReset);
+  routes.add(
+    'post',
+    '/auth/password-reset/:token',
+    { access: 'public' },
+    handlers.completePasswordReset,
+  );
 }

@@ -37,19 +37,33 @@ export function createAuthService(deps: ServiceDeps) {
     const passwordHash = await hashPassword(input.password, env.bcryptCost);
     try {
       return await inTransaction(sequelize, async (tx) => {
-        if (await unsafeFindUserByEmail(input.email, tx)) throw new AppError('EMAIL_TAKEN', 'That e-mail already has an account; sign in instead');
+        if (await unsafeFindUserByEmail(input.email, tx))
+          throw new AppError('EMAIL_TAKEN', 'That e-mail already has an account; sign in instead');
         const user = await createUser({ name: input.name, email: input.email, passwordHash }, tx);
         let slug = slugify(input.companyName);
         if (await isSlugTaken(slug, tx)) slug = `${slug}-${user.id.slice(0, 6)}`;
-        const company = await createCompany({ name: input.companyName, slug, timeZone: 'America/Denver' }, tx);
+        const company = await createCompany(
+          { name: input.companyName, slug, timeZone: 'America/Denver' },
+          tx,
+        );
         const ctx = { userId: user.id, companyId: company.id, role: 'owner' as const };
         await addMembership(ctx, 'owner', tx);
-        await recordAuditEvent(ctx, { action: 'company.created', entity: 'company', entityId: company.id, data: { name: input.companyName } }, tx);
+        await recordAuditEvent(
+          ctx,
+          {
+            action: 'company.created',
+            entity: 'company',
+            entityId: company.id,
+            data: { name: input.companyName },
+          },
+          tx,
+        );
         return { userId: user.id, companyId: company.id };
       });
     } catch (error) {
       // Two sign-ups racing for one address: the unique index decides.
-      if (error instanceof UniqueConstraintError) throw new AppError('EMAIL_TAKEN', 'That e-mail already has an account; sign in instead');
+      if (error instanceof UniqueConstraintError)
+        throw new AppError('EMAIL_TAKEN', 'That e-mail already has an account; sign in instead');
       throw error;
     }
   }
@@ -57,10 +71,13 @@ export function createAuthService(deps: ServiceDeps) {
   /** Same answer for an unknown e-mail and a wrong password. */
   async function login(input: LoginInput): Promise<SignedInUser> {
     const user = await unsafeFindUserByEmail(input.email);
-    const isValid = user ? await verifyPassword(input.password, user.passwordHash) : await verifyAgainstDecoy(input.password);
+    const isValid = user
+      ? await verifyPassword(input.password, user.passwordHash)
+      : await verifyAgainstDecoy(input.password);
     if (!user || !isValid) throw new AppError('INVALID_CREDENTIALS', 'E-mail or password is wrong');
     const membership = await findFirstMembershipOfUser(user.id);
-    if (!membership) throw new AppError('FORBIDDEN', 'This account no longer belongs to any company');
+    if (!membership)
+      throw new AppError('FORBIDDEN', 'This account no longer belongs to any company');
     return { userId: user.id, companyId: membership.companyId };
   }
 
@@ -83,7 +100,11 @@ export function createAuthService(deps: ServiceDeps) {
     await inTransaction(sequelize, async (tx) => {
       const now = new Date();
       const reset = await findUsablePasswordReset(hashToken(token), now, tx);
-      if (!reset) throw new AppError('TOKEN_INVALID', 'This reset link has expired or was already used; ask for a new one');
+      if (!reset)
+        throw new AppError(
+          'TOKEN_INVALID',
+          'This reset link has expired or was already used; ask for a new one',
+        );
       await updateUserPassword(reset.userId, passwordHash, tx);
       await markPasswordResetUsed(reset.id, now, tx);
       await destroySessionsOfUser(reset.userId, tx);

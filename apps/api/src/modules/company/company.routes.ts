@@ -6,5 +6,10 @@ import { createCompanyService } from './company.service.js';
 export function registerCompanyRoutes(routes: RouteTable, deps: ServiceDeps): void {
   const handlers = createCompanyHandlers(createCompanyService(deps.sequelize));
   routes.add('get', '/company', { access: 'tenant', permission: 'company.read' }, handlers.get);
-  routes.add('patch', '/company', { access: 'tenant', permission: 'company.manage' }, handlers.update);
+  routes.add(
+    'patch',
+    '/company',
+    { access: 'tenant', permission: 'company.manage' },
+    handlers.update,
+  );
 }

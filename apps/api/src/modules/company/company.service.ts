@@ -28,12 +28,26 @@ export function createCompanyService(sequelize: Sequelize) {
     return toView(company);
   }
 
-  async function update(ctx: RequestContext, input: UpdateCompanyInput): Promise<CompanySettingsView> {
+  async function update(
+    ctx: RequestContext,
+    input: UpdateCompanyInput,
+  ): Promise<CompanySettingsView> {
     await inTransaction(sequelize, async (tx) => {
       if (!(await findOwnCompany(ctx, tx))) throw notFound('Company');
-      const changes = Object.fromEntries(Object.entries(input).filter(([, value]) => value !== undefined));
+      const changes = Object.fromEntries(
+        Object.entries(input).filter(([, value]) => value !== undefined),
+      );
       await updateOwnCompany(ctx, changes, tx);
-      await recordAuditEvent(ctx, { action: 'company.updated', entity: 'company', entityId: ctx.companyId, data: { fields: Object.keys(changes) } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'company.updated',
+          entity: 'company',
+          entityId: ctx.companyId,
+          data: { fields: Object.keys(changes) },
+        },
+        tx,
+      );
     });
     return get(ctx);
   }

@@ -1,5 +1,9 @@
 import type { Request, Response } from 'express';
-import { createCustomerInputSchema, customerListQuerySchema, updateCustomerInputSchema } from '@seamwright/shared';
+import {
+  createCustomerInputSchema,
+  customerListQuerySchema,
+  updateCustomerInputSchema,
+} from '@seamwright/shared';
 import { contextOf } from '../../http/tenant-context.js';
 import { parseId, parseInput } from '../../http/validate.js';
 import type { createCustomersService } from './customers.service.js';

@@ -6,7 +6,9 @@ import { CustomerModel, SiteModel } from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 
-export type CustomerRow = Awaited<ReturnType<ReturnType<typeof scoped<CustomerModel>>['findAll']>>[number];
+export type CustomerRow = Awaited<
+  ReturnType<ReturnType<typeof scoped<CustomerModel>>['findAll']>
+>[number];
 type CustomerWhere = WhereOptions<CustomerModel['_attributes']>;
 
 /** `%` and `_` typed by the user are literal characters, not wildcards. */
@@ -21,7 +23,11 @@ function listWhere(query: CustomerListQuery): CustomerWhere {
   if (query.status === 'archived') where.archivedAt = { [Op.ne]: null };
   if (query.q) {
     const pattern = containsPattern(query.q);
-    where[Op.or] = [{ name: { [Op.like]: pattern } }, { email: { [Op.like]: pattern } }, { phone: { [Op.like]: pattern } }];
+    where[Op.or] = [
+      { name: { [Op.like]: pattern } },
+      { email: { [Op.like]: pattern } },
+      { phone: { [Op.like]: pattern } },
+    ];
   }
   return where;
 }
@@ -32,7 +38,10 @@ export async function listCustomers(ctx: RequestContext, query: CustomerListQuer
   const [rows, total] = await Promise.all([
     customers.findAll({
       where,
-      order: [[query.sort.field, query.sort.direction.toUpperCase()], ['id', 'ASC']],
+      order: [
+        [query.sort.field, query.sort.direction.toUpperCase()],
+        ['id', 'ASC'],
+      ],
       limit: query.pageSize,
       offset: (query.page - 1) * query.pageSize,
     }),
@@ -42,7 +51,10 @@ export async function listCustomers(ctx: RequestContext, query: CustomerListQuer
 }
 
 /** Number of sites per customer, for the given customers of this company. */
-export async function countSitesByCustomer(ctx: RequestContext, customerIds: string[]): Promise<Map<string, number>> {
+export async function countSitesByCustomer(
+  ctx: RequestContext,
+  customerIds: string[],
+): Promise<Map<string, number>> {
   const counts = new Map<string, number>();
   if (customerIds.length === 0) return counts;
   const sites = await scoped(ctx, SiteModel).findAll({ where: { customerId: customerIds } });
@@ -56,18 +68,33 @@ export function findCustomer(ctx: RequestContext, id: string, tx?: Tx) {
 
 export function createCustomer(
   ctx: RequestContext,
-  values: { name: string; email: string | null; phone: string | null; billingAddress: string | null; notes: string | null },
+  values: {
+    name: string;
+    email: string | null;
+    phone: string | null;
+    billingAddress: string | null;
+    notes: string | null;
+  },
   tx: Tx,
 ) {
   return scoped(ctx, CustomerModel).create({ ...values, archivedAt: null }, tx);
 }
 
-export function updateCustomer(ctx: RequestContext, id: string, values: Partial<Omit<CustomerRow, 'id' | 'companyId'>>, tx: Tx) {
+export function updateCustomer(
+  ctx: RequestContext,
+  id: string,
+  values: Partial<Omit<CustomerRow, 'id' | 'companyId'>>,
+  tx: Tx,
+) {
   return scoped(ctx, CustomerModel).update(id, values, tx);
 }
 
 /** Removes the customer and every site of theirs in this company. */
-export async function deleteCustomerWithSites(ctx: RequestContext, id: string, tx: Tx): Promise<void> {
+export async function deleteCustomerWithSites(
+  ctx: RequestContext,
+  id: string,
+  tx: Tx,
+): Promise<void> {
   await scoped(ctx, SiteModel).destroy({ customerId: id }, tx);
   await scoped(ctx, CustomerModel).destroy({ id }, tx);
 }

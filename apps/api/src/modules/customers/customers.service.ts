@@ -1,5 +1,11 @@
 import { can } from '@seamwright/shared';
-import type { CreateCustomerData, CustomerListQuery, CustomerView, ListResponse, UpdateCustomerData } from '@seamwright/shared';
+import type {
+  CreateCustomerData,
+  CustomerListQuery,
+  CustomerView,
+  ListResponse,
+  UpdateCustomerData,
+} from '@seamwright/shared';
 import type { Sequelize } from 'sequelize';
 import type { RequestContext } from '../../context.js';
 import { inTransaction } from '../../db/sequelize.js';
@@ -33,9 +39,15 @@ function toView(ctx: RequestContext, row: CustomerRow, siteCount: number): Custo
 }
 
 export function createCustomersService(sequelize: Sequelize) {
-  async function list(ctx: RequestContext, query: CustomerListQuery): Promise<ListResponse<CustomerView>> {
+  async function list(
+    ctx: RequestContext,
+    query: CustomerListQuery,
+  ): Promise<ListResponse<CustomerView>> {
     const { rows, total } = await listCustomers(ctx, query);
-    const counts = await countSitesByCustomer(ctx, rows.map((r) => r.id));
+    const counts = await countSitesByCustomer(
+      ctx,
+      rows.map((r) => r.id),
+    );
     return {
       data: rows.map((r) => toView(ctx, r, counts.get(r.id) ?? 0)),
       meta: { page: query.page, pageSize: query.pageSize, total },
@@ -62,18 +74,33 @@ export function createCustomersService(sequelize: Sequelize) {
         },
         tx,
       );
-      await recordAuditEvent(ctx, { action: 'customer.created', entity: 'customer', entityId: created.id, data: { name: created.name } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'customer.created',
+          entity: 'customer',
+          entityId: created.id,
+          data: { name: created.name },
+        },
+        tx,
+      );
       return created;
     });
     return toView(ctx, row, 0);
   }
 
-  async function update(ctx: RequestContext, id: string, input: UpdateCustomerData): Promise<CustomerView> {
+  async function update(
+    ctx: RequestContext,
+    id: string,
+    input: UpdateCustomerData,
+  ): Promise<CustomerView> {
     await inTransaction(sequelize, async (tx) => {
       const current = await findCustomer(ctx, id, tx);
       if (!current) throw notFound('Customer');
       const { archived, ...fields } = input;
-      const changes: Partial<CustomerRow> = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
+      const changes: Partial<CustomerRow> = Object.fromEntries(
+        Object.entries(fields).filter(([, v]) => v !== undefined),
+      );
       let action = 'customer.updated';
       if (archived === true && !current.archivedAt) {
         changes.archivedAt = new Date();
@@ -83,7 +110,11 @@ export function createCustomersService(sequelize: Sequelize) {
         action = 'customer.restored';
       }
       await updateCustomer(ctx, id, changes, tx);
-      await recordAuditEvent(ctx, { action, entity: 'customer', entityId: id, data: { fields: Object.keys(changes) } }, tx);
+      await recordAuditEvent(
+        ctx,
+        { action, entity: 'customer', entityId: id, data: { fields: Object.keys(changes) } },
+        tx,
+      );
     });
     return get(ctx, id);
   }
@@ -93,7 +124,16 @@ export function createCustomersService(sequelize: Sequelize) {
       const current = await findCustomer(ctx, id, tx);
       if (!current) throw notFound('Customer');
       await deleteCustomerWithSites(ctx, id, tx);
-      await recordAuditEvent(ctx, { action: 'customer.deleted', entity: 'customer', entityId: id, data: { name: current.name } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'customer.deleted',
+          entity: 'customer',
+          entityId: id,
+          data: { name: current.name },
+        },
+        tx,
+      );
     });
   }
 

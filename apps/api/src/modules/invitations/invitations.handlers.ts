@@ -6,7 +6,9 @@ import { parseId, parseInput } from '../../http/validate.js';
 import { buildMeView } from '../me/me.service.js';
 import type { createInvitationsService } from './invitations.service.js';
 
-export function createInvitationsHandlers(invitations: ReturnType<typeof createInvitationsService>) {
+export function createInvitationsHandlers(
+  invitations: ReturnType<typeof createInvitationsService>,
+) {
   return {
     create: async (req: Request, res: Response): Promise<void> => {
       const input = parseInput(createInvitationInputSchema, req.body);

@@ -6,7 +6,12 @@ import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 
 export function listInvitations(ctx: RequestContext) {
-  return scoped(ctx, InvitationModel).findAll({ order: [['createdAt', 'DESC'], ['id', 'ASC']] });
+  return scoped(ctx, InvitationModel).findAll({
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'ASC'],
+    ],
+  });
 }
 
 export function findInvitation(ctx: RequestContext, id: string, tx: Tx) {
@@ -18,7 +23,10 @@ export function createInvitation(
   values: { email: string; role: Role; tokenHash: string; expiresAt: Date },
   tx: Tx,
 ) {
-  return scoped(ctx, InvitationModel).create({ ...values, acceptedAt: null, invitedBy: ctx.userId }, tx);
+  return scoped(ctx, InvitationModel).create(
+    { ...values, acceptedAt: null, invitedBy: ctx.userId },
+    tx,
+  );
 }
 
 /** Drops earlier unaccepted invitations to the same address, so only the newest link works. */
@@ -40,10 +48,18 @@ export async function unsafeFindOpenInvitationByTokenHash(tokenHash: string, now
     ...(tx ? { transaction: tx, lock: tx.LOCK.UPDATE } : {}),
   });
   if (!row) return null;
-  const company = await CompanyModel.findByPk(row.companyId, { attributes: ['name'], ...(tx ? { transaction: tx } : {}) });
+  const company = await CompanyModel.findByPk(row.companyId, {
+    attributes: ['name'],
+    ...(tx ? { transaction: tx } : {}),
+  });
   return { ...row.get({ plain: true }), companyName: company?.name ?? '' };
 }
 
-export async function markInvitationAccepted(ctx: RequestContext, id: string, now: Date, tx: Tx): Promise<void> {
+export async function markInvitationAccepted(
+  ctx: RequestContext,
+  id: string,
+  now: Date,
+  tx: Tx,
+): Promise<void> {
   await scoped(ctx, InvitationModel).update(id, { acceptedAt: now }, tx);
 }

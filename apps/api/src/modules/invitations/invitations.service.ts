@@ -1,5 +1,10 @@
 // Inviting people into a company and accepting an invitation (new or existing user).
-import type { AcceptInvitationInput, CreateInvitationInput, InvitationPreview, InvitationView } from '@seamwright/shared';
+import type {
+  AcceptInvitationInput,
+  CreateInvitationInput,
+  InvitationPreview,
+  InvitationView,
+} from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
 import { inTransaction } from '../../db/sequelize.js';
 import type { ServiceDeps } from '../../deps.js';
@@ -23,9 +28,17 @@ import {
 } from './invitations.repository.js';
 
 const invitationLifetimeMs = 7 * 24 * 60 * 60 * 1000;
-const tokenInvalid = () => new AppError('TOKEN_INVALID', 'This invitation has expired, was revoked or was already used');
+const tokenInvalid = () =>
+  new AppError('TOKEN_INVALID', 'This invitation has expired, was revoked or was already used');
 
-function toView(row: { id: string; email: string; role: InvitationView['role']; expiresAt: Date; acceptedAt: Date | null; createdAt: Date }): InvitationView {
+function toView(row: {
+  id: string;
+  email: string;
+  role: InvitationView['role'];
+  expiresAt: Date;
+  acceptedAt: Date | null;
+  createdAt: Date;
+}): InvitationView {
   return {
     id: row.id,
     email: row.email,
@@ -37,7 +50,10 @@ function toView(row: { id: string; email: string; role: InvitationView['role']; 
 }
 
 export function createInvitationsService({ env, sequelize, mailer, logger }: ServiceDeps) {
-  async function invite(ctx: RequestContext, input: CreateInvitationInput): Promise<InvitationView> {
+  async function invite(
+    ctx: RequestContext,
+    input: CreateInvitationInput,
+  ): Promise<InvitationView> {
     const { token, tokenHash } = createOneTimeToken();
     const invitation = await inTransaction(sequelize, async (tx) => {
       const existing = await unsafeFindUserByEmail(input.email, tx);
@@ -46,17 +62,41 @@ export function createInvitationsService({ env, sequelize, mailer, logger }: Ser
       }
       await deletePendingInvitationsFor(ctx, input.email, tx);
       const expiresAt = new Date(Date.now() + invitationLifetimeMs);
-      const row = await createInvitation(ctx, { email: input.email, role: input.role, tokenHash, expiresAt }, tx);
-      await recordAuditEvent(ctx, { action: 'invitation.created', entity: 'invitation', entityId: row.id, data: { email: input.email, role: input.role } }, tx);
+      const row = await createInvitation(
+        ctx,
+        { email: input.email, role: input.role, tokenHash, expiresAt },
+        tx,
+      );
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'invitation.created',
+          entity: 'invitation',
+          entityId: row.id,
+          data: { email: input.email, role: input.role },
+        },
+        tx,
+      );
       return row;
     });
-    const [company, inviter] = await Promise.all([findCompanyById(ctx.companyId), findUserById(ctx.userId)]);
+    const [company, inviter] = await Promise.all([
+      findCompanyById(ctx.companyId),
+      findUserById(ctx.userId),
+    ]);
     const link = `${env.appUrl}/invitations/${token}`;
-    const content = invitationMail({ companyName: company?.name ?? 'a company', inviterName: inviter?.name ?? 'Someone', role: input.role, link });
+    const content = invitationMail({
+      companyName: company?.name ?? 'a company',
+      inviterName: inviter?.name ?? 'Someone',
+      role: input.role,
+      link,
+    });
     try {
       await mailer.send({ to: input.email, ...content });
     } catch (error) {
-      logger.error({ err: error, invitationId: invitation.id }, 'invitation e-mail could not be sent');
+      logger.error(
+        { err: error, invitationId: invitation.id },
+        'invitation e-mail could not be sent',
+      );
     }
     return toView(invitation);
   }
@@ -69,9 +109,22 @@ export function createInvitationsService({ env, sequelize, mailer, logger }: Ser
     await inTransaction(sequelize, async (tx) => {
       const invitation = await findInvitation(ctx, id, tx);
       if (!invitation) throw notFound('Invitation');
-      if (invitation.acceptedAt) throw new AppError('CONFLICT', 'This invitation was already accepted; remove the member instead');
+      if (invitation.acceptedAt)
+        throw new AppError(
+          'CONFLICT',
+          'This invitation was already accepted; remove the member instead',
+        );
       await deleteInvitation(ctx, id, tx);
-      await recordAuditEvent(ctx, { action: 'invitation.revoked', entity: 'invitation', entityId: id, data: { email: invitation.email } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'invitation.revoked',
+          entity: 'invitation',
+          entityId: id,
+          data: { email: invitation.email },
+        },
+        tx,
+      );
     });
   }
 
@@ -79,7 +132,12 @@ export function createInvitationsService({ env, sequelize, mailer, logger }: Ser
     const invitation = await unsafeFindOpenInvitationByTokenHash(hashToken(token), new Date());
     if (!invitation) throw tokenInvalid();
     const user = await unsafeFindUserByEmail(invitation.email);
-    return { companyName: invitation.companyName, email: invitation.email, role: invitation.role, hasAccount: user !== null };
+    return {
+      companyName: invitation.companyName,
+      email: invitation.email,
+      role: invitation.role,
+      hasAccount: user !== null,
+    };
   }
 
   /** New e-mail: creates the user. Known e-mail: the password must be theirs. Then joins the company. */
@@ -91,21 +149,39 @@ export function createInvitationsService({ env, sequelize, mailer, logger }: Ser
       let user = await unsafeFindUserByEmail(invitation.email, tx);
       if (user) {
         if (!(await verifyPassword(input.password, user.passwordHash))) {
-          throw new AppError('INVALID_CREDENTIALS', 'That is not the password of the account with this e-mail');
+          throw new AppError(
+            'INVALID_CREDENTIALS',
+            'That is not the password of the account with this e-mail',
+          );
         }
       } else {
         if (!input.name) {
-          throw new AppError('VALIDATION_FAILED', 'Some fields need attention', { errors: [{ path: 'name', message: 'Your name is required' }] });
+          throw new AppError('VALIDATION_FAILED', 'Some fields need attention', {
+            errors: [{ path: 'name', message: 'Your name is required' }],
+          });
         }
         const passwordHash = await hashPassword(input.password, env.bcryptCost);
         user = await createUser({ name: input.name, email: invitation.email, passwordHash }, tx);
       }
-      const ctx: RequestContext = { userId: user.id, companyId: invitation.companyId, role: invitation.role };
+      const ctx: RequestContext = {
+        userId: user.id,
+        companyId: invitation.companyId,
+        role: invitation.role,
+      };
       if ((await findMembershipOfUserInCompany(ctx, user.id, tx)).length === 0) {
         await addMember(ctx, user.id, invitation.role, tx);
       }
       await markInvitationAccepted(ctx, invitation.id, now, tx);
-      await recordAuditEvent(ctx, { action: 'member.joined', entity: 'member', entityId: null, data: { invitationId: invitation.id, role: invitation.role } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'member.joined',
+          entity: 'member',
+          entityId: null,
+          data: { invitationId: invitation.id, role: invitation.role },
+        },
+        tx,
+      );
       return { userId: user.id, companyId: invitation.companyId };
     });
   }

@@ -8,8 +8,14 @@ export interface UserMembership {
   role: Role;
 }
 
-export async function findMembershipOfUser(userId: string, companyId: string): Promise<UserMembership | null> {
-  const row = await MembershipModel.findOne({ where: { userId, companyId }, attributes: ['companyId', 'role'] });
+export async function findMembershipOfUser(
+  userId: string,
+  companyId: string,
+): Promise<UserMembership | null> {
+  const row = await MembershipModel.findOne({
+    where: { userId, companyId },
+    attributes: ['companyId', 'role'],
+  });
   return row ? { companyId: row.companyId, role: row.role } : null;
 }
 
@@ -30,7 +36,10 @@ export interface UserCompany {
 
 /** Every company the user belongs to, by company name. */
 export async function listCompaniesOfUser(userId: string): Promise<UserCompany[]> {
-  const memberships = await MembershipModel.findAll({ where: { userId }, attributes: ['companyId', 'role'] });
+  const memberships = await MembershipModel.findAll({
+    where: { userId },
+    attributes: ['companyId', 'role'],
+  });
   if (memberships.length === 0) return [];
   const companies = await CompanyModel.findAll({
     where: { id: memberships.map((m) => m.companyId) },
@@ -38,7 +47,11 @@ export async function listCompaniesOfUser(userId: string): Promise<UserCompany[]
   });
   const names = new Map(companies.map((c) => [c.id, c.name]));
   return memberships
-    .map((m) => ({ companyId: m.companyId, companyName: names.get(m.companyId) ?? '', role: m.role }))
+    .map((m) => ({
+      companyId: m.companyId,
+      companyName: names.get(m.companyId) ?? '',
+      role: m.role,
+    }))
     .sort((a, b) => a.companyName.localeCompare(b.companyName));
 }
 

@@ -1,6 +1,11 @@
 import type { CompanyView, MeView } from '@seamwright/shared';
 import { AppError } from '../../errors.js';
-import { findCompanyById, findMembershipOfUser, findUserById, listCompaniesOfUser } from './me.repository.js';
+import {
+  findCompanyById,
+  findMembershipOfUser,
+  findUserById,
+  listCompaniesOfUser,
+} from './me.repository.js';
 
 export function toCompanyView(company: {
   id: string;
@@ -30,11 +35,13 @@ export async function buildMeView(userId: string, companyId: string): Promise<Me
     findMembershipOfUser(userId, companyId),
     listCompaniesOfUser(userId),
   ]);
-  if (!user || !company || !membership) throw new AppError('UNAUTHENTICATED', 'Sign in to continue');
+  if (!user || !company || !membership)
+    throw new AppError('UNAUTHENTICATED', 'Sign in to continue');
   return { user, company: toCompanyView(company), role: membership.role, companies };
 }
 
 /** Checks that the user belongs to `companyId`; another company is simply not found. */
 export async function assertCanSwitchTo(userId: string, companyId: string): Promise<void> {
-  if (!(await findMembershipOfUser(userId, companyId))) throw new AppError('NOT_FOUND', 'Company not found');
+  if (!(await findMembershipOfUser(userId, companyId)))
+    throw new AppError('NOT_FOUND', 'Company not found');
 }

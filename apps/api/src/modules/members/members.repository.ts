@@ -5,12 +5,24 @@ import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 
 export async function listMembers(ctx: RequestContext) {
-  const memberships = await scoped(ctx, MembershipModel).findAll({ order: [['createdAt', 'ASC'], ['id', 'ASC']] });
+  const memberships = await scoped(ctx, MembershipModel).findAll({
+    order: [
+      ['createdAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   const users = memberships.length
-    ? await UserModel.findAll({ where: { id: memberships.map((m) => m.userId) }, attributes: ['id', 'name', 'email'] })
+    ? await UserModel.findAll({
+        where: { id: memberships.map((m) => m.userId) },
+        attributes: ['id', 'name', 'email'],
+      })
     : [];
   const byId = new Map(users.map((u) => [u.id, u]));
-  return memberships.map((m) => ({ ...m, name: byId.get(m.userId)?.name ?? '', email: byId.get(m.userId)?.email ?? '' }));
+  return memberships.map((m) => ({
+    ...m,
+    name: byId.get(m.userId)?.name ?? '',
+    email: byId.get(m.userId)?.email ?? '',
+  }));
 }
 
 export function findMember(ctx: RequestContext, id: string, tx: Tx) {
@@ -19,7 +31,11 @@ export function findMember(ctx: RequestContext, id: string, tx: Tx) {
 
 /** Locks the company's owner rows so two concurrent demotions cannot both pass the last-owner check. */
 export async function lockOwners(ctx: RequestContext, tx: Tx): Promise<number> {
-  const owners = await scoped(ctx, MembershipModel).findAll({ where: { role: 'owner' }, tx, lock: true });
+  const owners = await scoped(ctx, MembershipModel).findAll({
+    where: { role: 'owner' },
+    tx,
+    lock: true,
+  });
   return owners.length;
 }
 

@@ -5,7 +5,13 @@ import { inTransaction } from '../../db/sequelize.js';
 import type { Tx } from '../../db/sequelize.js';
 import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
-import { deleteMember, findMember, listMembers, lockOwners, updateMemberRole } from './members.repository.js';
+import {
+  deleteMember,
+  findMember,
+  listMembers,
+  lockOwners,
+  updateMemberRole,
+} from './members.repository.js';
 
 export function createMembersService(sequelize: Sequelize) {
   async function list(ctx: RequestContext): Promise<MemberView[]> {
@@ -24,7 +30,10 @@ export function createMembersService(sequelize: Sequelize) {
   async function assertNotLastOwner(ctx: RequestContext, currentRole: Role, tx: Tx): Promise<void> {
     if (currentRole !== 'owner') return;
     if ((await lockOwners(ctx, tx)) <= 1) {
-      throw new AppError('CONFLICT', 'A company needs at least one owner; make someone else an owner first');
+      throw new AppError(
+        'CONFLICT',
+        'A company needs at least one owner; make someone else an owner first',
+      );
     }
   }
 
@@ -35,7 +44,16 @@ export function createMembersService(sequelize: Sequelize) {
       if (member.role === role) return;
       if (role !== 'owner') await assertNotLastOwner(ctx, member.role, tx);
       await updateMemberRole(ctx, id, role, tx);
-      await recordAuditEvent(ctx, { action: 'member.role_changed', entity: 'member', entityId: id, data: { from: member.role, to: role } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'member.role_changed',
+          entity: 'member',
+          entityId: id,
+          data: { from: member.role, to: role },
+        },
+        tx,
+      );
     });
     const updated = (await list(ctx)).find((m) => m.id === id);
     if (!updated) throw notFound('Member');
@@ -48,7 +66,16 @@ export function createMembersService(sequelize: Sequelize) {
       if (!member) throw notFound('Member');
       await assertNotLastOwner(ctx, member.role, tx);
       await deleteMember(ctx, id, tx);
-      await recordAuditEvent(ctx, { action: 'member.removed', entity: 'member', entityId: id, data: { userId: member.userId, role: member.role } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'member.removed',
+          entity: 'member',
+          entityId: id,
+          data: { userId: member.userId, role: member.role },
+        },
+        tx,
+      );
     });
   }
 

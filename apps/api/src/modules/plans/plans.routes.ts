@@ -2,5 +2,10 @@ import type { RouteTable } from '../../http/route-table.js';
 import { previewPlanHandler } from './plans.handlers.js';
 
 export function registerPlansRoutes(routes: RouteTable): void {
-  routes.add('post', '/plans/preview', { access: 'tenant', permission: 'plans.preview' }, previewPlanHandler);
+  routes.add(
+    'post',
+    '/plans/preview',
+    { access: 'tenant', permission: 'plans.preview' },
+    previewPlanHandler,
+  );
 }

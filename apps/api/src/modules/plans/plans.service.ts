@@ -15,7 +15,9 @@ export function previewPlan(body: unknown): LayoutPlan {
   } catch (error) {
     if (error instanceof LayoutInputError) {
       throw new AppError('UNPROCESSABLE', error.message, {
-        ...(error.path ? { errors: [{ path: toFieldPath(error.path), message: error.detail }] } : {}),
+        ...(error.path
+          ? { errors: [{ path: toFieldPath(error.path), message: error.detail }] }
+          : {}),
       });
     }
     throw error;

@@ -5,12 +5,26 @@ import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 
 export type SiteRow = Awaited<ReturnType<ReturnType<typeof scoped<SiteModel>>['findAll']>>[number];
-export type SiteValues = Required<{ [K in keyof CreateSiteData]: Exclude<CreateSiteData[K], undefined> }>;
+export type SiteValues = Required<{
+  [K in keyof CreateSiteData]: Exclude<CreateSiteData[K], undefined>;
+}>;
 
-export async function listSitesOfCustomer(ctx: RequestContext, customerId: string, page: { limit: number; offset: number }) {
+export async function listSitesOfCustomer(
+  ctx: RequestContext,
+  customerId: string,
+  page: { limit: number; offset: number },
+) {
   const sites = scoped(ctx, SiteModel);
   const [rows, total] = await Promise.all([
-    sites.findAll({ where: { customerId }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: page.limit, offset: page.offset }),
+    sites.findAll({
+      where: { customerId },
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: page.limit,
+      offset: page.offset,
+    }),
     sites.count({ customerId }),
   ]);
   return { rows, total };

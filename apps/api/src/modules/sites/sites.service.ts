@@ -6,7 +6,13 @@ import { notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import type { SiteRow, SiteValues } from './sites.repository.js';
-import { createSite, deleteSite, findSite, listSitesOfCustomer, updateSite } from './sites.repository.js';
+import {
+  createSite,
+  deleteSite,
+  findSite,
+  listSitesOfCustomer,
+  updateSite,
+} from './sites.repository.js';
 
 function toView(row: SiteRow): SiteView {
   return {
@@ -43,9 +49,16 @@ function toValues(input: CreateSiteData): SiteValues {
 }
 
 export function createSitesService(sequelize: Sequelize) {
-  async function listForCustomer(ctx: RequestContext, customerId: string, query: { page: number; pageSize: number }): Promise<ListResponse<SiteView>> {
+  async function listForCustomer(
+    ctx: RequestContext,
+    customerId: string,
+    query: { page: number; pageSize: number },
+  ): Promise<ListResponse<SiteView>> {
     if (!(await findCustomer(ctx, customerId))) throw notFound('Customer');
-    const { rows, total } = await listSitesOfCustomer(ctx, customerId, { limit: query.pageSize, offset: (query.page - 1) * query.pageSize });
+    const { rows, total } = await listSitesOfCustomer(ctx, customerId, {
+      limit: query.pageSize,
+      offset: (query.page - 1) * query.pageSize,
+    });
     return { data: rows.map(toView), meta: { page: query.page, pageSize: query.pageSize, total } };
   }
 
@@ -55,11 +68,19 @@ export function createSitesService(sequelize: Sequelize) {
     return toView(row);
   }
 
-  async function create(ctx: RequestContext, customerId: string, input: CreateSiteData): Promise<SiteView> {
+  async function create(
+    ctx: RequestContext,
+    customerId: string,
+    input: CreateSiteData,
+  ): Promise<SiteView> {
     const row = await inTransaction(sequelize, async (tx) => {
       if (!(await findCustomer(ctx, customerId, tx))) throw notFound('Customer');
       const created = await createSite(ctx, customerId, toValues(input), tx);
-      await recordAuditEvent(ctx, { action: 'site.created', entity: 'site', entityId: created.id, data: { customerId } }, tx);
+      await recordAuditEvent(
+        ctx,
+        { action: 'site.created', entity: 'site', entityId: created.id, data: { customerId } },
+        tx,
+      );
       return created;
     });
     return toView(row);
@@ -68,9 +89,20 @@ export function createSitesService(sequelize: Sequelize) {
   async function update(ctx: RequestContext, id: string, input: UpdateSiteData): Promise<SiteView> {
     await inTransaction(sequelize, async (tx) => {
       if (!(await findSite(ctx, id, tx))) throw notFound('Site');
-      const changes = Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined)) as Partial<SiteValues>;
+      const changes = Object.fromEntries(
+        Object.entries(input).filter(([, v]) => v !== undefined),
+      ) as Partial<SiteValues>;
       await updateSite(ctx, id, changes, tx);
-      await recordAuditEvent(ctx, { action: 'site.updated', entity: 'site', entityId: id, data: { fields: Object.keys(changes) } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'site.updated',
+          entity: 'site',
+          entityId: id,
+          data: { fields: Object.keys(changes) },
+        },
+        tx,
+      );
     });
     return get(ctx, id);
   }
@@ -80,7 +112,16 @@ export function createSitesService(sequelize: Sequelize) {
       const site = await findSite(ctx, id, tx);
       if (!site) throw notFound('Site');
       await deleteSite(ctx, id, tx);
-      await recordAuditEvent(ctx, { action: 'site.deleted', entity: 'site', entityId: id, data: { customerId: site.customerId } }, tx);
+      await recordAuditEvent(
+        ctx,
+        {
+          action: 'site.deleted',
+          entity: 'site',
+          entityId: id,
+          data: { customerId: site.customerId },
+        },
+        tx,
+      );
     });
   }
 

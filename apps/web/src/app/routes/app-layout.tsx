@@ -16,7 +16,8 @@ export async function loader({ request }: LoaderFunctionArgs) {
   } catch (error) {
     if (error instanceof ApiError && error.code === ErrorCode.Unauthenticated) {
       const url = new URL(request.url);
-      const next = url.pathname === paths.today && !url.search ? undefined : `${url.pathname}${url.search}`;
+      const next =
+        url.pathname === paths.today && !url.search ? undefined : `${url.pathname}${url.search}`;
       return redirect(paths.signIn(next));
     }
     throw error;

@@ -31,8 +31,14 @@ function CustomerPage({ customerId }: { customerId: string }) {
       <p className="mb-2 print:hidden">
         <Link to={paths.customers}>← Customers</Link>
       </p>
-      <PageHeader title={customer.name} subtitle={customer.archivedAt ? 'Archived customer' : undefined} />
-      <CustomerDetails customerId={customerId} onDeleted={() => void navigate(paths.customers, { replace: true })} />
+      <PageHeader
+        title={customer.name}
+        subtitle={customer.archivedAt ? 'Archived customer' : undefined}
+      />
+      <CustomerDetails
+        customerId={customerId}
+        onDeleted={() => void navigate(paths.customers, { replace: true })}
+      />
       <RegionErrorBoundary>
         <SitesPanel customerId={customerId} canWrite={canWriteSites} />
       </RegionErrorBoundary>
@@ -43,7 +49,8 @@ function CustomerPage({ customerId }: { customerId: string }) {
 export function Component() {
   const { customerId = '' } = useParams();
   const { role } = useSession();
-  if (!useCan('customers.read')) return <NotAvailable section="Customers" role={role} homePath={paths.today} />;
+  if (!useCan('customers.read'))
+    return <NotAvailable section="Customers" role={role} homePath={paths.today} />;
   return <CustomerPage customerId={customerId} />;
 }
 

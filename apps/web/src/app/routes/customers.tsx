@@ -19,7 +19,11 @@ export async function loader({ request }: LoaderFunctionArgs) {
 }
 
 /** Search, sort and paging change only the URL's query; the list's own query follows them. */
-export function shouldRevalidate({ currentUrl, nextUrl, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+export function shouldRevalidate({
+  currentUrl,
+  nextUrl,
+  defaultShouldRevalidate,
+}: ShouldRevalidateFunctionArgs) {
   if (currentUrl.pathname === nextUrl.pathname) return false;
   return defaultShouldRevalidate;
 }
@@ -34,7 +38,13 @@ export function Component() {
       <PageHeader
         title="Customers"
         subtitle="The people you build for, and their sites."
-        actions={canWrite ? <Link to={paths.newCustomer} className={buttonClasses('primary')}>New customer</Link> : null}
+        actions={
+          canWrite ? (
+            <Link to={paths.newCustomer} className={buttonClasses('primary')}>
+              New customer
+            </Link>
+          ) : null
+        }
       />
       <CustomersList />
     </>

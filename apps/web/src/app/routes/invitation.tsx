@@ -1,10 +1,19 @@
-import { Link, useNavigate, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router-dom';
+import {
+  Link,
+  useNavigate,
+  useParams,
+  useRouteError,
+  type LoaderFunctionArgs,
+} from 'react-router-dom';
 import { PublicCard } from '../../components/ui/public-card';
 import { describeError } from '../../components/ui/region-error';
 import { paths } from '../../config/paths';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api-error';
-import { invitationPreviewQueryOptions, useInvitationPreview } from '../../features/invitations/api/get-invitation-preview';
+import {
+  invitationPreviewQueryOptions,
+  useInvitationPreview,
+} from '../../features/invitations/api/get-invitation-preview';
 import { AcceptInvitationForm } from '../../features/invitations/components/accept-invitation-form';
 
 export async function loader({ params }: LoaderFunctionArgs) {
@@ -17,8 +26,15 @@ export function Component() {
   const preview = useInvitationPreview(token);
   const navigate = useNavigate();
   return (
-    <PublicCard title={`Join ${preview.companyName}`} intro="You have been invited to work in Seamwright with this company.">
-      <AcceptInvitationForm token={token} preview={preview} onAccepted={() => void navigate(paths.today, { replace: true })} />
+    <PublicCard
+      title={`Join ${preview.companyName}`}
+      intro="You have been invited to work in Seamwright with this company."
+    >
+      <AcceptInvitationForm
+        token={token}
+        preview={preview}
+        onAccepted={() => void navigate(paths.today, { replace: true })}
+      />
     </PublicCard>
   );
 }

@@ -9,7 +9,8 @@ import { RouteError } from './route-error';
 export function Component() {
   const navigate = useNavigate();
   const { role } = useSession();
-  if (!useCan('customers.write')) return <NotAvailable section="Adding customers" role={role} homePath={paths.today} />;
+  if (!useCan('customers.write'))
+    return <NotAvailable section="Adding customers" role={role} homePath={paths.today} />;
   return (
     <>
       <p className="mb-2 print:hidden">
@@ -17,7 +18,10 @@ export function Component() {
       </p>
       <PageHeader title="New customer" subtitle="Add the sites (addresses) on the next page." />
       <div className="rounded-lg border border-line bg-white p-6">
-        <NewCustomer onCreated={(id) => void navigate(paths.customer(id))} onCancel={() => void navigate(paths.customers)} />
+        <NewCustomer
+          onCreated={(id) => void navigate(paths.customer(id))}
+          onCancel={() => void navigate(paths.customers)}
+        />
       </div>
     </>
   );

@@ -6,7 +6,9 @@ export function Component() {
     <div className="max-w-xl rounded-lg border border-line bg-white p-6">
       <h1 className="text-2xl font-bold">There is no page here</h1>
       <p className="mt-2 text-ink-muted">The link may be old or mistyped.</p>
-      <Link to={paths.today} className="mt-4 inline-block min-h-11 py-2 font-semibold">Go to Today</Link>
+      <Link to={paths.today} className="mt-4 inline-block min-h-11 py-2 font-semibold">
+        Go to Today
+      </Link>
     </div>
   );
 }

@@ -10,7 +10,10 @@ export function Component() {
   const { token = '' } = useParams();
   const [isDone, setIsDone] = useState(false);
   return (
-    <PublicCard title="Choose a new password" footer={<Link to={paths.signIn()}>Back to sign in</Link>}>
+    <PublicCard
+      title="Choose a new password"
+      footer={<Link to={paths.signIn()}>Back to sign in</Link>}
+    >
       {isDone ? (
         <FormNotice>
           Your password is changed. <Link to={paths.signIn()}>Sign in with it now</Link>.

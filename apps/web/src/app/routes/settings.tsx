@@ -18,7 +18,10 @@ import { sessionCan } from './guard';
 
 export async function loader() {
   if (await sessionCan('members.read')) {
-    await Promise.all([queryClient.ensureQueryData(membersQueryOptions()), queryClient.ensureQueryData(invitationsQueryOptions())]);
+    await Promise.all([
+      queryClient.ensureQueryData(membersQueryOptions()),
+      queryClient.ensureQueryData(invitationsQueryOptions()),
+    ]);
   }
   return null;
 }
@@ -26,7 +29,9 @@ export async function loader() {
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
   return (
     <section id={id} aria-labelledby={`${id}-heading`} className="scroll-mt-6">
-      <h2 id={`${id}-heading`} className="mb-3 text-xl font-bold">{title}</h2>
+      <h2 id={`${id}-heading`} className="mb-3 text-xl font-bold">
+        {title}
+      </h2>
       <RegionErrorBoundary>
         <Suspense fallback={<Loading />}>{children}</Suspense>
       </RegionErrorBoundary>
@@ -41,14 +46,24 @@ export function Component() {
   const canManageTeam = useCan('members.manage');
   return (
     <div className="flex max-w-4xl flex-col gap-10">
-      <PageHeader title="Settings" subtitle={canManageCompany ? `${company.name}: company, team and your profile.` : 'Your profile and role.'} />
+      <PageHeader
+        title="Settings"
+        subtitle={
+          canManageCompany
+            ? `${company.name}: company, team and your profile.`
+            : 'Your profile and role.'
+        }
+      />
       <Section id="profile" title="Your profile">
         <MyProfile />
       </Section>
       {canManageCompany ? (
         <Section id="company" title="Company details">
           <div className="rounded-lg border border-line bg-white p-6">
-            <CompanyForm company={company} onSaved={() => client.invalidateQueries({ queryKey: meQueryOptions().queryKey })} />
+            <CompanyForm
+              company={company}
+              onSaved={() => client.invalidateQueries({ queryKey: meQueryOptions().queryKey })}
+            />
           </div>
         </Section>
       ) : null}

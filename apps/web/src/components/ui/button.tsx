@@ -26,7 +26,15 @@ interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   isBusy?: boolean;
 }
 
-export function Button({ variant = 'primary', isBusy = false, className, disabled, type, children, ...rest }: ButtonProps) {
+export function Button({
+  variant = 'primary',
+  isBusy = false,
+  className,
+  disabled,
+  type,
+  children,
+  ...rest
+}: ButtonProps) {
   return (
     <button
       type={type ?? 'button'}

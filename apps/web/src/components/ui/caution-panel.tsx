@@ -17,7 +17,14 @@ export function CautionPanel({ title, children }: CautionPanelProps) {
       className="rounded-lg border-2 border-caution-500 bg-caution-50 p-4 text-ink print:border-black"
     >
       <h2 className="flex items-center gap-2 text-lg font-bold text-caution-800">
-        <svg aria-hidden="true" viewBox="0 0 24 24" className="h-6 w-6 shrink-0" fill="none" stroke="currentColor" strokeWidth="2">
+        <svg
+          aria-hidden="true"
+          viewBox="0 0 24 24"
+          className="h-6 w-6 shrink-0"
+          fill="none"
+          stroke="currentColor"
+          strokeWidth="2"
+        >
           <path d="M12 3 2 21h20L12 3Z" strokeLinejoin="round" />
           <path d="M12 10v5M12 18v.5" strokeLinecap="round" />
         </svg>

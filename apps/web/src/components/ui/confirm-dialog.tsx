@@ -15,7 +15,15 @@ interface ConfirmDialogProps {
  * Asks once before something destructive. A native modal <dialog>: it traps focus, Escape
  * cancels, and focus returns to the button that opened it.
  */
-export function ConfirmDialog({ isOpen, title, children, confirmLabel, isBusy, onConfirm, onCancel }: ConfirmDialogProps) {
+export function ConfirmDialog({
+  isOpen,
+  title,
+  children,
+  confirmLabel,
+  isBusy,
+  onConfirm,
+  onCancel,
+}: ConfirmDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
 

@@ -70,7 +70,10 @@ export function DataTable<T>(props: DataTableProps<T>) {
   });
 
   return (
-    <div className={cn('transition-opacity', isFetching && 'opacity-70')} aria-busy={isFetching || undefined}>
+    <div
+      className={cn('transition-opacity', isFetching && 'opacity-70')}
+      aria-busy={isFetching || undefined}
+    >
       <div className="overflow-x-auto rounded-lg border border-line bg-white">
         <table className="w-full border-collapse text-left">
           <caption className="sr-only">{caption}</caption>
@@ -85,7 +88,9 @@ export function DataTable<T>(props: DataTableProps<T>) {
                     <th
                       key={header.id}
                       scope="col"
-                      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
+                      aria-sort={
+                        sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined
+                      }
                       className={cn(
                         'border-b border-line px-4 py-2 font-semibold whitespace-nowrap',
                         isNumeric && 'text-right',

@@ -4,7 +4,10 @@ import type { ReactNode } from 'react';
 export function FormAlert({ children }: { children: ReactNode }) {
   if (!children) return null;
   return (
-    <div role="alert" className="rounded-md border border-brick-700 bg-brick-50 px-4 py-3 font-semibold text-brick-700">
+    <div
+      role="alert"
+      className="rounded-md border border-brick-700 bg-brick-50 px-4 py-3 font-semibold text-brick-700"
+    >
       {children}
     </div>
   );
@@ -14,7 +17,10 @@ export function FormAlert({ children }: { children: ReactNode }) {
 export function FormNotice({ children }: { children: ReactNode }) {
   if (!children) return null;
   return (
-    <div role="status" className="rounded-md border border-moss-200 bg-moss-50 px-4 py-3 text-moss-900">
+    <div
+      role="status"
+      className="rounded-md border border-moss-200 bg-moss-50 px-4 py-3 text-moss-900"
+    >
       {children}
     </div>
   );

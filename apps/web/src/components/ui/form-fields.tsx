@@ -1,4 +1,11 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import {
+  useId,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type Ref,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from 'react';
 import { cn } from './cn';
 
 const controlClasses =
@@ -48,7 +55,16 @@ interface CommonProps {
   wrapperClassName?: string;
 }
 
-export function TextField({ label, hint, error, wrapperClassName, id, className, ref, ...rest }: CommonProps & InputHTMLAttributes<HTMLInputElement> & { ref?: Ref<HTMLInputElement> }) {
+export function TextField({
+  label,
+  hint,
+  error,
+  wrapperClassName,
+  id,
+  className,
+  ref,
+  ...rest
+}: CommonProps & InputHTMLAttributes<HTMLInputElement> & { ref?: Ref<HTMLInputElement> }) {
   const fallbackId = useId();
   const fieldId = id ?? fallbackId;
   return (
@@ -65,7 +81,16 @@ export function TextField({ label, hint, error, wrapperClassName, id, className,
   );
 }
 
-export function TextAreaField({ label, hint, error, wrapperClassName, id, className, ref, ...rest }: CommonProps & TextareaHTMLAttributes<HTMLTextAreaElement> & { ref?: Ref<HTMLTextAreaElement> }) {
+export function TextAreaField({
+  label,
+  hint,
+  error,
+  wrapperClassName,
+  id,
+  className,
+  ref,
+  ...rest
+}: CommonProps & TextareaHTMLAttributes<HTMLTextAreaElement> & { ref?: Ref<HTMLTextAreaElement> }) {
   const fallbackId = useId();
   const fieldId = id ?? fallbackId;
   return (
@@ -83,7 +108,17 @@ export function TextAreaField({ label, hint, error, wrapperClassName, id, classN
   );
 }
 
-export function SelectField({ label, hint, error, wrapperClassName, id, className, ref, children, ...rest }: CommonProps & SelectHTMLAttributes<HTMLSelectElement> & { ref?: Ref<HTMLSelectElement> }) {
+export function SelectField({
+  label,
+  hint,
+  error,
+  wrapperClassName,
+  id,
+  className,
+  ref,
+  children,
+  ...rest
+}: CommonProps & SelectHTMLAttributes<HTMLSelectElement> & { ref?: Ref<HTMLSelectElement> }) {
   const fallbackId = useId();
   const fieldId = id ?? fallbackId;
   return (

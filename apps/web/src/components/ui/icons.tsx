@@ -1,5 +1,13 @@
 /** Seamwright's own small line icons; decorative, so hidden from screen readers. */
-const base = { 'aria-hidden': true, viewBox: '0 0 24 24', fill: 'none', stroke: 'currentColor', strokeWidth: 1.8, strokeLinecap: 'round', strokeLinejoin: 'round' } as const;
+const base = {
+  'aria-hidden': true,
+  viewBox: '0 0 24 24',
+  fill: 'none',
+  stroke: 'currentColor',
+  strokeWidth: 1.8,
+  strokeLinecap: 'round',
+  strokeLinejoin: 'round',
+} as const;
 
 export function TodayIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
@@ -35,7 +43,13 @@ export function TurfMark({ className = 'h-7 w-7' }: { className?: string }) {
   return (
     <svg aria-hidden="true" viewBox="0 0 32 32" className={className}>
       <rect x="2" y="2" width="28" height="28" rx="6" fill="currentColor" />
-      <path d="M9 22c2-6 3-9 4-12M15 22c1-5 2-8 2-11M21 22c0-4 1-7 2-9" stroke="#1f3d2b" strokeWidth="2.2" strokeLinecap="round" fill="none" />
+      <path
+        d="M9 22c2-6 3-9 4-12M15 22c1-5 2-8 2-11M21 22c0-4 1-7 2-9"
+        stroke="#1f3d2b"
+        strokeWidth="2.2"
+        strokeLinecap="round"
+        fill="none"
+      />
     </svg>
   );
 }

@@ -11,13 +11,23 @@ interface PagerProps {
 }
 
 /** Previous / next, where we are, and how many rows a page shows. */
-export function Pager({ page, pageSize, total, pageSizeOptions, onPageChange, onPageSizeChange }: PagerProps) {
+export function Pager({
+  page,
+  pageSize,
+  total,
+  pageSizeOptions,
+  onPageChange,
+  onPageSizeChange,
+}: PagerProps) {
   const sizeId = useId();
   const pageCount = Math.max(1, Math.ceil(total / pageSize));
   const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
   const last = Math.min(total, page * pageSize);
   return (
-    <nav aria-label="Pages" className="mt-3 flex flex-wrap items-center justify-between gap-3 print:hidden">
+    <nav
+      aria-label="Pages"
+      className="mt-3 flex flex-wrap items-center justify-between gap-3 print:hidden"
+    >
       <p className="tabular-nums text-ink-muted">
         {first}–{last} of {total.toLocaleString('en-US')}
       </p>
@@ -43,7 +53,11 @@ export function Pager({ page, pageSize, total, pageSizeOptions, onPageChange, on
         <span className="tabular-nums px-1" aria-current="page">
           Page {page} of {pageCount}
         </span>
-        <Button variant="secondary" onClick={() => onPageChange(page + 1)} disabled={page >= pageCount}>
+        <Button
+          variant="secondary"
+          onClick={() => onPageChange(page + 1)}
+          disabled={page >= pageCount}
+        >
           Next
         </Button>
       </div>

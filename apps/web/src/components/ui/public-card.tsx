@@ -1,13 +1,29 @@
 import type { ReactNode } from 'react';
 
 /** The frame of the signed-out pages: the name, one card, and a line under it. */
-export function PublicCard({ title, intro, children, footer }: { title: string; intro?: ReactNode; children: ReactNode; footer?: ReactNode }) {
+export function PublicCard({
+  title,
+  intro,
+  children,
+  footer,
+}: {
+  title: string;
+  intro?: ReactNode;
+  children: ReactNode;
+  footer?: ReactNode;
+}) {
   return (
     <div className="flex min-h-dvh flex-col items-center bg-sand-100 px-4 py-10">
       <p className="mb-6 flex items-center gap-2 text-2xl font-bold text-moss-800">
         <svg aria-hidden="true" viewBox="0 0 32 32" className="h-8 w-8">
           <rect x="2" y="2" width="28" height="28" rx="6" fill="currentColor" />
-          <path d="M9 22c2-6 3-9 4-12M15 22c1-5 2-8 2-11M21 22c0-4 1-7 2-9" stroke="#f4ecdc" strokeWidth="2.2" strokeLinecap="round" fill="none" />
+          <path
+            d="M9 22c2-6 3-9 4-12M15 22c1-5 2-8 2-11M21 22c0-4 1-7 2-9"
+            stroke="#f4ecdc"
+            strokeWidth="2.2"
+            strokeLinecap="round"
+            fill="none"
+          />
         </svg>
         Seamwright
       </p>

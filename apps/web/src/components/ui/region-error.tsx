@@ -6,7 +6,10 @@ import { ApiError } from '../../lib/api-error';
 export function describeError(error: unknown): { title: string; detail: string } {
   if (error instanceof ApiError) {
     if (error.code === ErrorCode.Forbidden) {
-      return { title: 'Not available for your role', detail: 'Ask the company owner if you need access to this.' };
+      return {
+        title: 'Not available for your role',
+        detail: 'Ask the company owner if you need access to this.',
+      };
     }
     if (error.code === ErrorCode.NotFound) {
       return { title: 'Not found', detail: 'It may have been deleted, or the link is wrong.' };
@@ -24,7 +27,11 @@ export function ErrorPanel({ error, onRetry }: { error: unknown; onRetry?: () =>
       <h2 className="text-lg font-bold">{title}</h2>
       <p className="mt-1 text-ink-muted">{detail}</p>
       {onRetry ? (
-        <button type="button" className="mt-4 min-h-11 font-semibold text-moss-700 underline" onClick={onRetry}>
+        <button
+          type="button"
+          className="mt-4 min-h-11 font-semibold text-moss-700 underline"
+          onClick={onRetry}
+        >
           Try again
         </button>
       ) : null}

@@ -23,7 +23,10 @@ export function ToastProvider({ children }: { children: ReactNode }) {
   const [toasts, setToasts] = useState<Toast[]>([]);
   const nextId = useRef(1);
 
-  const dismiss = useCallback((id: number) => setToasts((all) => all.filter((t) => t.id !== id)), []);
+  const dismiss = useCallback(
+    (id: number) => setToasts((all) => all.filter((t) => t.id !== id)),
+    [],
+  );
   const show = useCallback(
     (message: string, action?: ToastAction) => {
       const id = nextId.current++;
@@ -60,7 +63,12 @@ export function ToastProvider({ children }: { children: ReactNode }) {
                 {toast.action.label}
               </button>
             ) : null}
-            <button type="button" aria-label="Dismiss" className="min-h-11 min-w-11 rounded text-sand-200" onClick={() => dismiss(toast.id)}>
+            <button
+              type="button"
+              aria-label="Dismiss"
+              className="min-h-11 min-w-11 rounded text-sand-200"
+              onClick={() => dismiss(toast.id)}
+            >
               ×
             </button>
           </div>

@@ -12,10 +12,15 @@ export function useRequestPasswordReset() {
   return useMutation({ mutationFn: requestPasswordReset });
 }
 
-export async function completePasswordReset(token: string, input: PasswordResetComplete): Promise<void> {
+export async function completePasswordReset(
+  token: string,
+  input: PasswordResetComplete,
+): Promise<void> {
   await api.post(authPaths.passwordResetComplete(token), input);
 }
 
 export function useCompletePasswordReset(token: string) {
-  return useMutation({ mutationFn: (input: PasswordResetComplete) => completePasswordReset(token, input) });
+  return useMutation({
+    mutationFn: (input: PasswordResetComplete) => completePasswordReset(token, input),
+  });
 }

@@ -31,8 +31,8 @@ export function ForgotPasswordForm() {
   if (sentTo) {
     return (
       <FormNotice>
-        If <strong>{sentTo}</strong> has a Seamwright account, a link to choose a new password is on its
-        way. The link works for a limited time; check your spam folder if it does not arrive.
+        If <strong>{sentTo}</strong> has a Seamwright account, a link to choose a new password is on
+        its way. The link works for a limited time; check your spam folder if it does not arrive.
       </FormNotice>
     );
   }
@@ -40,7 +40,13 @@ export function ForgotPasswordForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert>{formError}</FormAlert>
-      <TextField label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register('email')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
       <Button type="submit" isBusy={formState.isSubmitting}>
         Send me a reset link
       </Button>

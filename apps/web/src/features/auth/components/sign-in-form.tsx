@@ -31,8 +31,20 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert>{formError}</FormAlert>
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...register('email')} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register('password')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...register('password')}
+      />
       <Button type="submit" isBusy={formState.isSubmitting}>
         {formState.isSubmitting ? 'Signing in…' : 'Sign in'}
       </Button>

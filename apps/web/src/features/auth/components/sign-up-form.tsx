@@ -24,16 +24,34 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
       await signUp.mutateAsync(values);
       onSignedUp();
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['companyName', 'name', 'email', 'password']));
+      setFormError(
+        applyServerErrors(error, setError, ['companyName', 'name', 'email', 'password']),
+      );
     }
   });
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormAlert>{formError}</FormAlert>
-      <TextField label="Company name" autoComplete="organization" error={errors.companyName?.message} {...register('companyName')} />
-      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...register('name')} />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...register('email')} />
+      <TextField
+        label="Company name"
+        autoComplete="organization"
+        error={errors.companyName?.message}
+        {...register('companyName')}
+      />
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        error={errors.name?.message}
+        {...register('name')}
+      />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...register('email')}
+      />
       <TextField
         label="Password"
         type="password"

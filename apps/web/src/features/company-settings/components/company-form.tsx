@@ -19,11 +19,18 @@ const companyFormSchema = z.object({
 const fields = ['name', 'timeZone', 'region', 'measurementSystem'] as const;
 
 function timeZones(current: string): string[] {
-  const all = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
+  const all =
+    typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
   return all.includes(current) ? all : [current, ...all];
 }
 
-export function CompanyForm({ company, onSaved }: { company: CompanyView; onSaved: () => Promise<void> | void }) {
+export function CompanyForm({
+  company,
+  onSaved,
+}: {
+  company: CompanyView;
+  onSaved: () => Promise<void> | void;
+}) {
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const update = useUpdateCompany(onSaved);
@@ -31,7 +38,12 @@ export function CompanyForm({ company, onSaved }: { company: CompanyView; onSave
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(companyFormSchema),
     mode: 'onChange',
-    defaultValues: { name: company.name, timeZone: company.timeZone, region: company.region ?? '', measurementSystem: company.measurementSystem },
+    defaultValues: {
+      name: company.name,
+      timeZone: company.timeZone,
+      region: company.region ?? '',
+      measurementSystem: company.measurementSystem,
+    },
   });
   const { errors } = formState;
 
@@ -47,11 +59,21 @@ export function CompanyForm({ company, onSaved }: { company: CompanyView; onSave
   });
 
   return (
-    <form onSubmit={submit} noValidate className="flex max-w-xl flex-col gap-4" aria-label="Company details">
+    <form
+      onSubmit={submit}
+      noValidate
+      className="flex max-w-xl flex-col gap-4"
+      aria-label="Company details"
+    >
       <FormAlert>{formError}</FormAlert>
       {saved ? <FormNotice>Company details saved.</FormNotice> : null}
       <TextField label="Company name" error={errors.name?.message} {...register('name')} />
-      <SelectField label="Time zone" hint="Dates across Seamwright show in this time zone." error={errors.timeZone?.message} {...register('timeZone')}>
+      <SelectField
+        label="Time zone"
+        hint="Dates across Seamwright show in this time zone."
+        error={errors.timeZone?.message}
+        {...register('timeZone')}
+      >
         {zones.map((zone) => (
           <option key={zone} value={zone}>
             {zone.replace(/_/g, ' ')}
@@ -65,12 +87,18 @@ export function CompanyForm({ company, onSaved }: { company: CompanyView; onSave
         error={errors.region?.message}
         {...register('region')}
       />
-      <SelectField label="Measurements" error={errors.measurementSystem?.message} {...register('measurementSystem')}>
+      <SelectField
+        label="Measurements"
+        error={errors.measurementSystem?.message}
+        {...register('measurementSystem')}
+      >
         <option value="imperial">Feet and inches (sq ft, cu yd, lb)</option>
         <option value="metric">Metric (m, m², m³, kg)</option>
       </SelectField>
       <div>
-        <Button type="submit" isBusy={formState.isSubmitting}>Save company details</Button>
+        <Button type="submit" isBusy={formState.isSubmitting}>
+          Save company details
+        </Button>
       </div>
     </form>
   );

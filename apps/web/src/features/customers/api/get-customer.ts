@@ -5,12 +5,17 @@ import { customerKeys } from './customer-keys';
 
 /** `GET /api/customers/:id`. */
 export async function getCustomer(id: string, signal?: AbortSignal): Promise<CustomerView> {
-  const body = await api.get<ItemResponse<CustomerView>>(`/customers/${encodeURIComponent(id)}`, { signal });
+  const body = await api.get<ItemResponse<CustomerView>>(`/customers/${encodeURIComponent(id)}`, {
+    signal,
+  });
   return body.data;
 }
 
 export function customerQueryOptions(id: string) {
-  return queryOptions({ queryKey: customerKeys.detail(id), queryFn: ({ signal }) => getCustomer(id, signal) });
+  return queryOptions({
+    queryKey: customerKeys.detail(id),
+    queryFn: ({ signal }) => getCustomer(id, signal),
+  });
 }
 
 export function useCustomer(id: string): CustomerView {

@@ -5,9 +5,18 @@ import type { CustomerListParams } from '../utils/list-params';
 import { customerKeys } from './customer-keys';
 
 /** `GET /api/customers`: one page of the company's customers. */
-export function getCustomers(params: CustomerListParams, signal?: AbortSignal): Promise<ListResponse<CustomerView>> {
+export function getCustomers(
+  params: CustomerListParams,
+  signal?: AbortSignal,
+): Promise<ListResponse<CustomerView>> {
   return api.get<ListResponse<CustomerView>>('/customers', {
-    query: { page: params.page, pageSize: params.pageSize, sort: params.sort, q: params.q || undefined, status: params.status },
+    query: {
+      page: params.page,
+      pageSize: params.pageSize,
+      sort: params.sort,
+      q: params.q || undefined,
+      status: params.status,
+    },
     signal,
   });
 }

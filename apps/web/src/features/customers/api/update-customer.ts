@@ -4,8 +4,14 @@ import { api } from '../../../lib/api-client';
 import { customerKeys } from './customer-keys';
 
 /** `PATCH /api/customers/:id` — also archives (`{ archived: true }`) and restores. */
-export async function updateCustomer(id: string, input: UpdateCustomerInput): Promise<CustomerView> {
-  const body = await api.patch<ItemResponse<CustomerView>>(`/customers/${encodeURIComponent(id)}`, input);
+export async function updateCustomer(
+  id: string,
+  input: UpdateCustomerInput,
+): Promise<CustomerView> {
+  const body = await api.patch<ItemResponse<CustomerView>>(
+    `/customers/${encodeURIComponent(id)}`,
+    input,
+  );
   return body.data;
 }
 

@@ -15,7 +15,10 @@ export function customerColumns(timeZone: string) {
       header: 'Name',
       cell: (info) => (
         <span className="flex flex-wrap items-center gap-2">
-          <Link to={paths.customer(info.row.original.id)} className="font-semibold underline-offset-2 hover:underline">
+          <Link
+            to={paths.customer(info.row.original.id)}
+            className="font-semibold underline-offset-2 hover:underline"
+          >
             {info.getValue()}
           </Link>
           {info.row.original.archivedAt ? (
@@ -48,7 +51,9 @@ export function customerColumns(timeZone: string) {
       id: 'createdAt',
       header: 'Added',
       meta: { isNumeric: true, isHiddenOnPhone: true },
-      cell: (info) => <span className="whitespace-nowrap">{formatDate(info.getValue(), timeZone)}</span>,
+      cell: (info) => (
+        <span className="whitespace-nowrap">{formatDate(info.getValue(), timeZone)}</span>
+      ),
     }),
   ];
 }

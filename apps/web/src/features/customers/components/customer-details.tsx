@@ -14,13 +14,21 @@ function Detail({ label, value }: { label: string; value: string | null }) {
   return (
     <div>
       <dt className="text-sm font-semibold text-ink-muted">{label}</dt>
-      <dd className="whitespace-pre-line">{value ?? <span className="text-ink-muted">Not given</span>}</dd>
+      <dd className="whitespace-pre-line">
+        {value ?? <span className="text-ink-muted">Not given</span>}
+      </dd>
     </div>
   );
 }
 
 /** A customer's details with edit, archive (undoable) and delete. */
-export function CustomerDetails({ customerId, onDeleted }: { customerId: string; onDeleted: () => void }) {
+export function CustomerDetails({
+  customerId,
+  onDeleted,
+}: {
+  customerId: string;
+  onDeleted: () => void;
+}) {
   const customer = useCustomer(customerId);
   const { company } = useSession();
   const canWrite = useCan('customers.write');
@@ -38,13 +46,21 @@ export function CustomerDetails({ customerId, onDeleted }: { customerId: string;
       toast.show(describeError(error).detail);
       return;
     }
-    toast.show(`${customer.name} archived.`, { label: 'Undo', onClick: () => void update.mutateAsync({ archived: false }) });
+    toast.show(`${customer.name} archived.`, {
+      label: 'Undo',
+      onClick: () => void update.mutateAsync({ archived: false }),
+    });
   };
 
   if (isEditing) {
     return (
-      <section aria-labelledby="customer-edit-heading" className="rounded-lg border border-line bg-white p-6">
-        <h2 id="customer-edit-heading" className="mb-4 text-xl font-bold">Edit customer</h2>
+      <section
+        aria-labelledby="customer-edit-heading"
+        className="rounded-lg border border-line bg-white p-6"
+      >
+        <h2 id="customer-edit-heading" className="mb-4 text-xl font-bold">
+          Edit customer
+        </h2>
         <CustomerForm
           customer={customer}
           submitLabel="Save changes"
@@ -60,23 +76,43 @@ export function CustomerDetails({ customerId, onDeleted }: { customerId: string;
   }
 
   return (
-    <section aria-labelledby="customer-details-heading" className="rounded-lg border border-line bg-white p-6">
+    <section
+      aria-labelledby="customer-details-heading"
+      className="rounded-lg border border-line bg-white p-6"
+    >
       <div className="flex flex-wrap items-start justify-between gap-3">
-        <h2 id="customer-details-heading" className="text-xl font-bold">Details</h2>
+        <h2 id="customer-details-heading" className="text-xl font-bold">
+          Details
+        </h2>
         {canWrite ? (
           <div className="flex flex-wrap gap-2 print:hidden">
-            <Button variant="secondary" onClick={() => setIsEditing(true)}>Edit</Button>
+            <Button variant="secondary" onClick={() => setIsEditing(true)}>
+              Edit
+            </Button>
             {customer.archivedAt ? (
-              <Button variant="secondary" isBusy={update.isPending} onClick={() => void update.mutateAsync({ archived: false })}>Restore</Button>
+              <Button
+                variant="secondary"
+                isBusy={update.isPending}
+                onClick={() => void update.mutateAsync({ archived: false })}
+              >
+                Restore
+              </Button>
             ) : (
-              <Button variant="secondary" isBusy={update.isPending} onClick={() => void archive()}>Archive</Button>
+              <Button variant="secondary" isBusy={update.isPending} onClick={() => void archive()}>
+                Archive
+              </Button>
             )}
-            <Button variant="danger" onClick={() => setIsConfirmingDelete(true)}>Delete</Button>
+            <Button variant="danger" onClick={() => setIsConfirmingDelete(true)}>
+              Delete
+            </Button>
           </div>
         ) : null}
       </div>
       {customer.archivedAt ? (
-        <p className="mt-3 rounded bg-sand-100 px-3 py-2">Archived on {formatDate(customer.archivedAt, company.timeZone)}. Archived customers stay out of the list until you show them.</p>
+        <p className="mt-3 rounded bg-sand-100 px-3 py-2">
+          Archived on {formatDate(customer.archivedAt, company.timeZone)}. Archived customers stay
+          out of the list until you show them.
+        </p>
       ) : null}
       <dl className="mt-4 grid gap-4 sm:grid-cols-2">
         {canSeeBilling ? (
@@ -96,17 +132,22 @@ export function CustomerDetails({ customerId, onDeleted }: { customerId: string;
         isBusy={remove.isPending}
         onCancel={() => setIsConfirmingDelete(false)}
         onConfirm={() =>
-          void remove.mutateAsync().then(() => {
-            setIsConfirmingDelete(false);
-            toast.show(`${customer.name} deleted.`);
-            onDeleted();
-          }, (error: unknown) => {
-            setIsConfirmingDelete(false);
-            toast.show(describeError(error).detail);
-          })
+          void remove.mutateAsync().then(
+            () => {
+              setIsConfirmingDelete(false);
+              toast.show(`${customer.name} deleted.`);
+              onDeleted();
+            },
+            (error: unknown) => {
+              setIsConfirmingDelete(false);
+              toast.show(describeError(error).detail);
+            },
+          )
         }
       >
-        This removes the customer and their {customer.siteCount === 1 ? 'site' : `${customer.siteCount} sites`} for good. If you only want them out of the way, archive instead.
+        This removes the customer and their{' '}
+        {customer.siteCount === 1 ? 'site' : `${customer.siteCount} sites`} for good. If you only
+        want them out of the way, archive instead.
       </ConfirmDialog>
     </section>
   );

@@ -18,7 +18,9 @@ describe('CustomerForm', () => {
     expect(screen.getByLabelText('E-mail').getAttribute('aria-invalid')).toBe('true');
 
     fill('Phone', 'call me maybe');
-    expect(await screen.findByText('Enter a phone number using digits, spaces and + ( ) - .')).toBeTruthy();
+    expect(
+      await screen.findByText('Enter a phone number using digits, spaces and + ( ) - .'),
+    ).toBeTruthy();
 
     fireEvent.click(screen.getByRole('button', { name: 'Save customer' }));
     expect(await screen.findByText('Name is required')).toBeTruthy();
@@ -56,7 +58,10 @@ describe('CustomerForm', () => {
   });
 
   it('shows a form-level message when the server error has no field', async () => {
-    const onSubmit = () => Promise.reject(new ApiError({ status: 403, code: ErrorCode.Forbidden, title: 'Your role cannot do this' }));
+    const onSubmit = () =>
+      Promise.reject(
+        new ApiError({ status: 403, code: ErrorCode.Forbidden, title: 'Your role cannot do this' }),
+      );
     render(<CustomerForm submitLabel="Save customer" onSubmit={onSubmit} />);
     fill('Name', 'Juniper Court HOA');
     fireEvent.click(screen.getByRole('button', { name: 'Save customer' }));

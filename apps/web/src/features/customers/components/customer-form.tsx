@@ -1,7 +1,11 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { createCustomerInputSchema, type CreateCustomerData, type CustomerView } from '@seamwright/shared';
+import {
+  createCustomerInputSchema,
+  type CreateCustomerData,
+  type CustomerView,
+} from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
@@ -45,12 +49,34 @@ export function CustomerForm({ customer, submitLabel, onSubmit, onCancel }: Cust
   });
 
   return (
-    <form onSubmit={submit} noValidate className="flex max-w-2xl flex-col gap-4" aria-label={submitLabel}>
+    <form
+      onSubmit={submit}
+      noValidate
+      className="flex max-w-2xl flex-col gap-4"
+      aria-label={submitLabel}
+    >
       <FormAlert>{formError}</FormAlert>
-      <TextField label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
+      <TextField
+        label="Name"
+        autoComplete="off"
+        error={errors.name?.message}
+        {...register('name')}
+      />
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Phone" type="tel" autoComplete="off" error={errors.phone?.message} {...register('phone')} />
-        <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...register('email')} />
+        <TextField
+          label="Phone"
+          type="tel"
+          autoComplete="off"
+          error={errors.phone?.message}
+          {...register('phone')}
+        />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="off"
+          error={errors.email?.message}
+          {...register('email')}
+        />
       </div>
       <TextAreaField
         label="Billing address"

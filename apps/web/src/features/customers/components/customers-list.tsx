@@ -10,11 +10,22 @@ import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { useCan, useSession } from '../../../lib/session';
 import { useCustomers } from '../api/get-customers';
-import { customerPageSizes, joinSort, parseCustomerListParams, splitSort, toCustomerSearchParams, type CustomerListParams } from '../utils/list-params';
+import {
+  customerPageSizes,
+  joinSort,
+  parseCustomerListParams,
+  splitSort,
+  toCustomerSearchParams,
+  type CustomerListParams,
+} from '../utils/list-params';
 import { customerColumns } from './customer-columns';
 import { SearchBox } from './search-box';
 
-const statusLabels: Record<(typeof customerStatuses)[number], string> = { active: 'Active', archived: 'Archived', all: 'All' };
+const statusLabels: Record<(typeof customerStatuses)[number], string> = {
+  active: 'Active',
+  archived: 'Archived',
+  all: 'All',
+};
 
 /** The customers list; every bit of its state is in the URL, so it survives a reload. */
 export function CustomersList() {
@@ -29,7 +40,9 @@ export function CustomersList() {
     (change: Partial<CustomerListParams>) => {
       // Any change other than the page itself starts again at page 1.
       const next = { ...params, page: 1, ...change };
-      setSearchParams(toCustomerSearchParams(next), { replace: !('page' in change) && 'q' in change });
+      setSearchParams(toCustomerSearchParams(next), {
+        replace: !('page' in change) && 'q' in change,
+      });
     },
     [params, setSearchParams],
   );
@@ -41,7 +54,9 @@ export function CustomersList() {
       <SelectField
         label="Show"
         value={params.status}
-        onChange={(event) => update({ status: customerStatuses.find((s) => s === event.target.value) ?? 'active' })}
+        onChange={(event) =>
+          update({ status: customerStatuses.find((s) => s === event.target.value) ?? 'active' })
+        }
         wrapperClassName="w-40"
       >
         {customerStatuses.map((status) => (
@@ -53,8 +68,20 @@ export function CustomersList() {
     </div>
   );
 
-  if (query.isPending) return <>{filters}<Loading label="Loading customers…" /></>;
-  if (query.isError) return <>{filters}<ErrorPanel error={query.error} onRetry={() => void query.refetch()} /></>;
+  if (query.isPending)
+    return (
+      <>
+        {filters}
+        <Loading label="Loading customers…" />
+      </>
+    );
+  if (query.isError)
+    return (
+      <>
+        {filters}
+        <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />
+      </>
+    );
 
   const { data, meta } = query.data;
   if (meta.total === 0) {
@@ -63,11 +90,19 @@ export function CustomersList() {
       <>
         {filters}
         {isFiltered ? (
-          <EmptyState title="No customers match">Try another search, or show all customers including archived ones.</EmptyState>
+          <EmptyState title="No customers match">
+            Try another search, or show all customers including archived ones.
+          </EmptyState>
         ) : (
           <EmptyState
             title="No customers yet"
-            action={canWrite ? <Link to={paths.newCustomer} className={buttonClasses('primary')}>Add your first customer</Link> : null}
+            action={
+              canWrite ? (
+                <Link to={paths.newCustomer} className={buttonClasses('primary')}>
+                  Add your first customer
+                </Link>
+              ) : null
+            }
           >
             Every job starts with a customer and the site where the turf goes. Add one to begin.
           </EmptyState>
@@ -91,7 +126,9 @@ export function CustomersList() {
         isFetching={query.isPlaceholderData}
         onSortChange={(sort) => update({ sort: joinSort(sort.field, sort.direction) })}
         onPageChange={(page) => update({ page })}
-        onPageSizeChange={(pageSize) => update({ pageSize: customerPageSizes.find((s) => s === pageSize) ?? 25 })}
+        onPageSizeChange={(pageSize) =>
+          update({ pageSize: customerPageSizes.find((s) => s === pageSize) ?? 25 })
+        }
       />
     </>
   );

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { customerListQuerySchema } from '@seamwright/shared';
-import { joinSort, parseCustomerListParams, splitSort, toCustomerSearchParams, type CustomerListParams } from './list-params';
+import {
+  joinSort,
+  parseCustomerListParams,
+  splitSort,
+  toCustomerSearchParams,
+  type CustomerListParams,
+} from './list-params';
 
 describe('customer list URL params', () => {
   it('gives the defaults for an empty URL, and writes nothing back for them', () => {
@@ -19,12 +25,16 @@ describe('customer list URL params', () => {
   });
 
   it('falls back field by field on hand-edited values instead of failing', () => {
-    const params = parseCustomerListParams(new URLSearchParams('page=-4&pageSize=33&sort=password&status=deleted&q=%20lawn%20'));
+    const params = parseCustomerListParams(
+      new URLSearchParams('page=-4&pageSize=33&sort=password&status=deleted&q=%20lawn%20'),
+    );
     expect(params).toEqual({ page: 1, pageSize: 25, sort: 'name', q: 'lawn', status: 'active' });
   });
 
   it('produces only what the API list schema accepts', () => {
-    const params = parseCustomerListParams(new URLSearchParams('sort=-createdAt&pageSize=100&status=all&page=2'));
+    const params = parseCustomerListParams(
+      new URLSearchParams('sort=-createdAt&pageSize=100&status=all&page=2'),
+    );
     const parsed = customerListQuerySchema.parse({ ...params, q: params.q || undefined });
     expect(parsed.sort).toEqual({ field: 'createdAt', direction: 'desc' });
     expect(parsed.pageSize).toBe(100);

@@ -2,7 +2,10 @@ import { z } from 'zod';
 import { customerSortFields, customerStatuses } from '@seamwright/shared';
 
 export const customerPageSizes = [10, 25, 50, 100] as const;
-const sortValues = [...customerSortFields, ...customerSortFields.map((field) => `-${field}` as const)] as const;
+const sortValues = [
+  ...customerSortFields,
+  ...customerSortFields.map((field) => `-${field}` as const),
+] as const;
 
 const defaults = { page: 1, pageSize: 25, sort: 'name', q: '', status: 'active' } as const;
 
@@ -40,8 +43,13 @@ export function toCustomerSearchParams(params: CustomerListParams): URLSearchPar
 }
 
 /** `-createdAt` ⇄ `{ field: 'createdAt', direction: 'desc' }`, for the table's headers. */
-export function splitSort(sort: CustomerListParams['sort']): { field: string; direction: 'asc' | 'desc' } {
-  return sort.startsWith('-') ? { field: sort.slice(1), direction: 'desc' } : { field: sort, direction: 'asc' };
+export function splitSort(sort: CustomerListParams['sort']): {
+  field: string;
+  direction: 'asc' | 'desc';
+} {
+  return sort.startsWith('-')
+    ? { field: sort.slice(1), direction: 'desc' }
+    : { field: sort, direction: 'asc' };
 }
 
 export function joinSort(field: string, direction: 'asc' | 'desc'): CustomerListParams['sort'] {

@@ -4,8 +4,14 @@ import { api, refreshCsrfToken } from '../../../lib/api-client';
 import { queryClient, sessionMeKey } from '../../../lib/query-client';
 
 /** `POST /api/invitations/:token/accept`: joins the company and signs the user in. */
-export async function acceptInvitation(token: string, input: AcceptInvitationInput): Promise<MeView> {
-  const body = await api.post<ItemResponse<MeView>>(`/invitations/${encodeURIComponent(token)}/accept`, input);
+export async function acceptInvitation(
+  token: string,
+  input: AcceptInvitationInput,
+): Promise<MeView> {
+  const body = await api.post<ItemResponse<MeView>>(
+    `/invitations/${encodeURIComponent(token)}/accept`,
+    input,
+  );
   return body.data;
 }
 

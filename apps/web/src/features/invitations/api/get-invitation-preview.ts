@@ -5,12 +5,18 @@ import { invitationKeys } from './invitation-keys';
 
 /** `GET /api/invitations/:token`: the public view of an invitation before it is accepted. */
 export async function getInvitationPreview(token: string): Promise<InvitationPreview> {
-  const body = await api.get<ItemResponse<InvitationPreview>>(`/invitations/${encodeURIComponent(token)}`);
+  const body = await api.get<ItemResponse<InvitationPreview>>(
+    `/invitations/${encodeURIComponent(token)}`,
+  );
   return body.data;
 }
 
 export function invitationPreviewQueryOptions(token: string) {
-  return queryOptions({ queryKey: invitationKeys.preview(token), queryFn: () => getInvitationPreview(token), staleTime: Infinity });
+  return queryOptions({
+    queryKey: invitationKeys.preview(token),
+    queryFn: () => getInvitationPreview(token),
+    staleTime: Infinity,
+  });
 }
 
 export function useInvitationPreview(token: string): InvitationPreview {

@@ -2,7 +2,12 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { passwordSchema, requiredText, roleLabels, type InvitationPreview } from '@seamwright/shared';
+import {
+  passwordSchema,
+  requiredText,
+  roleLabels,
+  type InvitationPreview,
+} from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
@@ -11,7 +16,10 @@ import { useAcceptInvitation } from '../api/accept-invitation';
 
 // A new user must give a name; someone with an account only proves their password.
 const newUserSchema = z.object({ name: requiredText('Your name', 120), password: passwordSchema });
-const existingUserSchema = z.object({ name: z.string().optional(), password: z.string().min(1, 'Password is required') });
+const existingUserSchema = z.object({
+  name: z.string().optional(),
+  password: z.string().min(1, 'Password is required'),
+});
 
 interface Props {
   token: string;
@@ -32,7 +40,11 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: Props) {
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await accept.mutateAsync(preview.hasAccount ? { password: values.password } : { name: values.name, password: values.password });
+      await accept.mutateAsync(
+        preview.hasAccount
+          ? { password: values.password }
+          : { name: values.name, password: values.password },
+      );
       onAccepted();
     } catch (error) {
       setFormError(applyServerErrors(error, setError, ['name', 'password']));
@@ -51,9 +63,16 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: Props) {
       </dl>
       <FormAlert>{formError}</FormAlert>
       {preview.hasAccount ? (
-        <p className="text-ink-muted">You already have a Seamwright account. Enter its password to join this company too.</p>
+        <p className="text-ink-muted">
+          You already have a Seamwright account. Enter its password to join this company too.
+        </p>
       ) : (
-        <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...register('name')} />
+        <TextField
+          label="Your name"
+          autoComplete="name"
+          error={errors.name?.message}
+          {...register('name')}
+        />
       )}
       <TextField
         label={preview.hasAccount ? 'Your password' : 'Choose a password'}

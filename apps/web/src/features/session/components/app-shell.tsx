@@ -21,12 +21,18 @@ export function AppShell({ children }: { children: ReactNode }) {
   return (
     <div className="min-h-dvh md:flex">
       <NavigationProgress />
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:z-50 focus:m-2 focus:rounded focus:bg-white focus:p-3">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:z-50 focus:m-2 focus:rounded focus:bg-white focus:p-3"
+      >
         Skip to content
       </a>
 
       <aside className="sticky top-0 hidden h-dvh w-60 shrink-0 flex-col gap-6 bg-moss-900 p-4 text-sand-100 md:flex print:hidden">
-        <NavLink to={paths.today} className="flex items-center gap-2 text-lg font-bold text-sand-100 no-underline">
+        <NavLink
+          to={paths.today}
+          className="flex items-center gap-2 text-lg font-bold text-sand-100 no-underline"
+        >
           <TurfMark className="h-7 w-7 text-sand-200" />
           Seamwright
         </NavLink>
@@ -39,8 +45,10 @@ export function AppShell({ children }: { children: ReactNode }) {
                   to={to}
                   end={to === paths.today}
                   className={({ isActive }) =>
-                    cn('flex min-h-11 items-center gap-3 rounded-md px-3 font-semibold no-underline',
-                      isActive ? 'bg-sand-100 text-moss-900' : 'text-sand-100 hover:bg-moss-800')
+                    cn(
+                      'flex min-h-11 items-center gap-3 rounded-md px-3 font-semibold no-underline',
+                      isActive ? 'bg-sand-100 text-moss-900' : 'text-sand-100 hover:bg-moss-800',
+                    )
                   }
                 >
                   <Icon />
@@ -58,11 +66,18 @@ export function AppShell({ children }: { children: ReactNode }) {
         <UserMenu tone="light" />
       </header>
 
-      <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-4 pt-6 pb-28 md:px-10 md:py-8 print:p-0">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="min-w-0 flex-1 px-4 pt-6 pb-28 md:px-10 md:py-8 print:p-0"
+      >
         {children}
       </main>
 
-      <nav aria-label="Sections" className="fixed inset-x-0 bottom-0 z-30 border-t border-line bg-white md:hidden print:hidden">
+      <nav
+        aria-label="Sections"
+        className="fixed inset-x-0 bottom-0 z-30 border-t border-line bg-white md:hidden print:hidden"
+      >
         <ul className="flex">
           {phoneSections.map(({ to, label, Icon }) => (
             <li key={to} className="flex-1">
@@ -70,8 +85,10 @@ export function AppShell({ children }: { children: ReactNode }) {
                 to={to}
                 end={to === paths.today}
                 className={({ isActive }) =>
-                  cn('flex min-h-16 flex-col items-center justify-center gap-1 text-sm font-semibold no-underline',
-                    isActive ? 'bg-moss-50 text-moss-800' : 'text-ink-muted')
+                  cn(
+                    'flex min-h-16 flex-col items-center justify-center gap-1 text-sm font-semibold no-underline',
+                    isActive ? 'bg-moss-50 text-moss-800' : 'text-ink-muted',
+                  )
                 }
               >
                 <Icon />

@@ -25,7 +25,9 @@ export function CompanySwitcher({ tone = 'dark' }: { tone?: 'dark' | 'light' }) 
       {others.length > 0 ? (
         // Keyed by company so the list closes once the switch is done.
         <details key={me.company.id} className="mt-2">
-          <summary className={`min-h-11 cursor-pointer py-2 font-semibold underline ${tone === 'dark' ? 'text-sand-100' : 'text-moss-800'}`}>
+          <summary
+            className={`min-h-11 cursor-pointer py-2 font-semibold underline ${tone === 'dark' ? 'text-sand-100' : 'text-moss-800'}`}
+          >
             Switch company
           </summary>
           <ul className="mt-1 flex flex-col gap-1">
@@ -43,7 +45,9 @@ export function CompanySwitcher({ tone = 'dark' }: { tone?: 'dark' | 'light' }) 
               </li>
             ))}
           </ul>
-          {switchCompany.isError ? <p role="alert">{describeError(switchCompany.error).detail}</p> : null}
+          {switchCompany.isError ? (
+            <p role="alert">{describeError(switchCompany.error).detail}</p>
+          ) : null}
         </details>
       ) : null}
     </div>

@@ -10,13 +10,23 @@ export function UserMenu({ tone = 'dark' }: { tone?: 'dark' | 'light' }) {
   const signOut = useSignOut(() => void navigate(paths.signIn()));
   return (
     <details className="relative">
-      <summary className={`min-h-11 cursor-pointer list-none rounded px-2 py-2 font-semibold ${tone === 'dark' ? 'hover:bg-moss-800' : 'hover:bg-sand-100'}`}>
+      <summary
+        className={`min-h-11 cursor-pointer list-none rounded px-2 py-2 font-semibold ${tone === 'dark' ? 'hover:bg-moss-800' : 'hover:bg-sand-100'}`}
+      >
         <span className="sr-only">Account menu for </span>
         {user.name}
-        <span aria-hidden="true" className="ml-1">▾</span>
+        <span aria-hidden="true" className="ml-1">
+          ▾
+        </span>
       </summary>
-      <div className={`mt-1 rounded-md p-2 ${tone === 'dark' ? 'bg-moss-800' : 'absolute right-0 z-20 w-56 border border-line bg-white shadow-lg'}`}>
-        <p className={`px-2 text-sm break-all ${tone === 'dark' ? 'text-sand-200' : 'text-ink-muted'}`}>{user.email}</p>
+      <div
+        className={`mt-1 rounded-md p-2 ${tone === 'dark' ? 'bg-moss-800' : 'absolute right-0 z-20 w-56 border border-line bg-white shadow-lg'}`}
+      >
+        <p
+          className={`px-2 text-sm break-all ${tone === 'dark' ? 'text-sand-200' : 'text-ink-muted'}`}
+        >
+          {user.email}
+        </p>
         <button
           type="button"
           onClick={() => signOut.mutate()}

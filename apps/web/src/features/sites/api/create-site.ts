@@ -5,7 +5,10 @@ import { siteKeys } from './site-keys';
 
 /** `POST /api/customers/:id/sites`. */
 export async function createSite(customerId: string, input: CreateSiteInput): Promise<SiteView> {
-  const body = await api.post<ItemResponse<SiteView>>(`/customers/${encodeURIComponent(customerId)}/sites`, input);
+  const body = await api.post<ItemResponse<SiteView>>(
+    `/customers/${encodeURIComponent(customerId)}/sites`,
+    input,
+  );
   return body.data;
 }
 

@@ -5,7 +5,10 @@ import { siteKeys } from './site-keys';
 
 /** `PATCH /api/sites/:id`. */
 export async function updateSite(siteId: string, input: UpdateSiteInput): Promise<SiteView> {
-  const body = await api.patch<ItemResponse<SiteView>>(`/sites/${encodeURIComponent(siteId)}`, input);
+  const body = await api.patch<ItemResponse<SiteView>>(
+    `/sites/${encodeURIComponent(siteId)}`,
+    input,
+  );
   return body.data;
 }
 

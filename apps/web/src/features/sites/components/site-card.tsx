@@ -60,8 +60,20 @@ export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean
         </div>
         {canWrite ? (
           <div className="flex gap-2 print:hidden">
-            <Button variant="secondary" onClick={() => setIsEditing(true)} aria-label={`Edit site ${title}`}>Edit</Button>
-            <Button variant="quietDanger" onClick={() => setIsConfirming(true)} aria-label={`Delete site ${title}`}>Delete</Button>
+            <Button
+              variant="secondary"
+              onClick={() => setIsEditing(true)}
+              aria-label={`Edit site ${title}`}
+            >
+              Edit
+            </Button>
+            <Button
+              variant="quietDanger"
+              onClick={() => setIsConfirming(true)}
+              aria-label={`Delete site ${title}`}
+            >
+              Delete
+            </Button>
           </div>
         ) : null}
       </div>
@@ -71,7 +83,11 @@ export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean
         <Line label="Hazards" value={site.hazards} />
         <div>
           <dt className="text-sm font-semibold text-ink-muted">Sprinkler heads to cap</dt>
-          <dd className="tabular-nums">{site.sprinklerHeads === null ? 'Not counted yet' : `${site.sprinklerHeads} ${site.sprinklerHeads === 1 ? 'head' : 'heads'}`}</dd>
+          <dd className="tabular-nums">
+            {site.sprinklerHeads === null
+              ? 'Not counted yet'
+              : `${site.sprinklerHeads} ${site.sprinklerHeads === 1 ? 'head' : 'heads'}`}
+          </dd>
         </div>
       </dl>
       <ConfirmDialog

@@ -20,7 +20,11 @@ export function SitesPanel({ customerId, canWrite }: { customerId: string; canWr
         <h2 id="sites-heading" className="text-xl font-bold">
           Sites <span className="tabular-nums font-normal text-ink-muted">({sites.length})</span>
         </h2>
-        {canWrite && !isAdding ? <Button onClick={() => setIsAdding(true)} className="print:hidden">Add a site</Button> : null}
+        {canWrite && !isAdding ? (
+          <Button onClick={() => setIsAdding(true)} className="print:hidden">
+            Add a site
+          </Button>
+        ) : null}
       </div>
       {isAdding ? (
         <div className="mb-4 rounded-lg border border-moss-200 bg-white p-5">
@@ -38,7 +42,8 @@ export function SitesPanel({ customerId, canWrite }: { customerId: string; canWr
       ) : null}
       {sites.length === 0 && !isAdding ? (
         <EmptyState title="No sites yet">
-          A site is the address where the turf goes, with what the crew needs to know: the gate, the dog, the slope.
+          A site is the address where the turf goes, with what the crew needs to know: the gate, the
+          dog, the slope.
           {canWrite ? ' Add one to start measuring.' : ''}
         </EmptyState>
       ) : (

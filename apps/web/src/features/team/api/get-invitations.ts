@@ -10,7 +10,10 @@ export async function getInvitations(signal?: AbortSignal): Promise<InvitationVi
 }
 
 export function invitationsQueryOptions() {
-  return queryOptions({ queryKey: teamKeys.invitations(), queryFn: ({ signal }) => getInvitations(signal) });
+  return queryOptions({
+    queryKey: teamKeys.invitations(),
+    queryFn: ({ signal }) => getInvitations(signal),
+  });
 }
 
 export function useInvitations(): InvitationView[] {

@@ -11,7 +11,8 @@ export async function updateMember(memberId: string, input: UpdateMemberInput): 
 export function useUpdateMember() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ memberId, input }: { memberId: string; input: UpdateMemberInput }) => updateMember(memberId, input),
+    mutationFn: ({ memberId, input }: { memberId: string; input: UpdateMemberInput }) =>
+      updateMember(memberId, input),
     onSettled: () => queryClient.invalidateQueries({ queryKey: teamKeys.members() }),
   });
 }

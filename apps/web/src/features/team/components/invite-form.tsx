@@ -43,8 +43,19 @@ export function InviteForm() {
       <FormAlert>{formError}</FormAlert>
       {sentTo ? <FormNotice>Invitation sent to {sentTo}.</FormNotice> : null}
       <div className="grid items-start gap-4 sm:grid-cols-[2fr_1fr]">
-        <TextField label="E-mail" type="email" autoComplete="off" error={formState.errors.email?.message} {...register('email')} />
-        <SelectField label="Role" hint={roleHints[role]} error={formState.errors.role?.message} {...register('role')}>
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="off"
+          error={formState.errors.email?.message}
+          {...register('email')}
+        />
+        <SelectField
+          label="Role"
+          hint={roleHints[role]}
+          error={formState.errors.role?.message}
+          {...register('role')}
+        >
           {roles.map((r) => (
             <option key={r} value={r}>
               {roleLabels[r]}
@@ -53,7 +64,9 @@ export function InviteForm() {
         </SelectField>
       </div>
       <div>
-        <Button type="submit" isBusy={formState.isSubmitting}>Send invitation</Button>
+        <Button type="submit" isBusy={formState.isSubmitting}>
+          Send invitation
+        </Button>
       </div>
     </form>
   );

@@ -34,26 +34,42 @@ export function MembersList() {
             <li key={member.id} className="flex flex-wrap items-center justify-between gap-3 p-4">
               <div>
                 <p className="font-semibold">
-                  {member.name} {isSelf ? <span className="font-normal text-ink-muted">(you)</span> : null}
+                  {member.name}{' '}
+                  {isSelf ? <span className="font-normal text-ink-muted">(you)</span> : null}
                 </p>
                 <p className="break-all text-ink-muted">{member.email}</p>
-                <p className="text-sm text-ink-muted">Joined {formatDate(member.createdAt, company.timeZone)}</p>
+                <p className="text-sm text-ink-muted">
+                  Joined {formatDate(member.createdAt, company.timeZone)}
+                </p>
               </div>
               <div className="flex flex-wrap items-center gap-2">
-                <label className="sr-only" htmlFor={`role-${member.id}`}>Role of {member.name}</label>
+                <label className="sr-only" htmlFor={`role-${member.id}`}>
+                  Role of {member.name}
+                </label>
                 <select
                   id={`role-${member.id}`}
                   value={member.role}
                   disabled={isSelf || update.isPending}
-                  onChange={(event) => void changeRole(member, roles.find((r) => r === event.target.value) ?? member.role)}
+                  onChange={(event) =>
+                    void changeRole(
+                      member,
+                      roles.find((r) => r === event.target.value) ?? member.role,
+                    )
+                  }
                   className="min-h-11 rounded-md border border-line-strong bg-white px-2"
                 >
                   {roles.map((r) => (
-                    <option key={r} value={r}>{roleLabels[r]}</option>
+                    <option key={r} value={r}>
+                      {roleLabels[r]}
+                    </option>
                   ))}
                 </select>
                 {isSelf ? null : (
-                  <Button variant="quietDanger" onClick={() => setLeaving(member)} aria-label={`Remove ${member.name}`}>
+                  <Button
+                    variant="quietDanger"
+                    onClick={() => setLeaving(member)}
+                    aria-label={`Remove ${member.name}`}
+                  >
                     Remove
                   </Button>
                 )}
@@ -70,13 +86,17 @@ export function MembersList() {
         onCancel={() => setLeaving(null)}
         onConfirm={() => {
           if (!leaving) return;
-          void remove.mutateAsync(leaving.id).then(
-            () => toast.show(`${leaving.name} was removed.`),
-            (error: unknown) => toast.show(describeError(error).detail),
-          ).finally(() => setLeaving(null));
+          void remove
+            .mutateAsync(leaving.id)
+            .then(
+              () => toast.show(`${leaving.name} was removed.`),
+              (error: unknown) => toast.show(describeError(error).detail),
+            )
+            .finally(() => setLeaving(null));
         }}
       >
-        They will no longer be able to sign in to this company. Their account and other companies are not touched. You can invite them again later.
+        They will no longer be able to sign in to this company. Their account and other companies
+        are not touched. You can invite them again later.
       </ConfirmDialog>
     </>
   );

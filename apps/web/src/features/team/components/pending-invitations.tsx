@@ -14,7 +14,11 @@ export function PendingInvitations() {
   const toast = useToast();
 
   if (invitations.length === 0) {
-    return <p className="text-ink-muted">No invitations waiting. People you invite show here until they join.</p>;
+    return (
+      <p className="text-ink-muted">
+        No invitations waiting. People you invite show here until they join.
+      </p>
+    );
   }
   return (
     <ul className="divide-y divide-line rounded-lg border border-line bg-white">
@@ -23,7 +27,8 @@ export function PendingInvitations() {
           <div>
             <p className="break-all font-semibold">{invitation.email}</p>
             <p className="text-sm text-ink-muted">
-              {roleLabels[invitation.role]} · link works until {formatDate(invitation.expiresAt, company.timeZone)}
+              {roleLabels[invitation.role]} · link works until{' '}
+              {formatDate(invitation.expiresAt, company.timeZone)}
             </p>
           </div>
           <Button
