@@ -1,9 +1,6 @@
 // Purpose: stop the project's MariaDB instance. Usage: pnpm exec tsx scripts/db-down.ts [dev|test].
-// Safe: data stays in .data/<instance>.
-import { instances } from './lib/instances.js';
-import { startMariadb } from './lib/mariadb.js';
+// Safe: data stays in .data/<instance>; does nothing when the instance is not running.
+import { stopMariadb } from './lib/mariadb.js';
 
 const which = process.argv[2] === 'test' ? 'test' : 'dev';
-const db = await startMariadb(which, instances[which].db.port);
-db.stop();
-console.log(`MariaDB ${which} stopped`);
+console.log(stopMariadb(which) ? `MariaDB ${which} stopped` : `MariaDB ${which} was not running`);

@@ -79,14 +79,22 @@ async function waitUntilAlive(socket: string, timeoutMs: number): Promise<boolea
   return false;
 }
 
+/** Stops the instance called `name` if it is running; returns whether it was. */
+export function stopMariadb(name: string): boolean {
+  const p = paths(name);
+  if (!isAlive(p.socket)) return false;
+  spawnSync('mariadb-admin', ['--socket', p.socket, '--user=root', 'shutdown'], {
+    stdio: 'ignore',
+  });
+  return true;
+}
+
 /** Starts (or reuses) the instance called `name` on `port`. */
 export async function startMariadb(name: string, port: number): Promise<MariadbInstance> {
   ensureDebianPackages('mariadbd', ['mariadb-server', 'mariadb-client']);
   const p = paths(name);
   const stop = () => {
-    spawnSync('mariadb-admin', ['--socket', p.socket, '--user=root', 'shutdown'], {
-      stdio: 'ignore',
-    });
+    stopMariadb(name);
   };
   if (isAlive(p.socket)) {
     say('db', `reusing MariaDB "${name}" on 127.0.0.1:${port}`);
