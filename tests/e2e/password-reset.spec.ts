@@ -22,6 +22,8 @@ test('a forgotten password is replaced through the e-mailed link, then sign-in r
   await expect(page).toHaveURL(/\/sign-in$/);
 
   await page.getByRole('link', { name: 'Forgot your password?' }).click();
+  // The sign-in page has an E-mail field too and stays on screen while the next route loads.
+  await expect(page.getByRole('heading', { name: 'Forgot your password?' })).toBeVisible();
   await page.getByLabel('E-mail').fill(email);
   await page.getByRole('button', { name: 'Send me a reset link' }).click();
   await expect(page.getByRole('status')).toContainText(email);
