@@ -27,6 +27,7 @@ export const router = createBrowserRouter([
           { path: '/customers', lazy: () => import('./routes/customers') },
           { path: '/customers/new', lazy: () => import('./routes/new-customer') },
           { path: '/customers/:customerId', lazy: () => import('./routes/customer') },
+          { path: '/layout', lazy: () => import('./routes/layout-preview') },
           { path: '/settings', lazy: () => import('./routes/settings') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],

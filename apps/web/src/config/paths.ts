@@ -9,6 +9,7 @@ export const paths = {
   customers: '/customers',
   newCustomer: '/customers/new',
   customer: (id: string) => `/customers/${encodeURIComponent(id)}`,
+  layout: '/layout',
   settings: '/settings',
 } as const;
 

@@ -1,6 +1,7 @@
 import type { ComponentType } from 'react';
 import { can, type Action, type Role } from '@seamwright/shared';
 import { CustomersIcon, SettingsIcon, TodayIcon } from '../../../components/ui/icons';
+import { LayoutIcon } from '../../../components/ui/layout-icon';
 import { paths } from '../../../config/paths';
 
 export interface Section {
@@ -17,6 +18,8 @@ export interface Section {
 const sections: Section[] = [
   { to: paths.today, label: 'Today', Icon: TodayIcon, phoneRoles: ['owner', 'office', 'bookkeeper', 'crew_lead'] },
   { to: paths.customers, label: 'Customers', Icon: CustomersIcon, needs: 'customers.read', phoneRoles: ['owner', 'office', 'bookkeeper'] },
+  // Shows no prices, so every role sees it in the rail; the crew lead's phone bar stays for site work.
+  { to: paths.layout, label: 'Layout', Icon: LayoutIcon, phoneRoles: ['owner', 'office', 'bookkeeper'] },
   { to: paths.settings, label: 'Settings', Icon: SettingsIcon, phoneRoles: ['owner', 'office', 'bookkeeper'] },
 ];
 

@@ -1,0 +1,60 @@
+import { useId } from 'react';
+import { DEFAULT_WALKWAY_WIDTH_FT, formatNumber } from '@seamwright/takeoff';
+import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
+import { drawingFrame, ringsPath } from '../utils/drawing-frame';
+import { grainWords } from '../utils/plan-words';
+import { CutShapes } from './cut-shapes';
+import { ScaleAndNorth } from './scale-and-north';
+import { SeamPaths } from './seam-paths';
+import { WalkwayBand, WalkwayHatch } from './walkway-band';
+
+interface PlanDrawingProps {
+  plan: LayoutPlan;
+  /** Outer ring first, then holes (feet). */
+  rings: readonly (readonly LayoutPoint[])[];
+  walkway: readonly LayoutPoint[] | null;
+}
+
+/** One sentence a screen reader gives for the drawing; the figures beside it carry the numbers too. */
+export function planSummary(plan: LayoutPlan): string {
+  const pieces = plan.pieces.length === 1 ? '1 piece' : `${plan.pieces.length} pieces`;
+  const seams = plan.seams.count === 1 ? '1 seam' : `${plan.seams.count} seams`;
+  return (
+    `Layout plan: ${formatNumber(plan.areaSqFt, 0)} sq ft area covered by ${plan.cuts.length} cuts from ${pieces} ` +
+    `of turf (${formatNumber(plan.orderedSqFt, 0)} sq ft ordered), ${seams}, grain running ${grainWords(plan.grainAngleDeg)}.`
+  );
+}
+
+/**
+ * The plan in SVG, north up: the area outline (holes too), each cut tinted by its piece, side
+ * seams dashed, butt seams dotted, grain arrows, the walkway hatched, a scale bar and a north arrow.
+ */
+export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
+  // useId's punctuation is not safe inside url(#…) references, so keep letters and digits only.
+  const id = `plan${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
+  const frame = drawingFrame(plan, rings, walkway ?? []);
+  const area = ringsPath(rings, frame.toSvg);
+  return (
+    <svg
+      role="img"
+      aria-labelledby={`${id}-title ${id}-desc`}
+      viewBox={`0 0 ${frame.width.toFixed(3)} ${frame.height.toFixed(3)}`}
+      className="block h-auto max-h-[34rem] w-full print:max-h-[18cm]"
+      data-testid="plan-drawing"
+    >
+      <title id={`${id}-title`}>Layout plan</title>
+      <desc id={`${id}-desc`}>{planSummary(plan)}</desc>
+      <defs>
+        <clipPath id={`${id}-area`}>
+          <path d={area} clipRule="evenodd" />
+        </clipPath>
+        <WalkwayHatch id={`${id}-hatch`} unit={frame.unit} />
+      </defs>
+      <CutShapes plan={plan} frame={frame} areaClipId={`${id}-area`} />
+      {walkway ? <WalkwayBand points={walkway} widthFt={DEFAULT_WALKWAY_WIDTH_FT} frame={frame} hatchId={`${id}-hatch`} /> : null}
+      <SeamPaths seams={plan.seamLines} frame={frame} />
+      <path d={area} fill="none" fillRule="evenodd" className="stroke-ink" strokeWidth={2.5} strokeLinejoin="round" vectorEffect="non-scaling-stroke" />
+      <ScaleAndNorth frame={frame} />
+    </svg>
+  );
+}

@@ -1,0 +1,22 @@
+import type { GoodPlan } from '../utils/compute-plan';
+import { PieceLegend } from './piece-legend';
+import { PlanDrawing } from './plan-drawing';
+import { PlanFigures } from './plan-figures';
+
+/** The drawing with its key, and the figures beside it (under it on a phone). */
+export function PlanPanel({ good, isStale }: { good: GoodPlan; isStale: boolean }) {
+  const hasWalkway = good.walkway !== null;
+  return (
+    <div className={isStale ? 'opacity-40 grayscale' : undefined} data-stale={isStale || undefined}>
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_15rem]">
+        <figure className="flex min-w-0 flex-col gap-3 rounded-lg border border-line bg-white p-3 print:border-0 print:p-0">
+          <PlanDrawing plan={good.plan} rings={good.rings} walkway={good.walkway} />
+          <figcaption>
+            <PieceLegend plan={good.plan} hasWalkway={hasWalkway} />
+          </figcaption>
+        </figure>
+        <PlanFigures plan={good.plan} hasWalkway={hasWalkway} />
+      </div>
+    </div>
+  );
+}

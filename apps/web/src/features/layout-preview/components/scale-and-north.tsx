@@ -1,0 +1,39 @@
+import type { DrawingFrame } from '../utils/drawing-frame';
+import { scaleBarFeet } from '../utils/drawing-frame';
+
+/** The footer of the drawing: a scale bar in feet on the left, the north arrow on the right. */
+export function ScaleAndNorth({ frame }: { frame: DrawingFrame }) {
+  const { unit, margin, width, height, footer } = frame;
+  const feet = scaleBarFeet(frame.planWidth);
+  const baseY = height - footer * 0.35;
+  const tick = unit * 0.8;
+  const fontSize = unit * 1.3;
+  const northX = width - margin - unit * 1.5;
+  const northTop = height - footer + unit * 0.8;
+  const northBottom = baseY;
+  return (
+    <g className="fill-ink stroke-ink">
+      <path
+        d={`M${margin} ${baseY - tick}V${baseY}H${margin + feet}V${baseY - tick}M${margin + feet / 2} ${baseY}v${-tick / 2}`}
+        fill="none"
+        strokeWidth={2}
+        vectorEffect="non-scaling-stroke"
+      />
+      <text x={margin} y={baseY - tick - unit * 0.4} fontSize={fontSize} stroke="none">
+        0
+      </text>
+      <text x={margin + feet} y={baseY - tick - unit * 0.4} fontSize={fontSize} textAnchor="end" stroke="none">
+        {feet} ft
+      </text>
+      <path
+        d={`M${northX} ${northBottom}V${northTop + unit * 2.2}M${northX - unit * 0.8} ${northTop + unit * 2.2}L${northX} ${northTop + unit * 0.6}L${northX + unit * 0.8} ${northTop + unit * 2.2}Z`}
+        strokeWidth={2}
+        strokeLinejoin="round"
+        vectorEffect="non-scaling-stroke"
+      />
+      <text x={northX - unit * 1.2} y={northTop + unit * 1.6} fontSize={fontSize} textAnchor="end" stroke="none" className="font-bold">
+        N
+      </text>
+    </g>
+  );
+}

@@ -1,0 +1,57 @@
+import type { LayoutPoint, LayoutRequestInput } from '@seamwright/takeoff';
+import type { LayoutParams } from './layout-params';
+import { readAngle, readLength, readPoint } from './read-input';
+import { buildFromPoints, buildLShape, buildRectangle, type FieldErrors, type ShapeResult } from './shape-builders';
+
+/** Grain angles (degrees CCW from east, the direction the roll's length runs) for the compass choices. */
+export const grainAngles = { 'east-west': 0, 'north-south': 90 } as const;
+
+function shapeOf(params: LayoutParams): ShapeResult {
+  if (params.shape === 'rectangle') return buildRectangle(params.len, params.wid);
+  if (params.shape === 'l-shape') return buildLShape(params.len, params.wid, params.nlen, params.nwid);
+  return buildFromPoints(params.pts);
+}
+
+function trafficPathOf(params: LayoutParams, errors: FieldErrors): LayoutPoint[] | undefined {
+  if (params.from.trim() === '' && params.to.trim() === '') return undefined;
+  const from = readPoint(params.from);
+  const to = readPoint(params.to);
+  if (!from.ok) errors.from = params.from.trim() === '' ? 'Give where the path starts, or clear both ends' : from.message;
+  if (!to.ok) errors.to = params.to.trim() === '' ? 'Give where the path ends, or clear both ends' : to.message;
+  if (!from.ok || !to.ok) return undefined;
+  return [from.value, to.value];
+}
+
+/** What the typed fields make: a planner request when every field reads, and the messages of those that do not. */
+export interface BuiltRequest {
+  request: LayoutRequestInput | null;
+  errors: FieldErrors;
+}
+
+/** Turns the screen's fields into a layout request for `planLayout`. */
+export function buildLayoutRequest(params: LayoutParams): BuiltRequest {
+  const shape = shapeOf(params);
+  const errors: FieldErrors = shape.ok ? {} : { ...shape.errors };
+  const maxLength = readLength(params.max);
+  if (!maxLength.ok) errors.max = maxLength.message;
+  else if (maxLength.value < 1) errors.max = 'The longest piece must be at least 1 ft';
+  let angleDeg: number | undefined;
+  if (params.grain === 'angle') {
+    const angle = readAngle(params.angle);
+    if (angle.ok) angleDeg = angle.value;
+    else errors.angle = angle.message;
+  } else if (params.grain !== 'auto') {
+    angleDeg = grainAngles[params.grain];
+  }
+  const path = trafficPathOf(params, errors);
+  if (!shape.ok || Object.keys(errors).length > 0 || !maxLength.ok) return { request: null, errors };
+  return {
+    request: {
+      area: { outer: shape.outer, holes: shape.holes },
+      roll: { widthFt: params.roll, maxLengthFt: maxLength.value },
+      grain: angleDeg === undefined ? null : { angleDeg },
+      ...(path ? { trafficPaths: [path] } : {}),
+    },
+    errors,
+  };
+}

@@ -1,0 +1,32 @@
+import { LayoutInputError, formatNumber } from '@seamwright/takeoff';
+
+/** How a grain direction reads on site: "north–south" for 90°, "east–west" for 0°, else degrees. */
+export function grainWords(angleDeg: number): string {
+  const folded = ((angleDeg % 180) + 180) % 180; // a grain line reads the same both ways
+  if (folded < 0.05 || folded > 179.95) return 'east–west';
+  if (Math.abs(folded - 90) < 0.05) return 'north–south';
+  return `${formatNumber(folded, 1)}° from east`;
+}
+
+// The planner names fields by their request path; the screen names them as the person typed them.
+const fieldNames: Array<[RegExp, string]> = [
+  [/^area\.outer\b/, 'The outline'],
+  [/^area\.holes\[(\d+)\]/, 'Hole'],
+  [/^trafficPaths\[0\](\.points)?/, 'The walkway'],
+  [/^roll\.maxLengthFt/, 'The longest piece'],
+  [/^roll\.widthFt/, 'The roll width'],
+  [/^grain\.angleDeg/, 'The grain angle'],
+];
+
+/** A planner error as a sentence for the alert region. */
+export function plannerMessage(error: unknown): string {
+  if (!(error instanceof LayoutInputError)) return 'The planner could not lay out this shape. Check the outline and try again.';
+  for (const [pattern, name] of fieldNames) {
+    const match = pattern.exec(error.message);
+    if (match) {
+      const label = match[1] !== undefined && name === 'Hole' ? `Hole ${Number(match[1]) + 1}` : name;
+      return `${label}${error.message.slice(match[0].length)}`;
+    }
+  }
+  return error.message;
+}
