@@ -47,7 +47,7 @@ export function CutShapes({ plan, frame, areaClipId }: CutShapesProps) {
             <text
               x={labelX}
               y={labelY}
-              fontSize={Math.min(unit * 1.5, cut.acrossFt * 0.6)}
+              fontSize={Math.min(unit * 2, cut.acrossFt * 0.6)}
               textAnchor="middle"
               dominantBaseline="central"
               className="fill-ink font-bold"

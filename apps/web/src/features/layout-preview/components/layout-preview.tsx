@@ -41,9 +41,10 @@ export function LayoutPreview() {
               Showing the last plan that worked; {plannerError ? 'change the outline' : 'fix the marked fields'} to update it.
             </p>
           ) : null}
-          {good ? <PlanPanel good={good} isStale={isStale} /> : <EmptyState title="No plan yet">Enter the yard’s size and the roll to see a plan.</EmptyState>}
+          {good ? <PlanPanel good={good} isStale={isStale} /> : <EmptyState title="No plan yet">Fix the marked fields, and the plan appears here.</EmptyState>}
         </section>
-        <form aria-label="Yard and roll" className="flex min-w-0 flex-col gap-6 lg:col-start-1 lg:row-start-1 print:hidden" onSubmit={(event) => event.preventDefault()}>
+        <form aria-labelledby="yard-heading" className="flex min-w-0 flex-col gap-6 lg:col-start-1 lg:row-start-1 print:hidden" onSubmit={(event) => event.preventDefault()}>
+          <h2 id="yard-heading" className="text-xl font-bold lg:sr-only">Yard and roll</h2>
           <ShapeFields params={params} errors={fieldErrors} update={update} />
           <RollFields params={params} errors={fieldErrors} update={update} />
           <WalkwayFields params={params} errors={fieldErrors} update={update} />

@@ -39,7 +39,7 @@ export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
       role="img"
       aria-labelledby={`${id}-title ${id}-desc`}
       viewBox={`0 0 ${frame.width.toFixed(3)} ${frame.height.toFixed(3)}`}
-      className="block h-auto max-h-[34rem] w-full print:max-h-[18cm]"
+      className="block h-auto max-h-[60vh] w-full lg:max-h-[34rem] print:max-h-[18cm]"
       data-testid="plan-drawing"
     >
       <title id={`${id}-title`}>Layout plan</title>

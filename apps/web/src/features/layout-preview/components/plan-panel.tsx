@@ -7,9 +7,10 @@ import { PlanFigures } from './plan-figures';
 export function PlanPanel({ good, isStale }: { good: GoodPlan; isStale: boolean }) {
   const hasWalkway = good.walkway !== null;
   return (
-    <div className={isStale ? 'opacity-40 grayscale' : undefined} data-stale={isStale || undefined}>
+    // Only the graphics fade when stale: faded text would fail contrast, and the status line says why.
+    <div className={isStale ? '[&_svg]:opacity-40 [&_svg]:grayscale [&_dd]:text-ink-muted' : undefined} data-stale={isStale || undefined}>
       <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_15rem]">
-        <figure className="flex min-w-0 flex-col gap-3 rounded-lg border border-line bg-white p-3 print:border-0 print:p-0">
+        <figure className="flex min-w-0 flex-col self-start gap-3 rounded-lg border border-line bg-white p-3 print:border-0 print:p-0">
           <PlanDrawing plan={good.plan} rings={good.rings} walkway={good.walkway} />
           <figcaption>
             <PieceLegend plan={good.plan} hasWalkway={hasWalkway} />

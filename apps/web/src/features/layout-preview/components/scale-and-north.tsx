@@ -6,8 +6,8 @@ export function ScaleAndNorth({ frame }: { frame: DrawingFrame }) {
   const { unit, margin, width, height, footer } = frame;
   const feet = scaleBarFeet(frame.planWidth);
   const baseY = height - footer * 0.35;
-  const tick = unit * 0.8;
-  const fontSize = unit * 1.3;
+  const tick = unit;
+  const fontSize = unit * 1.9;
   const northX = width - margin - unit * 1.5;
   const northTop = height - footer + unit * 0.8;
   const northBottom = baseY;

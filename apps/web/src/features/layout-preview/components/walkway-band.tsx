@@ -23,8 +23,8 @@ export function WalkwayBand({ points, widthFt, frame, hatchId }: WalkwayBandProp
   const d = `M${points.map((point) => frame.toSvg(point).join(' ')).join('L')}`;
   return (
     <g data-walkway="">
-      <path d={d} fill="none" className="stroke-caution-50" strokeWidth={widthFt} strokeLinecap="round" strokeLinejoin="round" opacity={0.75} />
-      <path d={d} fill="none" stroke={`url(#${hatchId})`} strokeWidth={widthFt} strokeLinecap="round" strokeLinejoin="round" />
+      <path d={d} fill="none" className="stroke-caution-50" strokeWidth={widthFt} strokeLinejoin="round" opacity={0.75} />
+      <path d={d} fill="none" stroke={`url(#${hatchId})`} strokeWidth={widthFt} strokeLinejoin="round" />
     </g>
   );
 }
