@@ -35,7 +35,7 @@ export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }
           {entries.map((entry) => (
             <tr key={entry.piece} className="border-b border-line align-top break-inside-avoid">
               <th scope="row" className="py-2 pr-3 font-semibold whitespace-nowrap">
-                <span aria-hidden="true" className={cn('mr-2 inline-block h-3 w-3 rounded-sm border border-line-strong', pieceTint(entry.piece).swatch)} />
+                <span aria-hidden="true" className={cn('mr-2 inline-block h-3 w-3 rounded-sm border border-line-strong [print-color-adjust:exact]', pieceTint(entry.piece).swatch)} />
                 {entry.piece + 1}
               </th>
               <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">{formatNumber(entry.lengthFt, 2)} ft</td>

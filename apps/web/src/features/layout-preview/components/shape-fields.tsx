@@ -45,16 +45,16 @@ export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
         </>
       ) : (
         <div className="grid grid-cols-2 gap-3">
-          <LengthField label={isL ? 'Overall length (north–south)' : 'Length (north–south)'} value={params.len} error={errors.len} onValue={(len) => update({ len })} />
-          <LengthField label={isL ? 'Overall width (east–west)' : 'Width (east–west)'} value={params.wid} error={errors.wid} onValue={(wid) => update({ wid })} />
+          <LengthField label={isL ? 'Overall length N–S' : 'Length (north–south)'} value={params.len} error={errors.len} onValue={(len) => update({ len })} />
+          <LengthField label={isL ? 'Overall width E–W' : 'Width (east–west)'} value={params.wid} error={errors.wid} onValue={(wid) => update({ wid })} />
           {isL ? (
             <>
-              <LengthField label="Notch length (north–south)" value={params.nlen} error={errors.nlen} onValue={(nlen) => update({ nlen })} />
-              <LengthField label="Notch width (east–west)" value={params.nwid} error={errors.nwid} onValue={(nwid) => update({ nwid })} />
+              <LengthField label="Notch length N–S" value={params.nlen} error={errors.nlen} onValue={(nlen) => update({ nlen })} />
+              <LengthField label="Notch width E–W" value={params.nwid} error={errors.nwid} onValue={(nwid) => update({ nwid })} />
             </>
           ) : null}
           <p className="col-span-2 text-sm text-ink-muted">
-            {lengthHint}.{isL ? ' The notch comes out of the north-east corner.' : ''}
+            {lengthHint}.{isL ? ' Lengths run north–south (N–S), widths east–west (E–W); the notch comes out of the north-east corner.' : ''}
           </p>
         </div>
       )}

@@ -18,8 +18,8 @@ export function WalkwayFields({ params, errors, update }: WalkwayFieldsProps) {
         Where people walk, {DEFAULT_WALKWAY_WIDTH_FT} ft wide; seams are kept out of it when that costs no extra turf. Give both ends as x, y in feet.
       </p>
       <div className="grid grid-cols-2 gap-3">
-        <LengthField label="Starts at" placeholder="0, 10" value={params.from} error={errors.from} onValue={(from) => update({ from })} />
-        <LengthField label="Ends at" placeholder="18, 10" value={params.to} error={errors.to} onValue={(to) => update({ to })} />
+        <LengthField label="Starts at" placeholder="e.g. 0, 10" value={params.from} error={errors.from} onValue={(from) => update({ from })} />
+        <LengthField label="Ends at" placeholder="e.g. 18, 10" value={params.to} error={errors.to} onValue={(to) => update({ to })} />
       </div>
     </fieldset>
   );
