@@ -6,8 +6,14 @@ import { emailFor, rail, runStamp, signUpCompany } from './support/people';
 
 test.use({ bypassCSP: true });
 
-test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 sq ft in two pieces', async ({ page }) => {
-  await signUpCompany(page, { companyName: `Sedgefield Turf ${runStamp}`, name: 'Maren Tolley', email: emailFor('owner-layout') });
+test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 sq ft in two pieces', async ({
+  page,
+}) => {
+  await signUpCompany(page, {
+    companyName: `Sedgefield Turf ${runStamp}`,
+    name: 'Maren Tolley',
+    email: emailFor('owner-layout'),
+  });
   await rail(page).getByRole('link', { name: 'Layout' }).click();
   await expect(page).toHaveURL(/\/layout$/);
   await expect(page.getByRole('heading', { level: 1, name: 'Layout' })).toBeVisible();
@@ -22,8 +28,15 @@ test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 
   // Check value: 30 × 20 ft with a 15 ft roll, grain along the 20 ft side → two 15 × 20 ft
   // pieces, 600 sq ft, one 20 ft seam (arithmetic; TRADE.md row 1).
   const figures = page.getByRole('group', { name: 'Plan figures' });
-  await expect(figures.locator('div', { has: page.locator('dt', { hasText: 'Turf ordered' }) })).toContainText('600 sq ft');
-  await expect(figures.locator('div', { has: page.locator('dt', { hasText: /^Pieces$/ }) }).locator('dd').first()).toHaveText('2');
+  await expect(
+    figures.locator('div', { has: page.locator('dt', { hasText: 'Turf ordered' }) }),
+  ).toContainText('600 sq ft');
+  await expect(
+    figures
+      .locator('div', { has: page.locator('dt', { hasText: /^Pieces$/ }) })
+      .locator('dd')
+      .first(),
+  ).toHaveText('2');
   const drawing = page.getByRole('img', { name: /Layout plan/ });
   await expect(drawing.locator('[data-cut]')).toHaveCount(2);
   await expect(page.getByText('Piece 2 — 15 × 20 ft')).toBeVisible();
@@ -34,9 +47,14 @@ test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 
   await expect(page.getByRole('img', { name: /600 sq ft ordered/ })).toBeVisible();
   await expectAccessible(page, 'Layout with a plan');
 
-  await page.getByRole('form', { name: 'Yard and roll' }).getByLabel('Width (east–west)').fill(`20' 14"`);
+  await page
+    .getByRole('form', { name: 'Yard and roll' })
+    .getByLabel('Width (east–west)')
+    .fill(`20' 14"`);
   await expect(page.getByText(/^Inches must be less than 12 when feet are given/)).toBeVisible();
-  await expect(page.getByRole('form', { name: 'Yard and roll' }).getByLabel('Width (east–west)')).toHaveAttribute('aria-invalid', 'true');
+  await expect(
+    page.getByRole('form', { name: 'Yard and roll' }).getByLabel('Width (east–west)'),
+  ).toHaveAttribute('aria-invalid', 'true');
   await expect(page.getByText(/Showing the last plan that worked/)).toBeVisible();
   await expectAccessible(page, 'Layout with a bad length');
 });

@@ -14,7 +14,13 @@ export const paths = {
 } as const;
 
 /** Pages a signed-out visitor may open; a 401 there must not bounce back to sign-in. */
-export const publicPathPrefixes = ['/sign-in', '/sign-up', '/forgot-password', '/reset-password', '/invitations'];
+export const publicPathPrefixes = [
+  '/sign-in',
+  '/sign-up',
+  '/forgot-password',
+  '/reset-password',
+  '/invitations',
+];
 
 /** Only same-site relative paths are accepted as a return path after sign-in. */
 export function safeReturnPath(next: string | null): string {

@@ -5,7 +5,11 @@ import { LayoutPreview } from '../../features/layout-preview/components/layout-p
 import { RouteError } from './route-error';
 
 /** Typing rewrites only this page's query string; nothing needs reloading for it. */
-export function shouldRevalidate({ currentUrl, nextUrl, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+export function shouldRevalidate({
+  currentUrl,
+  nextUrl,
+  defaultShouldRevalidate,
+}: ShouldRevalidateFunctionArgs) {
   if (currentUrl.pathname === nextUrl.pathname) return false;
   return defaultShouldRevalidate;
 }
@@ -16,7 +20,11 @@ export function Component() {
       <PageHeader
         title="Layout"
         subtitle="Try a yard: how the turf is cut, what to order, and the materials it takes."
-        actions={<Button variant="secondary" onClick={() => window.print()}>Print plan and cut sheet</Button>}
+        actions={
+          <Button variant="secondary" onClick={() => window.print()}>
+            Print plan and cut sheet
+          </Button>
+        }
       />
       <LayoutPreview />
     </>

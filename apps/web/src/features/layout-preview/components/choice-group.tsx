@@ -9,7 +9,12 @@ interface ChoiceGroupProps<T extends string | number> {
 }
 
 /** A row of radio buttons drawn as large, touch-friendly segments. */
-export function ChoiceGroup<T extends string | number>({ legend, value, options, onChange }: ChoiceGroupProps<T>) {
+export function ChoiceGroup<T extends string | number>({
+  legend,
+  value,
+  options,
+  onChange,
+}: ChoiceGroupProps<T>) {
   const name = useId();
   return (
     <fieldset className="min-w-0">
@@ -20,7 +25,9 @@ export function ChoiceGroup<T extends string | number>({ legend, value, options,
             key={String(option.value)}
             className={cn(
               'flex min-h-11 cursor-pointer items-center gap-2 rounded-md border px-3 py-2',
-              option.value === value ? 'border-moss-700 bg-moss-50 font-semibold text-moss-900' : 'border-line-strong bg-white',
+              option.value === value
+                ? 'border-moss-700 bg-moss-50 font-semibold text-moss-900'
+                : 'border-line-strong bg-white',
             )}
           >
             <input

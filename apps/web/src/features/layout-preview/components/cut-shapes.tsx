@@ -30,7 +30,13 @@ export function CutShapes({ plan, frame, areaClipId }: CutShapesProps) {
           <g key={index} data-cut={index} data-piece={cut.piece + 1}>
             <polygon points={points} className={tint} opacity={0.35} />
             <polygon points={points} className={tint} clipPath={`url(#${areaClipId})`} />
-            <polygon points={points} fill="none" className="stroke-ink-muted" strokeWidth={0.75} vectorEffect="non-scaling-stroke" />
+            <polygon
+              points={points}
+              fill="none"
+              className="stroke-ink-muted"
+              strokeWidth={0.75}
+              vectorEffect="non-scaling-stroke"
+            />
           </g>
         );
       })}
@@ -42,8 +48,18 @@ export function CutShapes({ plan, frame, areaClipId }: CutShapesProps) {
         const [labelX, labelY] = frame.toSvg(lerp(start, end, 0.5));
         return (
           <g key={index}>
-            <GrainArrow at={lerp(start, end, 0.18)} angleDeg={plan.grainAngleDeg} lengthFt={arrowFt} frame={frame} />
-            <GrainArrow at={lerp(start, end, 0.82)} angleDeg={plan.grainAngleDeg} lengthFt={arrowFt} frame={frame} />
+            <GrainArrow
+              at={lerp(start, end, 0.18)}
+              angleDeg={plan.grainAngleDeg}
+              lengthFt={arrowFt}
+              frame={frame}
+            />
+            <GrainArrow
+              at={lerp(start, end, 0.82)}
+              angleDeg={plan.grainAngleDeg}
+              lengthFt={arrowFt}
+              frame={frame}
+            />
             <text
               x={labelX}
               y={labelY}

@@ -9,7 +9,14 @@ const range = (from: number, to: number) => `${formatNumber(from, 1)}–${format
 function GrainGlyph({ angleDeg }: { angleDeg: number }) {
   return (
     <svg aria-hidden="true" viewBox="-10 -10 20 20" className="h-5 w-5 shrink-0">
-      <g transform={`rotate(${-angleDeg})`} className="stroke-ink" fill="none" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round">
+      <g
+        transform={`rotate(${-angleDeg})`}
+        className="stroke-ink"
+        fill="none"
+        strokeWidth="2"
+        strokeLinecap="round"
+        strokeLinejoin="round"
+      >
         <path d="M-7 0H7M3-4L7 0L3 4" />
       </g>
     </svg>
@@ -24,22 +31,42 @@ export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }
         <caption className="sr-only">Cut sheet</caption>
         <thead>
           <tr className="border-b-2 border-line-strong text-sm text-ink-muted">
-            <th scope="col" className="py-2 pr-3">Piece</th>
-            <th scope="col" className="py-2 pr-3 text-right">Cut from the roll</th>
-            <th scope="col" className="py-2 pr-3 text-right">Width</th>
-            <th scope="col" className="py-2 pr-3">Where it goes</th>
-            <th scope="col" className="py-2">Grain</th>
+            <th scope="col" className="py-2 pr-3">
+              Piece
+            </th>
+            <th scope="col" className="py-2 pr-3 text-right">
+              Cut from the roll
+            </th>
+            <th scope="col" className="py-2 pr-3 text-right">
+              Width
+            </th>
+            <th scope="col" className="py-2 pr-3">
+              Where it goes
+            </th>
+            <th scope="col" className="py-2">
+              Grain
+            </th>
           </tr>
         </thead>
         <tbody>
           {entries.map((entry) => (
             <tr key={entry.piece} className="border-b border-line align-top break-inside-avoid">
               <th scope="row" className="py-2 pr-3 font-semibold whitespace-nowrap">
-                <span aria-hidden="true" className={cn('mr-2 inline-block h-3 w-3 rounded-sm border border-line-strong [print-color-adjust:exact]', pieceTint(entry.piece).swatch)} />
+                <span
+                  aria-hidden="true"
+                  className={cn(
+                    'mr-2 inline-block h-3 w-3 rounded-sm border border-line-strong [print-color-adjust:exact]',
+                    pieceTint(entry.piece).swatch,
+                  )}
+                />
                 {entry.piece + 1}
               </th>
-              <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">{formatNumber(entry.lengthFt, 2)} ft</td>
-              <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">{formatNumber(entry.widthFt, 2)} ft</td>
+              <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">
+                {formatNumber(entry.lengthFt, 2)} ft
+              </td>
+              <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">
+                {formatNumber(entry.widthFt, 2)} ft
+              </td>
               <td className="py-2 pr-3 tabular-nums">
                 {entry.cuts.length === 1 ? (
                   entry.cuts[0]?.goes
@@ -47,7 +74,8 @@ export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }
                   <ul className="space-y-1">
                     {entry.cuts.map((cut) => (
                       <li key={cut.cut}>
-                        {range(cut.acrossFromFt, cut.acrossToFt)} across × {range(cut.alongFromFt, cut.alongToFt)} along: {cut.goes}
+                        {range(cut.acrossFromFt, cut.acrossToFt)} across ×{' '}
+                        {range(cut.alongFromFt, cut.alongToFt)} along: {cut.goes}
                       </li>
                     ))}
                   </ul>

@@ -19,7 +19,10 @@ export function GrainArrow({ at, angleDeg, lengthFt, frame }: GrainArrowProps) {
   const head = lengthFt * 0.35;
   const barb = (turn: number): LayoutPoint => {
     const angle = radians + Math.PI + turn;
-    return frame.toSvg([at[0] + dx * half + Math.cos(angle) * head, at[1] + dy * half + Math.sin(angle) * head]);
+    return frame.toSvg([
+      at[0] + dx * half + Math.cos(angle) * head,
+      at[1] + dy * half + Math.sin(angle) * head,
+    ]);
   };
   const [left, right] = [barb(0.5), barb(-0.5)];
   return (

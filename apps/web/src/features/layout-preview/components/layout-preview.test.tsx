@@ -4,7 +4,9 @@ import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { LayoutPreview } from './layout-preview';
 
 function renderAt(url: string) {
-  const router = createMemoryRouter([{ path: '/layout', Component: LayoutPreview }], { initialEntries: [url] });
+  const router = createMemoryRouter([{ path: '/layout', Component: LayoutPreview }], {
+    initialEntries: [url],
+  });
   render(<RouterProvider router={router} />);
   return router;
 }
@@ -19,7 +21,9 @@ describe('LayoutPreview', () => {
   it('plans a 30 × 20 ft rectangle, grain east–west, as 600 sq ft in two pieces', () => {
     // Check value: 30 × 20 ft with a 15 ft roll, grain along the 20 ft side → two 15 × 20 ft
     // pieces, 600 sq ft, one 20 ft seam (arithmetic; TRADE.md row 1).
-    renderAt(`/layout?len=${encodeURIComponent(`30'`)}&wid=${encodeURIComponent(`20'`)}&grain=east-west`);
+    renderAt(
+      `/layout?len=${encodeURIComponent(`30'`)}&wid=${encodeURIComponent(`20'`)}&grain=east-west`,
+    );
     expect(within(figure('Turf ordered')).getByText('600 sq ft')).toBeTruthy();
     expect(within(figure('Turf ordered')).getByText('66.67 sq yd')).toBeTruthy();
     expect(within(figure('Pieces')).getByText('2')).toBeTruthy();
@@ -28,9 +32,17 @@ describe('LayoutPreview', () => {
     const drawing = screen.getByRole('img', { name: /Layout plan/ });
     expect(drawing.querySelectorAll('[data-cut]')).toHaveLength(2);
     expect(drawing.querySelectorAll('[data-seam="side"]')).toHaveLength(1);
-    expect(screen.getByRole('table', { name: 'Cut sheet' }).querySelectorAll('tbody tr')).toHaveLength(2);
-    expect(screen.getByText('Using standard estimating defaults; your company’s own settings come later.')).toBeTruthy();
-    expect(screen.getByRole('complementary', { name: 'Caution: Turf gets very hot in the sun' })).toBeTruthy();
+    expect(
+      screen.getByRole('table', { name: 'Cut sheet' }).querySelectorAll('tbody tr'),
+    ).toHaveLength(2);
+    expect(
+      screen.getByText(
+        'Using standard estimating defaults; your company’s own settings come later.',
+      ),
+    ).toBeTruthy();
+    expect(
+      screen.getByRole('complementary', { name: 'Caution: Turf gets very hot in the sun' }),
+    ).toBeTruthy();
   });
 
   it('shows the length parser’s message under the field as you type, and greys the last plan', async () => {
@@ -44,8 +56,14 @@ describe('LayoutPreview', () => {
 
   it('puts the planner’s refusal in the alert region and writes the typed state to the URL', async () => {
     const router = renderAt('/layout?shape=points');
-    fireEvent.change(screen.getByLabelText('Outline points (feet)'), { target: { value: '0, 0\n10, 10\n10, 0\n0, 10' } });
-    await waitFor(() => expect(screen.getAllByRole('alert').map((a) => a.textContent)).toContainEqual(expect.stringMatching(/^The outline: ring self-intersects/)));
+    fireEvent.change(screen.getByLabelText('Outline points (feet)'), {
+      target: { value: '0, 0\n10, 10\n10, 0\n0, 10' },
+    });
+    await waitFor(() =>
+      expect(screen.getAllByRole('alert').map((a) => a.textContent)).toContainEqual(
+        expect.stringMatching(/^The outline: ring self-intersects/),
+      ),
+    );
     expect(router.state.location.search).toContain('pts=0%2C+0%0A10%2C+10');
     expect(screen.getByRole('img', { name: /Layout plan/ }).closest('[data-stale]')).toBeTruthy();
   });

@@ -1,7 +1,10 @@
 import type { InputHTMLAttributes } from 'react';
 import { TextField } from '../../../components/ui/form-fields';
 
-interface LengthFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'onChange' | 'value'> {
+interface LengthFieldProps extends Omit<
+  InputHTMLAttributes<HTMLInputElement>,
+  'onChange' | 'value'
+> {
   label: string;
   value: string;
   error: string | undefined;

@@ -13,11 +13,15 @@ const tagWords: Record<string, string> = {
 
 /** Total perimeter, and its feet by what each edge meets (edge tags come with the area editor). */
 export function PerimeterFigure({ plan }: { plan: LayoutPlan }) {
-  const byTag = Object.entries(plan.perimeterByTagFt).filter(([, feet]) => feet !== undefined && feet > 0);
+  const byTag = Object.entries(plan.perimeterByTagFt).filter(
+    ([, feet]) => feet !== undefined && feet > 0,
+  );
   return (
     <Figure
       term="Perimeter"
-      note={byTag.map(([tag, feet]) => `${formatNumber(feet ?? 0, 1)} ft ${tagWords[tag] ?? tag}`).join(' · ')}
+      note={byTag
+        .map(([tag, feet]) => `${formatNumber(feet ?? 0, 1)} ft ${tagWords[tag] ?? tag}`)
+        .join(' · ')}
     >
       {formatNumber(plan.perimeterFt, 1)} ft
     </Figure>

@@ -51,9 +51,24 @@ export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
         <WalkwayHatch id={`${id}-hatch`} unit={frame.unit} />
       </defs>
       <CutShapes plan={plan} frame={frame} areaClipId={`${id}-area`} />
-      {walkway ? <WalkwayBand points={walkway} widthFt={DEFAULT_WALKWAY_WIDTH_FT} frame={frame} hatchId={`${id}-hatch`} /> : null}
+      {walkway ? (
+        <WalkwayBand
+          points={walkway}
+          widthFt={DEFAULT_WALKWAY_WIDTH_FT}
+          frame={frame}
+          hatchId={`${id}-hatch`}
+        />
+      ) : null}
       <SeamPaths seams={plan.seamLines} frame={frame} />
-      <path d={area} fill="none" fillRule="evenodd" className="stroke-ink" strokeWidth={2.5} strokeLinejoin="round" vectorEffect="non-scaling-stroke" />
+      <path
+        d={area}
+        fill="none"
+        fillRule="evenodd"
+        className="stroke-ink"
+        strokeWidth={2.5}
+        strokeLinejoin="round"
+        vectorEffect="non-scaling-stroke"
+      />
       <ScaleAndNorth frame={frame} />
     </svg>
   );

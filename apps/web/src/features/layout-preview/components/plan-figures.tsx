@@ -44,7 +44,7 @@ export function PlanFigures({ plan, hasWalkway }: { plan: LayoutPlan; hasWalkway
         {hasWalkway ? <WalkwayFigure plan={plan} /> : null}
         <Figure
           isWide
-        term="Compared with simple strips"
+          term="Compared with simple strips"
           note={
             across && plan.grainSource === 'given'
               ? `Turned to run ${grainWords(across.grainAngleDeg)}, it would buy ${formatArea(across.orderedSqFt)} with ${across.seamCount} ${across.seamCount === 1 ? 'seam' : 'seams'}.`

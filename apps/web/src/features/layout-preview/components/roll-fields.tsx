@@ -1,6 +1,13 @@
 import { SelectField } from '../../../components/ui/form-fields';
 import type { FieldErrors } from '../utils/shape-builders';
-import { grainChoices, rollWidthsFt, usages, type GrainChoice, type LayoutParams, type Usage } from '../utils/layout-params';
+import {
+  grainChoices,
+  rollWidthsFt,
+  usages,
+  type GrainChoice,
+  type LayoutParams,
+  type Usage,
+} from '../utils/layout-params';
 import { ChoiceGroup } from './choice-group';
 import { LengthField } from './length-field';
 
@@ -34,7 +41,13 @@ export function RollFields({ params, errors, update }: RollFieldsProps) {
         options={rollWidthsFt.map((width) => ({ value: width, label: `${width} ft` }))}
         onChange={(roll) => update({ roll })}
       />
-      <LengthField label="Longest piece off the roll" hint="Feet; longer runs are joined with butt seams" value={params.max} error={errors.max} onValue={(max) => update({ max })} />
+      <LengthField
+        label="Longest piece off the roll"
+        hint="Feet; longer runs are joined with butt seams"
+        value={params.max}
+        error={errors.max}
+        onValue={(max) => update({ max })}
+      />
       <ChoiceGroup
         legend="Grain"
         value={params.grain}
@@ -51,7 +64,13 @@ export function RollFields({ params, errors, update }: RollFieldsProps) {
           onValue={(angle) => update({ angle })}
         />
       ) : null}
-      <SelectField label="Used as" value={params.use} onChange={(event) => update({ use: usages.find((u) => u === event.target.value) ?? 'landscape' })}>
+      <SelectField
+        label="Used as"
+        value={params.use}
+        onChange={(event) =>
+          update({ use: usages.find((u) => u === event.target.value) ?? 'landscape' })
+        }
+      >
         {usages.map((usage) => (
           <option key={usage} value={usage}>
             {usageLabels[usage]}

@@ -22,7 +22,13 @@ export function ScaleAndNorth({ frame }: { frame: DrawingFrame }) {
       <text x={margin} y={baseY - tick - unit * 0.4} fontSize={fontSize} stroke="none">
         0
       </text>
-      <text x={margin + feet} y={baseY - tick - unit * 0.4} fontSize={fontSize} textAnchor="end" stroke="none">
+      <text
+        x={margin + feet}
+        y={baseY - tick - unit * 0.4}
+        fontSize={fontSize}
+        textAnchor="end"
+        stroke="none"
+      >
         {feet} ft
       </text>
       <path
@@ -31,7 +37,14 @@ export function ScaleAndNorth({ frame }: { frame: DrawingFrame }) {
         strokeLinejoin="round"
         vectorEffect="non-scaling-stroke"
       />
-      <text x={northX - unit * 1.2} y={northTop + unit * 1.6} fontSize={fontSize} textAnchor="end" stroke="none" className="font-bold">
+      <text
+        x={northX - unit * 1.2}
+        y={northTop + unit * 1.6}
+        fontSize={fontSize}
+        textAnchor="end"
+        stroke="none"
+        className="font-bold"
+      >
         N
       </text>
     </g>

@@ -26,7 +26,12 @@ export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
   const isL = params.shape === 'l-shape';
   return (
     <div className="flex flex-col gap-4">
-      <ChoiceGroup legend="Shape" value={params.shape} options={shapeOptions} onChange={(shape) => update({ shape })} />
+      <ChoiceGroup
+        legend="Shape"
+        value={params.shape}
+        options={shapeOptions}
+        onChange={(shape) => update({ shape })}
+      />
       {params.shape === 'points' ? (
         <>
           <TextAreaField
@@ -45,16 +50,39 @@ export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
         </>
       ) : (
         <div className="grid grid-cols-2 gap-3">
-          <LengthField label={isL ? 'Overall length N–S' : 'Length (north–south)'} value={params.len} error={errors.len} onValue={(len) => update({ len })} />
-          <LengthField label={isL ? 'Overall width E–W' : 'Width (east–west)'} value={params.wid} error={errors.wid} onValue={(wid) => update({ wid })} />
+          <LengthField
+            label={isL ? 'Overall length N–S' : 'Length (north–south)'}
+            value={params.len}
+            error={errors.len}
+            onValue={(len) => update({ len })}
+          />
+          <LengthField
+            label={isL ? 'Overall width E–W' : 'Width (east–west)'}
+            value={params.wid}
+            error={errors.wid}
+            onValue={(wid) => update({ wid })}
+          />
           {isL ? (
             <>
-              <LengthField label="Notch length N–S" value={params.nlen} error={errors.nlen} onValue={(nlen) => update({ nlen })} />
-              <LengthField label="Notch width E–W" value={params.nwid} error={errors.nwid} onValue={(nwid) => update({ nwid })} />
+              <LengthField
+                label="Notch length N–S"
+                value={params.nlen}
+                error={errors.nlen}
+                onValue={(nlen) => update({ nlen })}
+              />
+              <LengthField
+                label="Notch width E–W"
+                value={params.nwid}
+                error={errors.nwid}
+                onValue={(nwid) => update({ nwid })}
+              />
             </>
           ) : null}
           <p className="col-span-2 text-sm text-ink-muted">
-            {lengthHint}.{isL ? ' Lengths run north–south (N–S), widths east–west (E–W); the notch comes out of the north-east corner.' : ''}
+            {lengthHint}.
+            {isL
+              ? ' Lengths run north–south (N–S), widths east–west (E–W); the notch comes out of the north-east corner.'
+              : ''}
           </p>
         </div>
       )}

@@ -12,8 +12,12 @@ export function TakeoffTable({ lines }: { lines: readonly TakeoffLine[] }) {
         <caption className="sr-only">Material takeoff</caption>
         <thead>
           <tr className="border-b-2 border-line-strong text-sm text-ink-muted">
-            <th scope="col" className="py-2 pr-3">Line and its rule</th>
-            <th scope="col" className="py-2 text-right">Quantity</th>
+            <th scope="col" className="py-2 pr-3">
+              Line and its rule
+            </th>
+            <th scope="col" className="py-2 text-right">
+              Quantity
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -22,7 +26,9 @@ export function TakeoffTable({ lines }: { lines: readonly TakeoffLine[] }) {
               <th scope="row" className="py-2 pr-3 font-normal">
                 <span className="font-semibold">{line.label}</span>
                 <span className="block text-sm text-ink-muted tabular-nums">{line.rule}</span>
-                {line.rounding && !line.rounding.startsWith('none') ? <span className="block text-sm text-ink-muted">Rounding: {line.rounding}</span> : null}
+                {line.rounding && !line.rounding.startsWith('none') ? (
+                  <span className="block text-sm text-ink-muted">Rounding: {line.rounding}</span>
+                ) : null}
                 {line.warnings.map((warning) => (
                   <span key={warning} className="mt-1 block text-sm font-semibold text-caution-800">
                     Check: {warning}

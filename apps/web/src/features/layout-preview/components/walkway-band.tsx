@@ -12,8 +12,21 @@ interface WalkwayBandProps {
 export function WalkwayHatch({ id, unit }: { id: string; unit: number }) {
   const size = unit * 0.8;
   return (
-    <pattern id={id} patternUnits="userSpaceOnUse" width={size} height={size} patternTransform="rotate(45)">
-      <line x1={0} y1={0} x2={0} y2={size} className="stroke-caution-800" strokeWidth={size * 0.3} />
+    <pattern
+      id={id}
+      patternUnits="userSpaceOnUse"
+      width={size}
+      height={size}
+      patternTransform="rotate(45)"
+    >
+      <line
+        x1={0}
+        y1={0}
+        x2={0}
+        y2={size}
+        className="stroke-caution-800"
+        strokeWidth={size * 0.3}
+      />
     </pattern>
   );
 }
@@ -23,8 +36,21 @@ export function WalkwayBand({ points, widthFt, frame, hatchId }: WalkwayBandProp
   const d = `M${points.map((point) => frame.toSvg(point).join(' ')).join('L')}`;
   return (
     <g data-walkway="">
-      <path d={d} fill="none" className="stroke-caution-50" strokeWidth={widthFt} strokeLinejoin="round" opacity={0.75} />
-      <path d={d} fill="none" stroke={`url(#${hatchId})`} strokeWidth={widthFt} strokeLinejoin="round" />
+      <path
+        d={d}
+        fill="none"
+        className="stroke-caution-50"
+        strokeWidth={widthFt}
+        strokeLinejoin="round"
+        opacity={0.75}
+      />
+      <path
+        d={d}
+        fill="none"
+        stroke={`url(#${hatchId})`}
+        strokeWidth={widthFt}
+        strokeLinejoin="round"
+      />
     </g>
   );
 }

@@ -16,18 +16,26 @@ export const PLAN_DEBOUNCE_MS = 150;
 export function useLayoutState() {
   const [searchParams, setSearchParams] = useSearchParams();
   const [params, setParams] = useState<LayoutParams>(() => parseLayoutParams(searchParams));
-  const [planState, setPlanState] = useState<PlanState>(() => computePlanState(params, emptyPlanState));
+  const [planState, setPlanState] = useState<PlanState>(() =>
+    computePlanState(params, emptyPlanState),
+  );
   const fieldErrors = useMemo(() => buildLayoutRequest(params).errors, [params]);
 
   useEffect(() => {
     const timer = window.setTimeout(() => {
-      setPlanState((previous) => (previous.good?.params === params ? previous : computePlanState(params, previous)));
+      setPlanState((previous) =>
+        previous.good?.params === params ? previous : computePlanState(params, previous),
+      );
       const next = toLayoutSearchParams(params);
-      if (next.toString() !== new URLSearchParams(window.location.search).toString()) setSearchParams(next, { replace: true });
+      if (next.toString() !== new URLSearchParams(window.location.search).toString())
+        setSearchParams(next, { replace: true });
     }, PLAN_DEBOUNCE_MS);
     return () => window.clearTimeout(timer);
   }, [params, setSearchParams]);
 
-  const update = useCallback((change: Partial<LayoutParams>) => setParams((current) => ({ ...current, ...change })), []);
+  const update = useCallback(
+    (change: Partial<LayoutParams>) => setParams((current) => ({ ...current, ...change })),
+    [],
+  );
   return { params, update, fieldErrors, planState };
 }

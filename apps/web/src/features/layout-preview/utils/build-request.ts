@@ -1,14 +1,21 @@
 import type { LayoutPoint, LayoutRequestInput } from '@seamwright/takeoff';
 import type { LayoutParams } from './layout-params';
 import { readAngle, readLength, readPoint } from './read-input';
-import { buildFromPoints, buildLShape, buildRectangle, type FieldErrors, type ShapeResult } from './shape-builders';
+import {
+  buildFromPoints,
+  buildLShape,
+  buildRectangle,
+  type FieldErrors,
+  type ShapeResult,
+} from './shape-builders';
 
 /** Grain angles (degrees CCW from east, the direction the roll's length runs) for the compass choices. */
 export const grainAngles = { 'east-west': 0, 'north-south': 90 } as const;
 
 function shapeOf(params: LayoutParams): ShapeResult {
   if (params.shape === 'rectangle') return buildRectangle(params.len, params.wid);
-  if (params.shape === 'l-shape') return buildLShape(params.len, params.wid, params.nlen, params.nwid);
+  if (params.shape === 'l-shape')
+    return buildLShape(params.len, params.wid, params.nlen, params.nwid);
   return buildFromPoints(params.pts);
 }
 
@@ -16,8 +23,12 @@ function trafficPathOf(params: LayoutParams, errors: FieldErrors): LayoutPoint[]
   if (params.from.trim() === '' && params.to.trim() === '') return undefined;
   const from = readPoint(params.from);
   const to = readPoint(params.to);
-  if (!from.ok) errors.from = params.from.trim() === '' ? 'Give where the path starts, or clear both ends' : from.message;
-  if (!to.ok) errors.to = params.to.trim() === '' ? 'Give where the path ends, or clear both ends' : to.message;
+  if (!from.ok)
+    errors.from =
+      params.from.trim() === '' ? 'Give where the path starts, or clear both ends' : from.message;
+  if (!to.ok)
+    errors.to =
+      params.to.trim() === '' ? 'Give where the path ends, or clear both ends' : to.message;
   if (!from.ok || !to.ok) return undefined;
   return [from.value, to.value];
 }
@@ -44,7 +55,8 @@ export function buildLayoutRequest(params: LayoutParams): BuiltRequest {
     angleDeg = grainAngles[params.grain];
   }
   const path = trafficPathOf(params, errors);
-  if (!shape.ok || Object.keys(errors).length > 0 || !maxLength.ok) return { request: null, errors };
+  if (!shape.ok || Object.keys(errors).length > 0 || !maxLength.ok)
+    return { request: null, errors };
   return {
     request: {
       area: { outer: shape.outer, holes: shape.holes },

@@ -45,7 +45,11 @@ export function computePlanState(params: LayoutParams, previous: PlanState): Pla
     const rings = [request.area.outer, ...(request.area.holes ?? [])].map((ring) => [...ring]);
     const walkway = request.trafficPaths?.[0];
     const walkwayPoints = walkway ? [...('points' in walkway ? walkway.points : walkway)] : null;
-    return { good: { plan, takeoff, params, rings, walkway: walkwayPoints }, plannerError: null, isFieldInvalid: false };
+    return {
+      good: { plan, takeoff, params, rings, walkway: walkwayPoints },
+      plannerError: null,
+      isFieldInvalid: false,
+    };
   } catch (error) {
     return { good: previous.good, plannerError: plannerMessage(error), isFieldInvalid: false };
   }

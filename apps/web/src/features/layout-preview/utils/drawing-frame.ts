@@ -16,7 +16,11 @@ export interface DrawingFrame {
 }
 
 /** A frame around every point the drawing shows: the area, the cuts (which may run past it) and any walkway. */
-export function drawingFrame(plan: LayoutPlan, rings: readonly (readonly LayoutPoint[])[], extra: readonly LayoutPoint[]): DrawingFrame {
+export function drawingFrame(
+  plan: LayoutPlan,
+  rings: readonly (readonly LayoutPoint[])[],
+  extra: readonly LayoutPoint[],
+): DrawingFrame {
   const points = [...rings.flat(), ...plan.cuts.flatMap((cut) => cut.corners), ...extra];
   const xs = points.map(([x]) => x);
   const ys = points.map(([, y]) => y);
@@ -42,9 +46,21 @@ export function drawingFrame(plan: LayoutPlan, rings: readonly (readonly LayoutP
 }
 
 /** An SVG path through the rings (closed), for outlines and the even-odd clip of the area. */
-export function ringsPath(rings: readonly (readonly LayoutPoint[])[], toSvg: DrawingFrame['toSvg']): string {
+export function ringsPath(
+  rings: readonly (readonly LayoutPoint[])[],
+  toSvg: DrawingFrame['toSvg'],
+): string {
   return rings
-    .map((ring) => `M${ring.map((point) => toSvg(point).map((v) => v.toFixed(3)).join(' ')).join('L')}Z`)
+    .map(
+      (ring) =>
+        `M${ring
+          .map((point) =>
+            toSvg(point)
+              .map((v) => v.toFixed(3))
+              .join(' '),
+          )
+          .join('L')}Z`,
+    )
     .join('');
 }
 

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { layoutParamDefaults, parseLayoutParams, toLayoutSearchParams, type LayoutParams } from './layout-params';
+import {
+  layoutParamDefaults,
+  parseLayoutParams,
+  toLayoutSearchParams,
+  type LayoutParams,
+} from './layout-params';
 
 const defaults = parseLayoutParams(new URLSearchParams());
 
@@ -11,8 +16,25 @@ describe('layout screen URL params', () => {
 
   it.each<LayoutParams>([
     { ...defaults, len: `30'`, wid: `20' 6"`, roll: 12, grain: 'east-west', use: 'pet' },
-    { ...defaults, shape: 'l-shape', len: '40 ft', wid: '30', nlen: `15' 0"`, nwid: '20.5', max: '75', grain: 'angle', angle: '37.5' },
-    { ...defaults, shape: 'points', pts: '0, 0\n10, 0\n10, 8\nhole\n2, 2\n3, 2\n3, 3', from: '0, 4', to: '10, 4', use: 'putting' },
+    {
+      ...defaults,
+      shape: 'l-shape',
+      len: '40 ft',
+      wid: '30',
+      nlen: `15' 0"`,
+      nwid: '20.5',
+      max: '75',
+      grain: 'angle',
+      angle: '37.5',
+    },
+    {
+      ...defaults,
+      shape: 'points',
+      pts: '0, 0\n10, 0\n10, 8\nhole\n2, 2\n3, 2\n3, 3',
+      from: '0, 4',
+      to: '10, 4',
+      use: 'putting',
+    },
   ])('survives a round trip through the URL: %o', (params) => {
     const url = `/layout?${toLayoutSearchParams(params).toString()}`;
     expect(parseLayoutParams(new URL(url, 'http://x').searchParams)).toEqual(params);
@@ -24,14 +46,24 @@ describe('layout screen URL params', () => {
   });
 
   it('leaves out fields the chosen shape and grain do not use', () => {
-    const search = toLayoutSearchParams({ ...defaults, shape: 'points', len: '99', angle: '12', pts: '0,0\n1,0\n1,1' });
+    const search = toLayoutSearchParams({
+      ...defaults,
+      shape: 'points',
+      len: '99',
+      angle: '12',
+      pts: '0,0\n1,0\n1,1',
+    });
     expect(search.has('len')).toBe(false);
     expect(search.has('angle')).toBe(false);
     expect(search.get('pts')).toBe('0,0\n1,0\n1,1');
   });
 
   it('falls back field by field on hand-edited values instead of failing', () => {
-    const params = parseLayoutParams(new URLSearchParams(`shape=hexagon&roll=13&grain=diagonal&use=pool&len=${'9'.repeat(200)}&wid=25`));
+    const params = parseLayoutParams(
+      new URLSearchParams(
+        `shape=hexagon&roll=13&grain=diagonal&use=pool&len=${'9'.repeat(200)}&wid=25`,
+      ),
+    );
     expect(params).toEqual({ ...defaults, wid: '25' });
   });
 });

@@ -71,7 +71,9 @@ export function toLayoutSearchParams(params: LayoutParams): URLSearchParams {
   };
   const shapeFields = new Set(['len', 'wid', 'nlen', 'nwid', 'pts']);
   const search = new URLSearchParams();
-  for (const [key, value] of Object.entries(params) as Array<[keyof LayoutParams, string | number]>) {
+  for (const [key, value] of Object.entries(params) as Array<
+    [keyof LayoutParams, string | number]
+  >) {
     if (shapeFields.has(key) && !usedByShape[params.shape].has(key)) continue;
     if (key === 'angle' && params.grain !== 'angle') continue;
     if (value === layoutParamDefaults[key]) continue;

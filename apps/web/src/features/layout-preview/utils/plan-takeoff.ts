@@ -1,4 +1,9 @@
-import { cautionContextForTakeoff, cautionsFor, computeTakeoff, defaultTakeoffSettings } from '@seamwright/takeoff';
+import {
+  cautionContextForTakeoff,
+  cautionsFor,
+  computeTakeoff,
+  defaultTakeoffSettings,
+} from '@seamwright/takeoff';
 import type { Caution, LayoutPlan, TakeoffInput, TakeoffLine } from '@seamwright/takeoff';
 import type { Usage } from './layout-params';
 
@@ -10,7 +15,10 @@ export function takeoffInputFromPlan(plan: LayoutPlan, usage: Usage): TakeoffInp
     perimeterFt: plan.perimeterFt,
     perimeterByTagFt: plan.perimeterByTagFt,
     seams: { sideFt: plan.seams.sideFt, buttFt: plan.seams.buttFt, count: plan.seams.count },
-    turf: { orderedSqFt: plan.orderedSqFt, pieces: plan.pieces.map(({ widthFt, lengthFt }) => ({ widthFt, lengthFt })) },
+    turf: {
+      orderedSqFt: plan.orderedSqFt,
+      pieces: plan.pieces.map(({ widthFt, lengthFt }) => ({ widthFt, lengthFt })),
+    },
   };
 }
 

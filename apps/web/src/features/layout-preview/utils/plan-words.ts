@@ -20,11 +20,13 @@ const fieldNames: Array<[RegExp, string]> = [
 
 /** A planner error as a sentence for the alert region. */
 export function plannerMessage(error: unknown): string {
-  if (!(error instanceof LayoutInputError)) return 'The planner could not lay out this shape. Check the outline and try again.';
+  if (!(error instanceof LayoutInputError))
+    return 'The planner could not lay out this shape. Check the outline and try again.';
   for (const [pattern, name] of fieldNames) {
     const match = pattern.exec(error.message);
     if (match) {
-      const label = match[1] !== undefined && name === 'Hole' ? `Hole ${Number(match[1]) + 1}` : name;
+      const label =
+        match[1] !== undefined && name === 'Hole' ? `Hole ${Number(match[1]) + 1}` : name;
       return `${label}${error.message.slice(match[0].length)}`;
     }
   }

@@ -19,7 +19,9 @@ function readCoordinate(text: string): Read<number> {
   const trimmed = text.trim();
   if (plainNumber.test(trimmed)) return { ok: true, value: Number(trimmed.replace('\u2212', '-')) };
   const result = parseLength(trimmed, { system: 'imperial' });
-  return result.ok ? { ok: true, value: result.feet } : { ok: false, message: result.error.message };
+  return result.ok
+    ? { ok: true, value: result.feet }
+    : { ok: false, message: result.error.message };
 }
 
 /** `x, y` (or `x y`) in feet → a point. */
@@ -37,8 +39,10 @@ export function readPoint(text: string): Read<LayoutPoint> {
 export function readAngle(text: string): Read<number> {
   const trimmed = text.trim().replace(/°$/, '').trim();
   if (trimmed === '') return { ok: false, message: 'Enter an angle in degrees, such as 45' };
-  if (!plainNumber.test(trimmed)) return { ok: false, message: `"${text}" is not an angle; type degrees, such as 45` };
+  if (!plainNumber.test(trimmed))
+    return { ok: false, message: `"${text}" is not an angle; type degrees, such as 45` };
   const value = Number(trimmed.replace('\u2212', '-'));
-  if (value < -360 || value > 360) return { ok: false, message: 'Give an angle between −360° and 360°' };
+  if (value < -360 || value > 360)
+    return { ok: false, message: 'Give an angle between −360° and 360°' };
   return { ok: true, value };
 }

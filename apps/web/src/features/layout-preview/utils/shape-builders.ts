@@ -5,9 +5,13 @@ import { readLength, readPoint, type Read } from './read-input';
 export type FieldErrors = Partial<Record<string, string>>;
 
 /** An outline in feet (x east, y north), or why the typed fields do not make one. */
-export type ShapeResult = { ok: true; outer: LayoutPoint[]; holes: LayoutPoint[][] } | { ok: false; errors: FieldErrors };
+export type ShapeResult =
+  { ok: true; outer: LayoutPoint[]; holes: LayoutPoint[][] } | { ok: false; errors: FieldErrors };
 
-function collect(fields: Record<string, Read<number>>): { values: Record<string, number>; errors: FieldErrors } {
+function collect(fields: Record<string, Read<number>>): {
+  values: Record<string, number>;
+  errors: FieldErrors;
+} {
   const values: Record<string, number> = {};
   const errors: FieldErrors = {};
   for (const [name, read] of Object.entries(fields)) {
@@ -25,14 +29,28 @@ export function buildRectangle(lengthText: string, widthText: string): ShapeResu
   const { values, errors } = collect({ len: readLength(lengthText), wid: readLength(widthText) });
   const { len, wid } = values;
   if (len === undefined || wid === undefined) return { ok: false, errors };
-  return { ok: true, outer: [[0, 0], [wid, 0], [wid, len], [0, len]], holes: [] };
+  return {
+    ok: true,
+    outer: [
+      [0, 0],
+      [wid, 0],
+      [wid, len],
+      [0, len],
+    ],
+    holes: [],
+  };
 }
 
 /**
  * An L: the overall rectangle (length north–south, width east–west) with a notch cut out of
  * its north-east corner. The notch must leave turf on both arms.
  */
-export function buildLShape(lengthText: string, widthText: string, notchLengthText: string, notchWidthText: string): ShapeResult {
+export function buildLShape(
+  lengthText: string,
+  widthText: string,
+  notchLengthText: string,
+  notchWidthText: string,
+): ShapeResult {
   const { values, errors } = collect({
     len: readLength(lengthText),
     wid: readLength(widthText),
@@ -40,13 +58,28 @@ export function buildLShape(lengthText: string, widthText: string, notchLengthTe
     nwid: readLength(notchWidthText),
   });
   const { len, wid, nlen, nwid } = values;
-  if (len !== undefined && nlen !== undefined && nlen >= len) errors.nlen = 'The notch must be shorter than the overall length';
-  if (wid !== undefined && nwid !== undefined && nwid >= wid) errors.nwid = 'The notch must be narrower than the overall width';
-  if (len === undefined || wid === undefined || nlen === undefined || nwid === undefined || Object.keys(errors).length > 0)
+  if (len !== undefined && nlen !== undefined && nlen >= len)
+    errors.nlen = 'The notch must be shorter than the overall length';
+  if (wid !== undefined && nwid !== undefined && nwid >= wid)
+    errors.nwid = 'The notch must be narrower than the overall width';
+  if (
+    len === undefined ||
+    wid === undefined ||
+    nlen === undefined ||
+    nwid === undefined ||
+    Object.keys(errors).length > 0
+  )
     return { ok: false, errors };
   return {
     ok: true,
-    outer: [[0, 0], [wid, 0], [wid, len - nlen], [wid - nwid, len - nlen], [wid - nwid, len], [0, len]],
+    outer: [
+      [0, 0],
+      [wid, 0],
+      [wid, len - nlen],
+      [wid - nwid, len - nlen],
+      [wid - nwid, len],
+      [0, len],
+    ],
     holes: [],
   };
 }
@@ -71,9 +104,15 @@ export function buildFromPoints(text: string): ShapeResult {
   }
   const [outer = [], ...holes] = rings;
   if (outer.length < 3)
-    return { ok: false, errors: { pts: `An outline needs at least 3 points; there ${outer.length === 1 ? 'is 1' : `are ${outer.length}`}` } };
+    return {
+      ok: false,
+      errors: {
+        pts: `An outline needs at least 3 points; there ${outer.length === 1 ? 'is 1' : `are ${outer.length}`}`,
+      },
+    };
   const shortHole = holes.findIndex((hole) => hole.length < 3);
-  if (shortHole >= 0) return { ok: false, errors: { pts: `Hole ${shortHole + 1} needs at least 3 points` } };
+  if (shortHole >= 0)
+    return { ok: false, errors: { pts: `Hole ${shortHole + 1} needs at least 3 points` } };
   return { ok: true, outer, holes };
 }
 

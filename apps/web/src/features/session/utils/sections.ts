@@ -16,11 +16,32 @@ export interface Section {
 
 /** Only sections that exist are listed; later work adds Jobs, Calendar, Inventory, Invoices, Reports. */
 const sections: Section[] = [
-  { to: paths.today, label: 'Today', Icon: TodayIcon, phoneRoles: ['owner', 'office', 'bookkeeper', 'crew_lead'] },
-  { to: paths.customers, label: 'Customers', Icon: CustomersIcon, needs: 'customers.read', phoneRoles: ['owner', 'office', 'bookkeeper'] },
+  {
+    to: paths.today,
+    label: 'Today',
+    Icon: TodayIcon,
+    phoneRoles: ['owner', 'office', 'bookkeeper', 'crew_lead'],
+  },
+  {
+    to: paths.customers,
+    label: 'Customers',
+    Icon: CustomersIcon,
+    needs: 'customers.read',
+    phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
   // Shows no prices, so every role sees it in the rail; the crew lead's phone bar stays for site work.
-  { to: paths.layout, label: 'Layout', Icon: LayoutIcon, phoneRoles: ['owner', 'office', 'bookkeeper'] },
-  { to: paths.settings, label: 'Settings', Icon: SettingsIcon, phoneRoles: ['owner', 'office', 'bookkeeper'] },
+  {
+    to: paths.layout,
+    label: 'Layout',
+    Icon: LayoutIcon,
+    phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
+  {
+    to: paths.settings,
+    label: 'Settings',
+    Icon: SettingsIcon,
+    phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
 ];
 
 export function sectionsFor(role: Role): Section[] {
