@@ -11,6 +11,8 @@ export interface Caution {
     | 'pets-perimeter';
   title: string;
   body: string;
+  /** The closing pointer to local codes and licensed practice; every caution carries it. */
+  deferral: typeof DEFER_TO_LOCAL_PRACTICE;
   /** Where the facts come from, so a reader can check them. */
   reference: string;
 }
@@ -19,15 +21,12 @@ export interface Caution {
 export const DEFER_TO_LOCAL_PRACTICE =
   'Follow local codes and licensing rules, the manufacturer’s written instructions and licensed professional practice; this note is not legal or engineering advice.';
 
-const withDeferral = (text: string): string => `${text} ${DEFER_TO_LOCAL_PRACTICE}`;
-
 /** Digging for the base: locate request, waiting period, hand-dig zone. */
 export const utilityLocateCaution: Caution = {
   key: 'utility-locate',
   title: 'Call 811 before digging',
-  body: withDeferral(
-    'Removing sod and digging for the base can hit buried power, gas, water and data lines. Place a locate request through 811 and do not dig until your state’s legal waiting period has passed and every operator has answered; keep the ticket current if the job slips. Within the tolerance zone around each mark (18 to 30 in either side, by state) expose lines with hand tools only, and stop and call the operator after any contact.',
-  ),
+  body: 'Removing sod and digging for the base can hit buried power, gas, water and data lines. Place a locate request through 811 and do not dig until your state’s legal waiting period has passed and every operator has answered; keep the ticket current if the job slips. Within the tolerance zone around each mark (18 to 30 in either side, by state) expose lines with hand tools only, and stop and call the operator after any contact.',
+  deferral: DEFER_TO_LOCAL_PRACTICE,
   reference: 'State one-call (811) law; Common Ground Alliance Best Practice 5.19 (tolerance zone)',
 };
 
@@ -35,9 +34,8 @@ export const utilityLocateCaution: Caution = {
 export const silicaDustCaution: Caution = {
   key: 'silica-dust',
   title: 'Silica dust when spreading sand infill',
-  body: withDeferral(
-    'Kiln-dried sand infill is handled dry and can put respirable crystalline silica in the air. Pour from a low height with a drop spreader, work upwind of the spreader, and read the product’s safety data sheet. Do not dry-sweep or dry-brush where it adds to exposure, and do not blow off clothes or surfaces with compressed air. Wear a respirator unless exposure is known to stay below the action level.',
-  ),
+  body: 'Kiln-dried sand infill is handled dry and can put respirable crystalline silica in the air. Pour from a low height with a drop spreader, work upwind of the spreader, and read the product’s safety data sheet. Do not dry-sweep or dry-brush where it adds to exposure, and do not blow off clothes or surfaces with compressed air. Wear a respirator unless exposure is known to stay below the action level.',
+  deferral: DEFER_TO_LOCAL_PRACTICE,
   reference:
     'OSHA 29 CFR 1926.1153 (respirable crystalline silica in construction), including (f) housekeeping',
 };
@@ -47,9 +45,8 @@ export function heavyRollCaution(rollWeightLb: number, liftLimitLb: number): Cau
   return {
     key: 'heavy-rolls',
     title: 'Heavy rolls: lift with a machine or a team',
-    body: withDeferral(
-      `The heaviest roll on this job weighs about ${formatNumber(rollWeightLb, 0)} lb, above the ${liftLimitLb} lb recommended limit for one person lifting with two hands in ideal conditions. Move it with a roll cart, or a carpet pole on a skid-steer or forklift, and plan team lifts for anything carried by hand.`,
-    ),
+    body: `The heaviest roll on this job weighs about ${formatNumber(rollWeightLb, 0)} lb, above the ${liftLimitLb} lb recommended limit for one person lifting with two hands in ideal conditions. Move it with a roll cart, or a carpet pole on a skid-steer or forklift, and plan team lifts for anything carried by hand.`,
+    deferral: DEFER_TO_LOCAL_PRACTICE,
     reference: 'NIOSH recommended weight limit (51 lb) for two-hand lifting, as cited by OSHA',
   };
 }
@@ -58,9 +55,8 @@ export function heavyRollCaution(rollWeightLb: number, liftLimitLb: number): Cau
 export const turfHeatCaution: Caution = {
   key: 'turf-heat',
   title: 'Turf gets very hot in the sun',
-  body: withDeferral(
-    'Field measurements have found synthetic turf in full sun far hotter than natural grass, at times above 150 °F at the surface. Crews kneel on it all day: use knee pads and gloves, plan heavy work for cooler hours, and tell the owner that watering cools the surface only briefly.',
-  ),
+  body: 'Field measurements have found synthetic turf in full sun far hotter than natural grass, at times above 150 °F at the surface. Crews kneel on it all day: use knee pads and gloves, plan heavy work for cooler hours, and tell the owner that watering cools the surface only briefly.',
+  deferral: DEFER_TO_LOCAL_PRACTICE,
   reference: 'Published university field studies of synthetic-turf surface temperature',
 };
 
@@ -68,9 +64,8 @@ export const turfHeatCaution: Caution = {
 export const playgroundFallHeightCaution: Caution = {
   key: 'playground-fall-height',
   title: 'Play areas: the shock pad gives the fall protection',
-  body: withDeferral(
-    'Under play equipment the shock pad, not the infill, absorbs a fall. Use a tested system whose critical height is at least the fall height of the equipment, and build it exactly as tested — changing the base, pad, turf or infill voids the rating. Keep the surfacing across the whole use zone around each piece of equipment.',
-  ),
+  body: 'Under play equipment the shock pad, not the infill, absorbs a fall. Use a tested system whose critical height is at least the fall height of the equipment, and build it exactly as tested — changing the base, pad, turf or infill voids the rating. Keep the surfacing across the whole use zone around each piece of equipment.',
+  deferral: DEFER_TO_LOCAL_PRACTICE,
   reference:
     'ASTM F1292 (impact attenuation, critical height); CPSC Public Playground Safety Handbook (Pub. 325)',
 };
@@ -79,8 +74,7 @@ export const playgroundFallHeightCaution: Caution = {
 export const petsPerimeterCaution: Caution = {
   key: 'pets-perimeter',
   title: 'Pets: secure the whole perimeter',
-  body: withDeferral(
-    'Dogs dig at and pull loose edges. Fasten the turf along every edge (screwed to a board or nailed closely), keep the backing permeable, avoid crumb rubber infill, and give the owner rinsing and cleaning instructions.',
-  ),
+  body: 'Dogs dig at and pull loose edges. Fasten the turf along every edge (screwed to a board or nailed closely), keep the backing permeable, avoid crumb rubber infill, and give the owner rinsing and cleaning instructions.',
+  deferral: DEFER_TO_LOCAL_PRACTICE,
   reference: 'Common practice in pet turf installation (no published standard)',
 };

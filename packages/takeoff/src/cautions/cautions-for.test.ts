@@ -85,7 +85,8 @@ describe('cautionsFor', () => {
       'turf-heat',
     ]);
     for (const caution of all) {
-      expect(caution.body.endsWith(DEFER_TO_LOCAL_PRACTICE)).toBe(true);
+      expect(caution.deferral).toBe(DEFER_TO_LOCAL_PRACTICE);
+      expect(caution.body).not.toContain(DEFER_TO_LOCAL_PRACTICE);
       expect(caution.reference.length).toBeGreaterThan(0);
     }
   });

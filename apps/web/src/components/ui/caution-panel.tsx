@@ -1,8 +1,13 @@
 import type { ReactNode } from 'react';
 
+const defaultDeferral =
+  'This is a reminder, not advice for your site. Follow your local codes and the practice of licensed professionals where you work.';
+
 interface CautionPanelProps {
   title: string;
   children: ReactNode;
+  /** The closing pointer to local codes and licensed practice, when the caution brings its own. */
+  deferral?: string;
 }
 
 /**
@@ -10,7 +15,7 @@ interface CautionPanelProps {
  * with the same pointer to local codes and licensed practice, so no caution reads as the
  * final word.
  */
-export function CautionPanel({ title, children }: CautionPanelProps) {
+export function CautionPanel({ title, children, deferral = defaultDeferral }: CautionPanelProps) {
   return (
     <aside
       aria-label={`Caution: ${title}`}
@@ -31,10 +36,7 @@ export function CautionPanel({ title, children }: CautionPanelProps) {
         {title}
       </h2>
       <div className="mt-2 space-y-2">{children}</div>
-      <p className="mt-3 text-sm text-ink-muted">
-        This is a reminder, not advice for your site. Follow your local codes and the practice of
-        licensed professionals where you work.
-      </p>
+      <p className="mt-3 text-sm text-ink-muted">{deferral}</p>
     </aside>
   );
 }

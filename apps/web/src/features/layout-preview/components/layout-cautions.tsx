@@ -6,7 +6,7 @@ export function LayoutCautions({ cautions }: { cautions: readonly Caution[] }) {
   return (
     <div className="grid gap-4 md:grid-cols-2">
       {cautions.map((caution) => (
-        <CautionPanel key={caution.key} title={caution.title}>
+        <CautionPanel key={caution.key} title={caution.title} deferral={caution.deferral}>
           <p>{caution.body}</p>
           <p className="text-sm text-ink-muted">Source: {caution.reference}</p>
         </CautionPanel>

@@ -1,4 +1,4 @@
-import { formatNumber } from '@seamwright/takeoff';
+import { formatQuantity } from '@seamwright/takeoff';
 import type { TakeoffLine } from '@seamwright/takeoff';
 
 /**
@@ -36,7 +36,7 @@ export function TakeoffTable({ lines }: { lines: readonly TakeoffLine[] }) {
                 ))}
               </th>
               <td className="py-2 text-right font-semibold tabular-nums whitespace-nowrap">
-                {formatNumber(line.quantity, 2)} {line.unit}
+                {formatQuantity(line.quantity, line.unit)}
               </td>
             </tr>
           ))}
