@@ -35,6 +35,8 @@ export function createHttpLogger(logger: Logger) {
         method: req.method,
         url: req.url,
       }),
+      // Status only: response headers repeat on every line and carry nothing to search for.
+      res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
     },
   });
 }
