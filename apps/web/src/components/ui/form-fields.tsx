@@ -55,6 +55,23 @@ interface CommonProps {
   wrapperClassName?: string;
 }
 
+/** The id, class and ARIA wiring every control shares, so the three field kinds stay alike. */
+function useControlProps(
+  id: string | undefined,
+  hint: unknown,
+  error: string | undefined,
+  className?: string,
+) {
+  const fallbackId = useId();
+  const fieldId = id ?? fallbackId;
+  return {
+    id: fieldId,
+    className: cn(controlClasses, className),
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': describedBy(fieldId, hint, error),
+  } as const;
+}
+
 export function TextField({
   label,
   hint,
@@ -65,18 +82,16 @@ export function TextField({
   ref,
   ...rest
 }: CommonProps & InputHTMLAttributes<HTMLInputElement> & { ref?: Ref<HTMLInputElement> }) {
-  const fallbackId = useId();
-  const fieldId = id ?? fallbackId;
+  const control = useControlProps(id, hint, error, className);
   return (
-    <FieldShell id={fieldId} label={label} hint={hint} error={error} className={wrapperClassName}>
-      <input
-        ref={ref}
-        id={fieldId}
-        className={cn(controlClasses, className)}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(fieldId, hint, error)}
-        {...rest}
-      />
+    <FieldShell
+      id={control.id}
+      label={label}
+      hint={hint}
+      error={error}
+      className={wrapperClassName}
+    >
+      <input ref={ref} {...control} {...rest} />
     </FieldShell>
   );
 }
@@ -91,19 +106,16 @@ export function TextAreaField({
   ref,
   ...rest
 }: CommonProps & TextareaHTMLAttributes<HTMLTextAreaElement> & { ref?: Ref<HTMLTextAreaElement> }) {
-  const fallbackId = useId();
-  const fieldId = id ?? fallbackId;
+  const control = useControlProps(id, hint, error, className);
   return (
-    <FieldShell id={fieldId} label={label} hint={hint} error={error} className={wrapperClassName}>
-      <textarea
-        ref={ref}
-        id={fieldId}
-        rows={3}
-        className={cn(controlClasses, className)}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(fieldId, hint, error)}
-        {...rest}
-      />
+    <FieldShell
+      id={control.id}
+      label={label}
+      hint={hint}
+      error={error}
+      className={wrapperClassName}
+    >
+      <textarea ref={ref} rows={3} {...control} {...rest} />
     </FieldShell>
   );
 }
@@ -119,18 +131,16 @@ export function SelectField({
   children,
   ...rest
 }: CommonProps & SelectHTMLAttributes<HTMLSelectElement> & { ref?: Ref<HTMLSelectElement> }) {
-  const fallbackId = useId();
-  const fieldId = id ?? fallbackId;
+  const control = useControlProps(id, hint, error, className);
   return (
-    <FieldShell id={fieldId} label={label} hint={hint} error={error} className={wrapperClassName}>
-      <select
-        ref={ref}
-        id={fieldId}
-        className={cn(controlClasses, className)}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(fieldId, hint, error)}
-        {...rest}
-      >
+    <FieldShell
+      id={control.id}
+      label={label}
+      hint={hint}
+      error={error}
+      className={wrapperClassName}
+    >
+      <select ref={ref} {...control} {...rest}>
         {children}
       </select>
     </FieldShell>
