@@ -6,7 +6,6 @@ export default defineConfig({
   test: {
     projects: [
       {
-        extends: false,
         test: {
           name: 'unit',
           include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts'],
@@ -15,7 +14,6 @@ export default defineConfig({
       },
       './apps/web/vitest.config.ts',
       {
-        extends: false,
         test: {
           name: 'api',
           include: ['tests/api/**/*.test.ts'],

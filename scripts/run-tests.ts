@@ -63,11 +63,8 @@ function vitest(project: string[], report: string): boolean {
   return code === 0;
 }
 
-await step(
-  'typecheck',
-  () => runStep('pnpm', ['-r', '--workspace-concurrency=2', 'run', 'typecheck']) === 0,
-);
-await step('lint', () => runStep('pnpm', ['exec', 'eslint', '.', '--max-warnings=0']) === 0);
+await step('typecheck', () => runStep('pnpm', ['run', 'typecheck']) === 0);
+await step('lint and format', () => runStep('pnpm', ['run', 'lint']) === 0);
 await step('unit tests', () => vitest(['unit', 'web'], 'unit.json'));
 await step('API tests (MariaDB)', () => vitest(['api'], 'api.json'));
 await step('end-to-end tests (Chromium)', async () => {
