@@ -79,6 +79,9 @@ describe('customers', () => {
       'name',
       'phone',
     ]);
+    // The one-line detail names every field at fault, for clients that show only the detail.
+    expect(res.body.detail).toMatch(/name: Name is required/);
+    expect(res.body.detail).toMatch(/email: /);
     expect(
       await selectRows(sequelize, 'SELECT id FROM customers WHERE company_id = ?', [
         owner.me.company.id,

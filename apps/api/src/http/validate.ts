@@ -10,7 +10,12 @@ export function parseInput<S extends z.ZodType>(schema: S, value: unknown): z.ou
     path: issue.path.map(String).join('.'),
     message: issue.message,
   }));
-  throw new AppError('VALIDATION_FAILED', 'Some fields need attention', { errors });
+  throw new AppError('VALIDATION_FAILED', describeFieldErrors(errors), { errors });
+}
+
+/** One line naming every field at fault, e.g. `name: Name is required; email: Enter a valid…`. */
+export function describeFieldErrors(errors: readonly { path: string; message: string }[]): string {
+  return errors.map((e) => (e.path ? `${e.path}: ${e.message}` : e.message)).join('; ');
 }
 
 const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;

@@ -1,5 +1,4 @@
 import type { FieldPath, FieldValues, UseFormSetError } from 'react-hook-form';
-import { ErrorCode } from '@seamwright/shared';
 import { ApiError } from './api-error';
 
 /**
@@ -22,7 +21,6 @@ export function applyServerErrors<T extends FieldValues>(
     }
   }
   if (error.fieldErrors.length > 0 && !unplaced) return null;
-  if (error.code === ErrorCode.ValidationFailed && error.fieldErrors.length > 0)
-    return error.detail;
+  // The detail names every field at fault, including any this form does not show.
   return error.detail;
 }

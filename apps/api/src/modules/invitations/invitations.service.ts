@@ -156,7 +156,7 @@ export function createInvitationsService({ env, sequelize, mailer, logger }: Ser
         }
       } else {
         if (!input.name) {
-          throw new AppError('VALIDATION_FAILED', 'Some fields need attention', {
+          throw new AppError('VALIDATION_FAILED', 'name: Your name is required', {
             errors: [{ path: 'name', message: 'Your name is required' }],
           });
         }
