@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { selectRows } from '@seamwright/api';
+import { createApp, loadEnv, selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import { newClient } from '../../fixtures/client.js';
 import { signUpCompany, testPassword, uniqueEmail } from '../../fixtures/factories.js';
@@ -189,6 +189,29 @@ describe('sign-in, me and sign-out', () => {
     await client
       .post('/api/auth/login', { email: uniqueEmail('other'), password: 'wrong-password' })
       .expect(401);
+  });
+
+  it('counts failed sign-ins in the database, so a second API process sees the same limit', async () => {
+    const { app, sequelize } = testApp();
+    const secondProcess = createApp({ env: loadEnv(), sequelize });
+    const owner = await signUpCompany(app);
+    const first = await newClient(app);
+    for (let i = 0; i < 5; i += 1)
+      await first
+        .post('/api/auth/login', { email: owner.email, password: 'wrong-password' })
+        .expect(401);
+    const second = await newClient(secondProcess);
+    const limited = await second
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(429);
+    expect(limited.body.code).toBe('RATE_LIMITED');
+    const rows = await selectRows<{ key_hash: string; hits: number }>(
+      sequelize,
+      'SELECT key_hash, hits FROM rate_limit_hits WHERE hits >= 5',
+    );
+    // Keys are hashes: no e-mail address is stored in the table.
+    expect(rows.length).toBeGreaterThan(0);
+    expect(rows.every((row) => /^[0-9a-f]{64}$/.test(row.key_hash))).toBe(true);
   });
 
   it('answers 400 for a malformed JSON body', async () => {

@@ -1,6 +1,7 @@
 // The ordered list of migrations. Listed explicitly (no glob) so they load the same way under
 // tsx, vitest and any bundler; add new files at the end.
 import { initialSchema } from './0001-initial-schema.js';
+import { rateLimitHits } from './0002-rate-limit-hits.js';
 import type { Migration } from './types.js';
 
-export const migrations: Migration[] = [initialSchema];
+export const migrations: Migration[] = [initialSchema, rateLimitHits];

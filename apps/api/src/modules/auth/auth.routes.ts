@@ -10,7 +10,7 @@ export function registerAuthRoutes(
   deps: ServiceDeps,
   issueCsrfToken: (req: Request, res: Response) => string,
 ): void {
-  const limiter = createLoginLimiter(deps.env.login);
+  const limiter = createLoginLimiter(deps.env.login, deps.sequelize);
   const handlers = createAuthHandlers({
     env: deps.env,
     auth: createAuthService(deps),

@@ -1,11 +1,12 @@
 // Slows password guessing: after `maxFailures` failed sign-ins for one IP + e-mail within the
 // window, answer 429 with Retry-After. Successful sign-ins do not count and clear the counter.
-// The counter lives in process memory: with several API processes each keeps its own, which
-// still bounds guessing per process; a shared store can replace it without touching callers.
+// The counters live in MariaDB, so any number of API processes share them.
 import type { Request } from 'express';
+import type { Sequelize } from 'sequelize';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Env } from '../../config/env.js';
 import { AppError } from '../../errors.js';
+import { DatabaseRateLimitStore } from './rate-limit.repository.js';
 
 function loginKey(req: Request): string {
   const body: unknown = req.body;
@@ -16,7 +17,7 @@ function loginKey(req: Request): string {
   return `${ipKeyGenerator(req.ip ?? 'unknown')}|${email}`;
 }
 
-export function createLoginLimiter(login: Env['login']) {
+export function createLoginLimiter(login: Env['login'], sequelize: Sequelize) {
   const limiter = rateLimit({
     windowMs: login.windowMs,
     limit: login.maxFailures,
@@ -24,6 +25,7 @@ export function createLoginLimiter(login: Env['login']) {
     legacyHeaders: false,
     skipSuccessfulRequests: true,
     keyGenerator: loginKey,
+    store: new DatabaseRateLimitStore(sequelize),
     handler: (_req, _res, next) => {
       next(new AppError('RATE_LIMITED', 'Too many failed sign-ins; wait a while and try again'));
     },
