@@ -28,7 +28,8 @@ const e2eDatabase = 'seamwright_e2e';
 const reportDir = join(projectRoot, '.tmp', 'reports');
 rmSync(reportDir, { recursive: true, force: true });
 
-ensureDebianPackages('chromium', ['chromium']);
+// A system font too: pages use the shipped web fonts, but Chromium wants a fallback to start.
+ensureDebianPackages('chromium', ['chromium', 'fonts-liberation']);
 const db = await startMariadb('test', settings.db.port);
 ensureDatabase(db, settings.db);
 
