@@ -1,4 +1,5 @@
-import type { FieldPath, FieldValues, UseFormSetError } from 'react-hook-form';
+import { useState } from 'react';
+import type { FieldPath, FieldValues, UseFormHandleSubmit, UseFormSetError } from 'react-hook-form';
 import { ApiError } from './api-error';
 
 /**
@@ -23,4 +24,28 @@ export function applyServerErrors<T extends FieldValues>(
   if (error.fieldErrors.length > 0 && !unplaced) return null;
   // The detail names every field at fault, including any this form does not show.
   return error.detail;
+}
+
+/**
+ * The submit handler every form shares: clears the last error, runs `action` with the parsed
+ * values, and on failure puts the server's messages beside the fields (see applyServerErrors).
+ */
+export function useServerSubmit<TFieldValues extends FieldValues, TTransformed>(
+  form: {
+    handleSubmit: UseFormHandleSubmit<TFieldValues, TTransformed>;
+    setError: UseFormSetError<TFieldValues>;
+  },
+  fields: readonly FieldPath<TFieldValues>[],
+  action: (values: TTransformed) => Promise<unknown>,
+) {
+  const [formError, setFormError] = useState<string | null>(null);
+  const submit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      await action(values);
+    } catch (error) {
+      setFormError(applyServerErrors(error, form.setError, fields));
+    }
+  });
+  return { submit, formError };
 }

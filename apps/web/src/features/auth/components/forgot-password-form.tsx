@@ -5,11 +5,10 @@ import { passwordResetRequestSchema } from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-fields';
 import { FormAlert, FormNotice } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 import { useRequestPasswordReset } from '../api/password-reset';
 
 export function ForgotPasswordForm() {
-  const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const request = useRequestPasswordReset();
   const { register, handleSubmit, setError, formState } = useForm({
@@ -18,15 +17,14 @@ export function ForgotPasswordForm() {
     defaultValues: { email: '' },
   });
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    try {
+  const { submit: onSubmit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    ['email'],
+    async (values) => {
       await request.mutateAsync(values);
       setSentTo(values.email);
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['email']));
-    }
-  });
+    },
+  );
 
   if (sentTo) {
     return (

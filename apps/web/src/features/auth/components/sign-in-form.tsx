@@ -1,15 +1,13 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { loginInputSchema } from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 import { useSignIn } from '../api/sign-in';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
-  const [formError, setFormError] = useState<string | null>(null);
   const signIn = useSignIn();
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(loginInputSchema),
@@ -18,15 +16,14 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   });
   const { errors } = formState;
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    try {
+  const { submit: onSubmit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    ['email', 'password'],
+    async (values) => {
       await signIn.mutateAsync(values);
       onSignedIn();
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['email', 'password']));
-    }
-  });
+    },
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">

@@ -1,15 +1,13 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { signupInputSchema } from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 import { useSignUp } from '../api/sign-up';
 
 export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
-  const [formError, setFormError] = useState<string | null>(null);
   const signUp = useSignUp();
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(signupInputSchema),
@@ -18,17 +16,14 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   });
   const { errors } = formState;
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    try {
+  const { submit: onSubmit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    ['companyName', 'name', 'email', 'password'],
+    async (values) => {
       await signUp.mutateAsync(values);
       onSignedUp();
-    } catch (error) {
-      setFormError(
-        applyServerErrors(error, setError, ['companyName', 'name', 'email', 'password']),
-      );
-    }
-  });
+    },
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">

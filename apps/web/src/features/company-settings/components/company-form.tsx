@@ -6,7 +6,7 @@ import { optionalText, requiredText, timeZoneSchema, type CompanyView } from '@s
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/form-fields';
 import { FormAlert, FormNotice } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 import { useUpdateCompany } from '../api/update-company';
 
 // The shared update schema is all-optional (PATCH); this form always sends every field.
@@ -31,7 +31,6 @@ export function CompanyForm({
   company: CompanyView;
   onSaved: () => Promise<void> | void;
 }) {
-  const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const update = useUpdateCompany(onSaved);
   const zones = useMemo(() => timeZones(company.timeZone), [company.timeZone]);
@@ -47,16 +46,15 @@ export function CompanyForm({
   });
   const { errors } = formState;
 
-  const submit = handleSubmit(async (values) => {
-    setFormError(null);
-    setSaved(false);
-    try {
+  const { submit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    fields,
+    async (values) => {
+      setSaved(false);
       await update.mutateAsync(values);
       setSaved(true);
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, fields));
-    }
-  });
+    },
+  );
 
   return (
     <form

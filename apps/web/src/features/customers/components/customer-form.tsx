@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import {
@@ -9,7 +8,7 @@ import {
 import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 
 const fields = ['name', 'email', 'phone', 'billingAddress', 'notes'] as const;
 
@@ -25,7 +24,6 @@ interface CustomerFormProps {
  * the server still says no, its messages land beside the fields and what was typed stays.
  */
 export function CustomerForm({ customer, submitLabel, onSubmit, onCancel }: CustomerFormProps) {
-  const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(createCustomerInputSchema),
     mode: 'onChange',
@@ -39,14 +37,13 @@ export function CustomerForm({ customer, submitLabel, onSubmit, onCancel }: Cust
   });
   const { errors } = formState;
 
-  const submit = handleSubmit(async (values) => {
-    setFormError(null);
-    try {
+  const { submit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    fields,
+    async (values) => {
       await onSubmit(values);
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, fields));
-    }
-  });
+    },
+  );
 
   return (
     <form

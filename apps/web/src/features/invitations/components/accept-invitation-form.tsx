@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
@@ -11,7 +10,7 @@ import {
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 import { useAcceptInvitation } from '../api/accept-invitation';
 
 // A new user must give a name; someone with an account only proves their password.
@@ -28,7 +27,6 @@ interface Props {
 }
 
 export function AcceptInvitationForm({ token, preview, onAccepted }: Props) {
-  const [formError, setFormError] = useState<string | null>(null);
   const accept = useAcceptInvitation(token);
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(preview.hasAccount ? existingUserSchema : newUserSchema),
@@ -37,19 +35,18 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: Props) {
   });
   const { errors } = formState;
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    try {
+  const { submit: onSubmit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    ['name', 'password'],
+    async (values) => {
       await accept.mutateAsync(
         preview.hasAccount
           ? { password: values.password }
           : { name: values.name, password: values.password },
       );
       onAccepted();
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['name', 'password']));
-    }
-  });
+    },
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">

@@ -1,11 +1,10 @@
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createSiteInputSchema, type CreateSiteData, type SiteView } from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { FormAlert } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 
 const fields = [
   'label',
@@ -32,7 +31,6 @@ interface SiteFormProps {
 }
 
 export function SiteForm({ site, submitLabel, onSubmit, onCancel }: SiteFormProps) {
-  const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm({
     resolver: zodResolver(createSiteInputSchema),
     mode: 'onChange',
@@ -51,14 +49,13 @@ export function SiteForm({ site, submitLabel, onSubmit, onCancel }: SiteFormProp
   });
   const { errors } = formState;
 
-  const submit = handleSubmit(async (values) => {
-    setFormError(null);
-    try {
+  const { submit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    fields,
+    async (values) => {
       await onSubmit(values);
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, fields));
-    }
-  });
+    },
+  );
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label={submitLabel}>

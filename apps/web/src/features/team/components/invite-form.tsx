@@ -5,7 +5,7 @@ import { createInvitationInputSchema, roleLabels, roles } from '@seamwright/shar
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/form-fields';
 import { FormAlert, FormNotice } from '../../../components/ui/form-alert';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerSubmit } from '../../../lib/form-errors';
 import { useCreateInvitation } from '../api/create-invitation';
 
 export const roleHints: Record<(typeof roles)[number], string> = {
@@ -16,7 +16,6 @@ export const roleHints: Record<(typeof roles)[number], string> = {
 };
 
 export function InviteForm() {
-  const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const invite = useCreateInvitation();
   const { register, handleSubmit, setError, formState, reset, control } = useForm({
@@ -26,17 +25,16 @@ export function InviteForm() {
   });
   const role = useWatch({ control, name: 'role' });
 
-  const submit = handleSubmit(async (values) => {
-    setFormError(null);
-    setSentTo(null);
-    try {
+  const { submit, formError } = useServerSubmit(
+    { handleSubmit, setError },
+    ['email', 'role'],
+    async (values) => {
+      setSentTo(null);
       await invite.mutateAsync(values);
       setSentTo(values.email);
       reset({ email: '', role: values.role });
-    } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['email', 'role']));
-    }
-  });
+    },
+  );
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Invite someone">
