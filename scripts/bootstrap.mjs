@@ -62,4 +62,9 @@ if (run('pnpm', ['install', '--reporter=append-only', ...frozen]) !== 0) {
 }
 
 const script = mode === 'start' ? 'scripts/start-all.ts' : 'scripts/run-tests.ts';
-process.exit(run('pnpm', ['exec', 'tsx', script, ...process.argv.slice(3)]));
+// Ctrl-C reaches every process in the terminal's group. The script stops what it started in
+// its own handler, so this process waits for it instead of dying first, and the script runs
+// under node itself (tsx as a loader) with no wrapper process that could cut its clean-up short.
+process.on('SIGINT', () => {});
+process.on('SIGTERM', () => {});
+process.exit(run(process.execPath, ['--import', 'tsx', script, ...process.argv.slice(3)]));
