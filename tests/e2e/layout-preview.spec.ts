@@ -47,6 +47,24 @@ test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 
   await expect(page.getByRole('img', { name: /600 sq ft ordered/ })).toBeVisible();
   await expectAccessible(page, 'Layout with a plan');
 
+  // Tag the north edge as a planting bed: the perimeter names it and the takeoff adds edging.
+  const perimeter = page
+    .getByRole('group', { name: 'Plan figures' })
+    .locator('div', { has: page.locator('dt', { hasText: /^Perimeter$/ }) });
+  await expect(perimeter).toContainText('100 ft not tagged yet');
+  const edges = page.getByRole('group', { name: 'What does each edge meet?' });
+  await expect(edges.getByLabel('North edge')).toHaveValue('unknown');
+  await edges.getByLabel('North edge').selectOption({ label: 'Planting bed' });
+  // Check value: 30 ft N–S × 20 ft E–W, so the north side is 20 ft and the other three
+  // 30 + 20 + 30 = 80 ft (arithmetic).
+  await expect(perimeter).toContainText('20 ft against beds');
+  await expect(perimeter).toContainText('80 ft not tagged yet');
+  await expect(
+    page.getByRole('table', { name: 'Material takeoff' }).getByText('Edging / bender board'),
+  ).toBeVisible();
+  await expect(page).toHaveURL(/redges=bed%2Cunknown%2Cunknown%2Cunknown/);
+  await expectAccessible(page, 'Layout with a bed edge');
+
   await page
     .getByRole('form', { name: 'Yard and roll' })
     .getByLabel('Width (east–west)')

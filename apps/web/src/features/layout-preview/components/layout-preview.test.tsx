@@ -67,4 +67,25 @@ describe('LayoutPreview', () => {
     expect(router.state.location.search).toContain('pts=0%2C+0%0A10%2C+10');
     expect(screen.getByRole('img', { name: /Layout plan/ }).closest('[data-stale]')).toBeTruthy();
   });
+
+  it('names bed feet in the perimeter and adds edging once the north edge meets a planting bed', async () => {
+    const router = renderAt(
+      `/layout?len=${encodeURIComponent(`20'`)}&wid=${encodeURIComponent(`30'`)}`,
+    );
+    expect(within(figure('Perimeter')).getByText('100 ft not tagged yet')).toBeTruthy();
+    const north = screen.getByRole('combobox', { name: 'North edge' });
+    expect((north as HTMLSelectElement).value).toBe('unknown');
+    for (const side of ['East edge', 'South edge', 'West edge'])
+      expect(screen.getByRole('combobox', { name: side })).toBeTruthy();
+    fireEvent.change(north, { target: { value: 'bed' } });
+    // Check value: the north side is the 30 ft east–west width; 20 + 30 + 20 = 70 ft left (arithmetic).
+    await waitFor(() =>
+      expect(
+        within(figure('Perimeter')).getByText('30 ft against beds · 70 ft not tagged yet'),
+      ).toBeTruthy(),
+    );
+    const takeoff = screen.getByRole('table', { name: 'Material takeoff' });
+    expect(within(takeoff).getByText('Edging / bender board')).toBeTruthy();
+    expect(router.state.location.search).toContain('redges=bed%2Cunknown%2Cunknown%2Cunknown');
+  });
 });

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { useLayoutState } from '../hooks/use-layout-state';
 import { CutSheetTable } from './cut-sheet-table';
+import { EdgeFields } from './edge-fields';
 import { LayoutCautions } from './layout-cautions';
 import { PlanPanel } from './plan-panel';
 import { RollFields } from './roll-fields';
@@ -79,6 +80,7 @@ export function LayoutPreview() {
             Yard and roll
           </h2>
           <ShapeFields params={params} errors={fieldErrors} update={update} />
+          <EdgeFields params={params} update={update} />
           <RollFields params={params} errors={fieldErrors} update={update} />
           <WalkwayFields params={params} errors={fieldErrors} update={update} />
         </form>

@@ -1,8 +1,8 @@
 import { formatNumber } from '@seamwright/takeoff';
-import type { LayoutPlan } from '@seamwright/takeoff';
+import type { EdgeTag, LayoutPlan } from '@seamwright/takeoff';
 import { Figure } from './figure';
 
-const tagWords: Record<string, string> = {
+const tagWords: Record<EdgeTag | 'unknown', string> = {
   hard: 'against hard surfaces',
   bed: 'against beds',
   lawn: 'against lawn',
@@ -11,17 +11,20 @@ const tagWords: Record<string, string> = {
   unknown: 'not tagged yet',
 };
 
-/** Total perimeter, and its feet by what each edge meets (edge tags come with the area editor). */
+/** Total perimeter, and its feet by what each edge meets (chosen under “What does each edge meet?”). */
 export function PerimeterFigure({ plan }: { plan: LayoutPlan }) {
-  const byTag = Object.entries(plan.perimeterByTagFt).filter(
-    ([, feet]) => feet !== undefined && feet > 0,
-  );
+  // In tagWords' order, so tagged feet come first and the untagged rest last.
+  const byTag = Object.entries(tagWords)
+    .map(([tag, words]) => ({
+      words,
+      // Object.entries types keys as string; tagWords' keys are exactly the tags.
+      feet: plan.perimeterByTagFt[tag as EdgeTag | 'unknown'] ?? 0,
+    }))
+    .filter(({ feet }) => feet > 0);
   return (
     <Figure
       term="Perimeter"
-      note={byTag
-        .map(([tag, feet]) => `${formatNumber(feet ?? 0, 1)} ft ${tagWords[tag] ?? tag}`)
-        .join(' · ')}
+      note={byTag.map(({ words, feet }) => `${formatNumber(feet, 1)} ft ${words}`).join(' · ')}
     >
       {formatNumber(plan.perimeterFt, 1)} ft
     </Figure>

@@ -46,6 +46,64 @@ describe('building the planner request from the screen', () => {
     expect(halfDone.errors.to).toBe('Give where the path ends, or clear both ends');
   });
 
+  it('tags only the north edge of a 30 ft (east–west) × 20 ft rectangle as bed: 30 ft bed, 70 ft unknown', () => {
+    // Check value: the north side runs east–west, so it is the 30 ft width; the other three
+    // sides are 20 + 30 + 20 = 70 ft (arithmetic).
+    const { request } = buildLayoutRequest(
+      params(`len=20'&wid=30'&redges=bed,unknown,unknown,unknown`),
+    );
+    // The rectangle's ring runs S, E, N, W (shape-builders), so the north edge is edge 2.
+    expect(request?.edges).toEqual([null, null, 'bed', null]);
+    const plan = planLayout(request ?? { area: { outer: [] }, roll: { widthFt: 15 } });
+    expect(plan.perimeterByTagFt).toEqual({ bed: 30, unknown: 70 });
+  });
+
+  it('puts each of the L’s named edges at its place in the ring', () => {
+    // The sample L: 30 ft N–S × 40 ft E–W, notch 15 × 20 out of the north-east corner. North
+    // edge (west part) 20 ft, notch sides 20 ft (north-facing) and 15 ft (east-facing), east
+    // edge (south part) 15 ft, south 40 ft, west 30 ft; 140 ft in all (arithmetic).
+    const { request } = buildLayoutRequest(
+      params(
+        `shape=l-shape&len=30&wid=40&nlen=15&nwid=20&ledges=bed,hard,fence,lawn,house,unknown`,
+      ),
+    );
+    expect(request?.edges).toEqual(['house', 'lawn', 'hard', 'fence', 'bed', null]);
+    const plan = planLayout(request ?? { area: { outer: [] }, roll: { widthFt: 15 } });
+    expect(plan.perimeterByTagFt).toEqual({
+      bed: 20,
+      hard: 20,
+      fence: 15,
+      lawn: 15,
+      house: 40,
+      unknown: 30,
+    });
+  });
+
+  it('tags every edge of typed points with "All edges meet", after dropping a closing point', () => {
+    const { request } = buildLayoutRequest(
+      params(`shape=points&pts=${encodeURIComponent('0,0\n10,0\n10,8\n0,8\n0,0')}&pedge=fence`),
+    );
+    expect(request?.area.outer).toHaveLength(4);
+    expect(request?.edges).toEqual(['fence', 'fence', 'fence', 'fence']);
+  });
+
+  it('sends no edge tags while every edge is "Not sure"', () => {
+    expect(buildLayoutRequest(params('')).request).not.toHaveProperty('edges');
+    expect(buildLayoutRequest(params('shape=points')).request).not.toHaveProperty('edges');
+  });
+
+  it('adds an edging line to the takeoff once an edge meets a planting bed', () => {
+    const untagged = computePlanState(params(`len=20'&wid=30'`), emptyPlanState);
+    expect(untagged.good?.takeoff?.lines.map((line) => line.key)).not.toContain('edging');
+    const bed = computePlanState(
+      params(`len=20'&wid=30'&redges=bed,unknown,unknown,unknown`),
+      emptyPlanState,
+    );
+    const edging = bed.good?.takeoff?.lines.find((line) => line.key === 'edging');
+    expect(edging?.label).toBe('Edging / bender board');
+    expect(edging?.inputs).toMatchObject({ edgingFt: 30 });
+  });
+
   it('keeps the last good plan and gives the planner’s message for a shape it refuses', () => {
     const good = computePlanState(params(''), emptyPlanState);
     expect(good.good?.plan.orderedSqFt).toBeGreaterThan(0);

@@ -1,10 +1,13 @@
-import type { LayoutPoint, LayoutRequestInput } from '@seamwright/takeoff';
+import type { EdgeTag, LayoutPoint, LayoutRequestInput } from '@seamwright/takeoff';
+import { sameTagForAll, tagsInRingOrder } from './edge-tags';
 import type { LayoutParams } from './layout-params';
 import { readAngle, readLength, readPoint } from './read-input';
 import {
   buildFromPoints,
   buildLShape,
   buildRectangle,
+  lShapeEdges,
+  rectangleEdges,
   type FieldErrors,
   type ShapeResult,
 } from './shape-builders';
@@ -17,6 +20,14 @@ function shapeOf(params: LayoutParams): ShapeResult {
   if (params.shape === 'l-shape')
     return buildLShape(params.len, params.wid, params.nlen, params.nwid);
   return buildFromPoints(params.pts);
+}
+
+/** The outer ring's edge tags in ring order, as the planner's `edges` expects; undefined when none. */
+function edgesOf(params: LayoutParams, ringLength: number): (EdgeTag | null)[] | undefined {
+  if (params.shape === 'rectangle')
+    return tagsInRingOrder(rectangleEdges, params.redges, ringLength);
+  if (params.shape === 'l-shape') return tagsInRingOrder(lShapeEdges, params.ledges, ringLength);
+  return sameTagForAll(params.pedge, ringLength);
 }
 
 function trafficPathOf(params: LayoutParams, errors: FieldErrors): LayoutPoint[] | undefined {
@@ -57,12 +68,14 @@ export function buildLayoutRequest(params: LayoutParams): BuiltRequest {
   const path = trafficPathOf(params, errors);
   if (!shape.ok || Object.keys(errors).length > 0 || !maxLength.ok)
     return { request: null, errors };
+  const edges = edgesOf(params, shape.outer.length);
   return {
     request: {
       area: { outer: shape.outer, holes: shape.holes },
       roll: { widthFt: params.roll, maxLengthFt: maxLength.value },
       grain: angleDeg === undefined ? null : { angleDeg },
       ...(path ? { trafficPaths: [path] } : {}),
+      ...(edges ? { edges } : {}),
     },
     errors,
   };

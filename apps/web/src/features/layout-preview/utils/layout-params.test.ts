@@ -16,6 +16,7 @@ describe('layout screen URL params', () => {
 
   it.each<LayoutParams>([
     { ...defaults, len: `30'`, wid: `20' 6"`, roll: 12, grain: 'east-west', use: 'pet' },
+    { ...defaults, redges: ['bed', 'unknown', 'hard', 'house'] },
     {
       ...defaults,
       shape: 'l-shape',
@@ -26,6 +27,7 @@ describe('layout screen URL params', () => {
       max: '75',
       grain: 'angle',
       angle: '37.5',
+      ledges: ['fence', 'lawn', 'unknown', 'bed', 'hard', 'house'],
     },
     {
       ...defaults,
@@ -34,10 +36,29 @@ describe('layout screen URL params', () => {
       from: '0, 4',
       to: '10, 4',
       use: 'putting',
+      pedge: 'fence',
     },
   ])('survives a round trip through the URL: %o', (params) => {
     const url = `/layout?${toLayoutSearchParams(params).toString()}`;
     expect(parseLayoutParams(new URL(url, 'http://x').searchParams)).toEqual(params);
+  });
+
+  it('writes edge choices as a short list, and only for the shape that uses them', () => {
+    const search = toLayoutSearchParams({
+      ...defaults,
+      redges: ['bed', 'unknown', 'unknown', 'unknown'],
+      ledges: ['lawn', 'lawn', 'lawn', 'lawn', 'lawn', 'lawn'],
+    });
+    expect(search.toString()).toBe('redges=bed%2Cunknown%2Cunknown%2Cunknown');
+  });
+
+  it('reads an unknown edge word as "Not sure", and a list of the wrong length as all "Not sure"', () => {
+    const params = parseLayoutParams(
+      new URLSearchParams('redges=bed,gravel,,lawn&ledges=bed,bed&pedge=moat'),
+    );
+    expect(params.redges).toEqual(['bed', 'unknown', 'unknown', 'lawn']);
+    expect(params.ledges).toEqual(layoutParamDefaults.ledges);
+    expect(params.pedge).toBe('unknown');
   });
 
   it('keeps bad typed text as typed, so a reload shows the same message', () => {

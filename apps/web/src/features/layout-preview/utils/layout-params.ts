@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { edgeChoices, type EdgeChoice } from './edge-tags';
 
 export const shapeKinds = ['rectangle', 'l-shape', 'points'] as const;
 export type ShapeKind = (typeof shapeKinds)[number];
@@ -30,10 +31,27 @@ export const layoutParamDefaults = {
   use: 'landscape',
   from: '',
   to: '',
-} as const satisfies Record<string, string | number>;
+  // What each edge meets: the rectangle's N, E, S, W; the L's six edges; one for all points.
+  redges: ['unknown', 'unknown', 'unknown', 'unknown'],
+  ledges: ['unknown', 'unknown', 'unknown', 'unknown', 'unknown', 'unknown'],
+  pedge: 'unknown',
+} as const satisfies Record<string, string | number | readonly EdgeChoice[]>;
 
 /** Typed text is kept as typed (even when it does not parse) so a reload shows the same form. */
 const typed = (fallback: string, maxLength = 40) => z.string().max(maxLength).catch(fallback);
+
+const edgeChoice = z.enum(edgeChoices).catch('unknown');
+
+/**
+ * Edge choices written as a comma-separated list (`bed,unknown,…`). A word it does not know
+ * reads as "Not sure"; a list of the wrong length falls back to all "Not sure".
+ */
+const edgeList = (fallback: readonly EdgeChoice[]) =>
+  z
+    .string()
+    .transform((text) => text.split(','))
+    .pipe(z.array(edgeChoice).length(fallback.length))
+    .catch(() => [...fallback]);
 
 /**
  * The layout screen's state as it lives in the URL. Anything unreadable falls back to its
@@ -54,6 +72,9 @@ export const layoutParamsSchema = z.object({
   use: z.enum(usages).catch(layoutParamDefaults.use),
   from: typed(layoutParamDefaults.from),
   to: typed(layoutParamDefaults.to),
+  redges: edgeList(layoutParamDefaults.redges),
+  ledges: edgeList(layoutParamDefaults.ledges),
+  pedge: edgeChoice,
 });
 export type LayoutParams = z.output<typeof layoutParamsSchema>;
 
@@ -65,18 +86,19 @@ export function parseLayoutParams(search: URLSearchParams): LayoutParams {
 /** Writes the state back, leaving out defaults (and fields the chosen shape does not use). */
 export function toLayoutSearchParams(params: LayoutParams): URLSearchParams {
   const usedByShape: Record<ShapeKind, ReadonlySet<string>> = {
-    rectangle: new Set(['len', 'wid']),
-    'l-shape': new Set(['len', 'wid', 'nlen', 'nwid']),
-    points: new Set(['pts']),
+    rectangle: new Set(['len', 'wid', 'redges']),
+    'l-shape': new Set(['len', 'wid', 'nlen', 'nwid', 'ledges']),
+    points: new Set(['pts', 'pedge']),
   };
-  const shapeFields = new Set(['len', 'wid', 'nlen', 'nwid', 'pts']);
+  const shapeFields = new Set(['len', 'wid', 'nlen', 'nwid', 'pts', 'redges', 'ledges', 'pedge']);
   const search = new URLSearchParams();
   for (const [key, value] of Object.entries(params) as Array<
-    [keyof LayoutParams, string | number]
+    [keyof LayoutParams, string | number | readonly EdgeChoice[]]
   >) {
     if (shapeFields.has(key) && !usedByShape[params.shape].has(key)) continue;
     if (key === 'angle' && params.grain !== 'angle') continue;
-    if (value === layoutParamDefaults[key]) continue;
+    // String() writes a list comma-separated, as edgeList reads it back.
+    if (String(value) === String(layoutParamDefaults[key])) continue;
     search.set(key, String(value));
   }
   return search;

@@ -77,6 +77,18 @@ describe('shape builders', () => {
     });
   });
 
+  it('drops a point typed twice and a closing point, as the planner counts edges', () => {
+    expect(buildFromPoints('0,0\n10,0\n10,0\n10,8\n0,8\n0,0')).toMatchObject({
+      ok: true,
+      outer: [
+        [0, 0],
+        [10, 0],
+        [10, 8],
+        [0, 8],
+      ],
+    });
+  });
+
   it('says which line of points is wrong and why', () => {
     expect(buildFromPoints('0, 0\n10, 0\n10, 5, 2')).toEqual({
       ok: false,

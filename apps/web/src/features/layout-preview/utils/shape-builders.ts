@@ -1,4 +1,5 @@
 import type { LayoutPoint } from '@seamwright/takeoff';
+import type { NamedEdge } from './edge-tags';
 import { readLength, readPoint, type Read } from './read-input';
 
 /** Messages per field name, for the fields that could not be read. */
@@ -23,7 +24,8 @@ function collect(fields: Record<string, Read<number>>): {
 
 /**
  * A rectangle with its length running north–south and its width east–west, south-west
- * corner at 0, 0.
+ * corner at 0, 0. The ring runs counter-clockwise from there: edge 0 is the south side,
+ * 1 the east, 2 the north, 3 the west.
  */
 export function buildRectangle(lengthText: string, widthText: string): ShapeResult {
   const { values, errors } = collect({ len: readLength(lengthText), wid: readLength(widthText) });
@@ -41,9 +43,20 @@ export function buildRectangle(lengthText: string, widthText: string): ShapeResu
   };
 }
 
+/** The rectangle's sides as the screen lists them (N, E, S, W), with their edges in its ring. */
+export const rectangleEdges: readonly NamedEdge[] = [
+  { label: 'North edge', ringEdge: 2 },
+  { label: 'East edge', ringEdge: 1 },
+  { label: 'South edge', ringEdge: 0 },
+  { label: 'West edge', ringEdge: 3 },
+];
+
 /**
  * An L: the overall rectangle (length north–south, width east–west) with a notch cut out of
- * its north-east corner. The notch must leave turf on both arms.
+ * its north-east corner. The notch must leave turf on both arms. The ring runs
+ * counter-clockwise from the south-west corner: south side, east side of the south arm, the
+ * notch's north-facing side, the notch's east-facing side, north side of the west arm, west
+ * side.
  */
 export function buildLShape(
   lengthText: string,
@@ -84,7 +97,32 @@ export function buildLShape(
   };
 }
 
+/**
+ * The L's six sides as the screen lists them (north round to west), with their edges in its
+ * ring. The north edge's east part and the east edge's north part are the notch's sides.
+ */
+export const lShapeEdges: readonly NamedEdge[] = [
+  { label: 'North edge (west part)', ringEdge: 4 },
+  { label: 'North edge (east part)', ringEdge: 2 },
+  { label: 'East edge (north part)', ringEdge: 3 },
+  { label: 'East edge (south part)', ringEdge: 1 },
+  { label: 'South edge', ringEdge: 0 },
+  { label: 'West edge', ringEdge: 5 },
+];
+
 const ringWord = /^\s*hole\s*$/i;
+
+/**
+ * Drops a point typed twice in a row and a closing point repeating the first, as the planner
+ * does, so the ring sent has exactly the edges the planner counts (edge tags go one per edge).
+ */
+function dropRepeatedPoints(ring: readonly LayoutPoint[]): LayoutPoint[] {
+  const same = (a: LayoutPoint | undefined, b: LayoutPoint | undefined) =>
+    a !== undefined && b !== undefined && a[0] === b[0] && a[1] === b[1];
+  const kept = ring.filter((point, i) => !same(point, ring[i - 1]));
+  if (kept.length > 1 && same(kept[0], kept[kept.length - 1])) kept.pop();
+  return kept;
+}
 
 /**
  * Points typed one per line as `x, y` in feet; blank lines are skipped. A line reading `hole`
@@ -102,7 +140,7 @@ export function buildFromPoints(text: string): ShapeResult {
     if (!point.ok) return { ok: false, errors: { pts: `Line ${index + 1}: ${point.message}` } };
     rings[rings.length - 1]?.push(point.value);
   }
-  const [outer = [], ...holes] = rings;
+  const [outer = [], ...holes] = rings.map(dropRepeatedPoints);
   if (outer.length < 3)
     return {
       ok: false,
