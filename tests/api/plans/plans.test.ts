@@ -2,22 +2,10 @@ import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { testApp } from '../../fixtures/app.js';
 import { addMember, signUpCompany } from '../../fixtures/factories.js';
+import { contractExampleRequest } from '@seamwright/takeoff';
 
 // The request and plan shapes are the planner contract in DOMAIN.md.
-const rectangle = {
-  area: {
-    outer: [
-      [0, 0],
-      [30, 0],
-      [30, 20],
-      [0, 20],
-    ],
-    holes: [],
-  },
-  roll: { widthFt: 15, maxLengthFt: 100 },
-  grain: { angleDeg: 90 },
-  lengthStepFt: 1,
-};
+const rectangle = contractExampleRequest();
 
 describe('POST /api/plans/preview', () => {
   it('returns the plan for a 30 × 20 ft rectangle to any signed-in role, crew leads included', async () => {

@@ -2,6 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { contractExampleRequest } from '../layout/sample-yards.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, '../../../..');
@@ -18,20 +19,7 @@ function run(input: string): { status: number | null; stdout: string; stderr: st
 
 describe('plan-layout command', () => {
   it('reads a request on stdin and prints the plan on stdout', () => {
-    const request = {
-      area: {
-        outer: [
-          [0, 0],
-          [30, 0],
-          [30, 20],
-          [0, 20],
-        ],
-        holes: [],
-      },
-      roll: { widthFt: 15, maxLengthFt: 100 },
-      grain: { angleDeg: 90 },
-      lengthStepFt: 1,
-    };
+    const request = contractExampleRequest();
     const { status, stdout, stderr } = run(JSON.stringify(request));
     expect(status).toBe(0);
     expect(stderr).toBe('');

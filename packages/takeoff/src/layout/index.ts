@@ -25,5 +25,11 @@ export type {
   TrafficPath,
   TrafficSeamCrossing,
 } from './types.js';
-export { sampleYards, beanYard, irregularYard, seededRandom } from './sample-yards.js';
+export {
+  sampleYards,
+  beanYard,
+  irregularYard,
+  seededRandom,
+  contractExampleRequest,
+} from './sample-yards.js';
 export type { SampleYard } from './sample-yards.js';

@@ -1,21 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { LayoutInputError } from './errors.js';
 import { parseLayoutRequest } from './parse-request.js';
+import { contractExampleRequest } from './sample-yards.js';
 
-const valid = {
-  area: {
-    outer: [
-      [0, 0],
-      [30, 0],
-      [30, 20],
-      [0, 20],
-    ],
-    holes: [],
-  },
-  roll: { widthFt: 15, maxLengthFt: 100 },
-  grain: { angleDeg: 90 },
-  lengthStepFt: 1,
-};
+const valid = contractExampleRequest();
 
 function messageOf(json: unknown): string {
   try {

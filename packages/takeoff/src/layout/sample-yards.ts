@@ -117,3 +117,24 @@ export function sampleYards(): SampleYard[] {
     { name: 'irregular 400-vertex', outer: irregularYard(400, 400, 30, 48), holes: [] },
   ];
 }
+
+/**
+ * The request of the planner contract's worked example (DOMAIN.md): a 30 × 20 ft yard, 15 ft
+ * roll, grain at 90°. A fresh object each call, so callers may change their copy.
+ */
+export function contractExampleRequest() {
+  return {
+    area: {
+      outer: [
+        [0, 0],
+        [30, 0],
+        [30, 20],
+        [0, 20],
+      ] as [number, number][],
+      holes: [] as [number, number][][],
+    },
+    roll: { widthFt: 15, maxLengthFt: 100 },
+    grain: { angleDeg: 90 },
+    lengthStepFt: 1,
+  };
+}
