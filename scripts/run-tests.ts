@@ -1,7 +1,8 @@
 // Purpose: `npm test` — set up a separate test MariaDB, then typecheck, lint, unit tests, API
 // tests against the real database, and end-to-end tests in Debian's Chromium; exits non-zero on
 // any failure and ends with one summary line.
-// Usage: pnpm exec tsx scripts/run-tests.ts (normally through `npm test`).
+// Usage: pnpm exec tsx scripts/run-tests.ts [--only=typecheck,lint,unit,api,e2e] (normally
+// through `npm test`; `--only` runs just the named steps, for a quick check while working).
 // Safe in production? It only touches the git-ignored .data/test and .tmp folders.
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
@@ -33,11 +34,27 @@ ensureDebianPackages('chromium', ['chromium', 'fonts-liberation']);
 const db = await startMariadb('test', settings.db.port);
 ensureDatabase(db, settings.db);
 
+const stepKeys = ['typecheck', 'lint', 'unit', 'api', 'e2e'] as const;
+type StepKey = (typeof stepKeys)[number];
+const onlyArg = process.argv.find((arg) => arg.startsWith('--only='));
+const chosen = new Set(onlyArg ? onlyArg.slice('--only='.length).split(',') : stepKeys);
+for (const key of chosen) {
+  if (!(stepKeys as readonly string[]).includes(key)) {
+    console.error(`[test] unknown step "${key}" in --only; choose from ${stepKeys.join(', ')}`);
+    process.exit(2);
+  }
+}
+
 const results: { step: string; ok: boolean; seconds: number }[] = [];
 let counts: Counts = zeroCounts;
 
-function step(name: string, action: () => boolean | Promise<boolean>): Promise<boolean> {
+function step(
+  key: StepKey,
+  name: string,
+  action: () => boolean | Promise<boolean>,
+): Promise<boolean> {
   return (async () => {
+    if (!chosen.has(key)) return true;
     say('test', `── ${name}`);
     const started = Date.now();
     let ok = false;
@@ -64,11 +81,11 @@ function vitest(project: string[], report: string): boolean {
   return code === 0;
 }
 
-await step('typecheck', () => runStep('pnpm', ['run', 'typecheck']) === 0);
-await step('lint and format', () => runStep('pnpm', ['run', 'lint']) === 0);
-await step('unit tests', () => vitest(['unit', 'web'], 'unit.json'));
-await step('API tests (MariaDB)', () => vitest(['api'], 'api.json'));
-await step('end-to-end tests (Chromium)', async () => {
+await step('typecheck', 'typecheck', () => runStep('pnpm', ['run', 'typecheck']) === 0);
+await step('lint', 'lint and format', () => runStep('pnpm', ['run', 'lint']) === 0);
+await step('unit', 'unit tests', () => vitest(['unit', 'web'], 'unit.json'));
+await step('api', 'API tests (MariaDB)', () => vitest(['api'], 'api.json'));
+await step('e2e', 'end-to-end tests (Chromium)', async () => {
   if (!buildWebIfChanged()) return false;
   const e2eDb = { ...settings.db, database: e2eDatabase };
   recreateDatabase(db, e2eDb);

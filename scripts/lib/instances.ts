@@ -1,24 +1,46 @@
 // Ports and names of the two local set-ups. Development and tests never share a database.
 // These are local, loopback-only credentials for disposable data, not secrets.
+//
+// SW_PORT_OFFSET (a small whole number, default 0) shifts every port, so that several
+// checkouts of the project can run their own instances side by side on one machine.
+function readPortOffset(raw: string | undefined): number {
+  if (raw === undefined || raw === '') return 0;
+  const offset = Number(raw);
+  if (!Number.isInteger(offset) || offset < 0 || offset > 500) {
+    throw new Error(`SW_PORT_OFFSET must be a whole number from 0 to 500, got "${raw}"`);
+  }
+  return offset;
+}
+
+const offset = readPortOffset(process.env.SW_PORT_OFFSET);
+
 export const instances = {
   dev: {
-    db: { port: 3307, database: 'seamwright', user: 'seamwright', password: 'seamwright-local' },
-    apiPort: 5170,
-    smtpPort: 1025,
-    mailWebPort: 1080,
-    processorPort: 12111,
+    db: {
+      port: 3307 + offset,
+      database: 'seamwright',
+      user: 'seamwright',
+      password: 'seamwright-local',
+    },
+    apiPort: 5170 + offset,
+    smtpPort: 1025 + offset,
+    mailWebPort: 1080 + offset,
+    processorPort: 12111 + offset,
   },
   test: {
     db: {
-      port: 3308,
+      port: 3308 + offset,
       database: 'seamwright_test',
       user: 'seamwright',
       password: 'seamwright-local',
     },
-    apiPort: 5171,
-    smtpPort: 1026,
-    mailWebPort: 1081,
-    processorPort: 12112,
+    apiPort: 5171 + offset,
+    smtpPort: 1026 + offset,
+    mailWebPort: 1081 + offset,
+    processorPort: 12112 + offset,
+    /** The API suite's own maildev, apart from the e2e run's. */
+    apiSuiteSmtpPort: 1036 + offset,
+    apiSuiteMailWebPort: 1091 + offset,
   },
 } as const;
 
