@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { createApp, loadEnv, selectRows } from '@seamwright/api';
+import { createApp, decoyPasswordFor, loadEnv, selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import { newClient } from '../../fixtures/client.js';
 import { signUpCompany, testPassword, uniqueEmail } from '../../fixtures/factories.js';
@@ -157,6 +157,21 @@ describe('sign-in, me and sign-out', () => {
     expect(wrong.body.code).toBe('INVALID_CREDENTIALS');
     expect(unknown.body.code).toBe('INVALID_CREDENTIALS');
     expect(unknown.body.detail).toBe(wrong.body.detail);
+  });
+
+  it('checks an unknown e-mail against a decoy of the same bcrypt cost as real passwords', async () => {
+    const { app, sequelize } = testApp();
+    const owner = await signUpCompany(app);
+    const [row] = await selectRows<{ password_hash: string }>(
+      sequelize,
+      'SELECT password_hash FROM users WHERE id = ?',
+      [owner.me.user.id],
+    );
+    const cost = String(loadEnv().bcryptCost).padStart(2, '0');
+    // `$2b$04$…`: the cost is the second field; a cheaper decoy would answer unknown e-mails faster.
+    const decoyPrefix = decoyPasswordFor(loadEnv().bcryptCost).hash.slice(0, 7);
+    expect(decoyPrefix).toBe(`$2b$${cost}$`);
+    expect(decoyPrefix).toBe(String(row?.password_hash).slice(0, 7));
   });
 
   it('answers 401 UNAUTHENTICATED on /api/me when signed out', async () => {

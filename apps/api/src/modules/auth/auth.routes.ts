@@ -4,6 +4,7 @@ import type { RouteTable } from '../../http/route-table.js';
 import { createAuthHandlers } from './auth.handlers.js';
 import { createAuthService } from './auth.service.js';
 import { createLoginLimiter } from './login-limiter.js';
+import { createPasswordResetService } from './password-reset.service.js';
 
 export function registerAuthRoutes(
   routes: RouteTable,
@@ -14,6 +15,7 @@ export function registerAuthRoutes(
   const handlers = createAuthHandlers({
     env: deps.env,
     auth: createAuthService(deps),
+    passwordReset: createPasswordResetService(deps),
     issueCsrfToken,
     onLoginSucceeded: limiter.reset,
   });
