@@ -7,6 +7,9 @@ const booleanish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
   .transform((value) => value === 'true' || value === '1' || value === 'yes');
 
+/** A request count allowed within a rate-limit window. */
+const allowance = (fallback: number) => z.coerce.number().int().min(1).default(fallback);
+
 const envSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -34,6 +37,29 @@ const envSchema = z
       .int()
       .min(1000)
       .default(15 * 60 * 1000),
+    /**
+     * Rate limits of the other sign-in flows, each per IP and per account (e-mail, link token or
+     * user), within one window. Per-IP allowances are generous because an office shares one IP.
+     */
+    RATE_LIMIT_WINDOW_MS: z.coerce
+      .number()
+      .int()
+      .min(1000)
+      .default(15 * 60 * 1000),
+    /** Failed sign-ins from one IP across all e-mails (LOGIN_MAX_FAILURES is per IP + e-mail). */
+    RATE_LIMIT_LOGIN_FAILURES_PER_IP: allowance(50),
+    RATE_LIMIT_SIGNUP_PER_IP: allowance(10),
+    RATE_LIMIT_SIGNUP_PER_EMAIL: allowance(3),
+    RATE_LIMIT_RESET_REQUEST_PER_IP: allowance(10),
+    RATE_LIMIT_RESET_REQUEST_PER_EMAIL: allowance(3),
+    RATE_LIMIT_RESET_PER_IP: allowance(20),
+    RATE_LIMIT_RESET_PER_TOKEN: allowance(5),
+    RATE_LIMIT_ACCEPT_PER_IP: allowance(20),
+    RATE_LIMIT_ACCEPT_PER_TOKEN: allowance(5),
+    RATE_LIMIT_INVITE_PER_IP: allowance(60),
+    RATE_LIMIT_INVITE_PER_USER: allowance(30),
+    /** Invitation e-mails one company may send per 24 hours. */
+    INVITATION_MAILS_PER_COMPANY_PER_DAY: allowance(100),
     /** Serve sessions over https only (defaults to true in production). */
     COOKIE_SECURE: booleanish.optional(),
   })
@@ -59,7 +85,25 @@ export interface Env {
   trustProxy: boolean | number;
   bcryptCost: number;
   login: { maxFailures: number; windowMs: number };
+  rateLimits: RateLimits;
   cookieSecure: boolean;
+}
+
+/** Allowed requests per window, per IP and per account (e-mail, token or user). */
+export interface FlowLimit {
+  perIp: number;
+  perAccount: number;
+}
+
+export interface RateLimits {
+  windowMs: number;
+  loginFailuresPerIp: number;
+  signup: FlowLimit;
+  passwordResetRequest: FlowLimit;
+  passwordReset: FlowLimit;
+  invitationAccept: FlowLimit;
+  invitationSend: FlowLimit;
+  invitationMailsPerCompanyPerDay: number;
 }
 
 function parseTrustProxy(raw: string | undefined): boolean | number {
@@ -99,6 +143,25 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     bcryptCost: e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12),
     login: { maxFailures: e.LOGIN_MAX_FAILURES, windowMs: e.LOGIN_WINDOW_MS },
+    rateLimits: {
+      windowMs: e.RATE_LIMIT_WINDOW_MS,
+      loginFailuresPerIp: e.RATE_LIMIT_LOGIN_FAILURES_PER_IP,
+      signup: { perIp: e.RATE_LIMIT_SIGNUP_PER_IP, perAccount: e.RATE_LIMIT_SIGNUP_PER_EMAIL },
+      passwordResetRequest: {
+        perIp: e.RATE_LIMIT_RESET_REQUEST_PER_IP,
+        perAccount: e.RATE_LIMIT_RESET_REQUEST_PER_EMAIL,
+      },
+      passwordReset: { perIp: e.RATE_LIMIT_RESET_PER_IP, perAccount: e.RATE_LIMIT_RESET_PER_TOKEN },
+      invitationAccept: {
+        perIp: e.RATE_LIMIT_ACCEPT_PER_IP,
+        perAccount: e.RATE_LIMIT_ACCEPT_PER_TOKEN,
+      },
+      invitationSend: {
+        perIp: e.RATE_LIMIT_INVITE_PER_IP,
+        perAccount: e.RATE_LIMIT_INVITE_PER_USER,
+      },
+      invitationMailsPerCompanyPerDay: e.INVITATION_MAILS_PER_COMPANY_PER_DAY,
+    },
     cookieSecure: e.COOKIE_SECURE ?? isProduction,
   };
 }
