@@ -8,6 +8,8 @@ export const ErrorCode = {
   InvalidCredentials: 'INVALID_CREDENTIALS',
   Forbidden: 'FORBIDDEN',
   CsrfInvalid: 'CSRF_INVALID',
+  /** The active company removed the person; they still belong to another and must choose one. */
+  CompanyAccessEnded: 'COMPANY_ACCESS_ENDED',
   NotFound: 'NOT_FOUND',
   Conflict: 'CONFLICT',
   EmailTaken: 'EMAIL_TAKEN',

@@ -24,8 +24,10 @@ interface World {
   aOfficeMemberId: string;
 }
 
+/** `signed-in` routes need a signed-in person but no active company (choosing a company). */
 type Probe =
-  { kind: 'public'; why: string } | { kind: 'tenant'; run: (b: Client, w: World) => Promise<void> };
+  | { kind: 'public'; why: string }
+  | { kind: 'tenant' | 'signed-in'; run: (b: Client, w: World) => Promise<void> };
 
 const notFound = async (pending: PromiseLike<{ status: number; body: { code?: string } }>) => {
   const res = await pending;
@@ -60,8 +62,17 @@ const probes: Record<string, Probe> = {
       expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
     },
   },
+  'get /api/me/companies': {
+    kind: 'signed-in',
+    run: async (b, w) => {
+      const res = await b.get('/api/me/companies').expect(200);
+      const companies = (res.body as { data: { companyId: string }[] }).data;
+      expect(companies.map((c) => c.companyId)).toEqual([w.b.me.company.id]);
+      expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
+    },
+  },
   'post /api/me/company': {
-    kind: 'tenant',
+    kind: 'signed-in',
     run: (b, w) => notFound(b.post('/api/me/company', { companyId: w.a.me.company.id })),
   },
   'get /api/company': {
@@ -262,12 +273,12 @@ describe('tenant isolation', () => {
     expect(Object.keys(probes).filter((key) => !registered.includes(key))).toEqual([]);
   });
 
-  it('routes marked public in the table are public in the app, and every other route needs a member', () => {
+  it('routes marked public in the table are public in the app, and every other route needs a member (or, to choose a company, a signed-in person)', () => {
     for (const route of testApp().app.locals.apiRoutes) {
       const probe = probes[`${route.method} ${route.path}`];
       expect({ route: `${route.method} ${route.path}`, access: route.access }).toEqual({
         route: `${route.method} ${route.path}`,
-        access: probe?.kind === 'public' ? 'public' : 'tenant',
+        access: probe?.kind ?? 'tenant',
       });
     }
   });
@@ -275,7 +286,7 @@ describe('tenant isolation', () => {
   it("gives company B 404 (never A's data) on every tenant route, and leaves A's rows untouched", async () => {
     const before = await snapshotOfA(world);
     for (const [key, probe] of Object.entries(probes)) {
-      if (probe.kind !== 'tenant') continue;
+      if (probe.kind === 'public') continue;
       try {
         await probe.run(world.b.client, world);
       } catch (error) {
