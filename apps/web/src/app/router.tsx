@@ -1,7 +1,7 @@
 import { createBrowserRouter, Outlet } from 'react-router-dom';
 import { Loading } from '../components/ui/loading';
 import { paths, publicPathPrefixes } from '../config/paths';
-import { setUnauthenticatedHandler } from '../lib/api-client';
+import { setCompanyAccessEndedHandler, setUnauthenticatedHandler } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
 
 /**
@@ -19,6 +19,7 @@ export const router = createBrowserRouter([
       { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
       { path: '/reset-password/:token', lazy: () => import('./routes/reset-password') },
       { path: '/invitations/:token', lazy: () => import('./routes/invitation') },
+      { path: '/choose-company', lazy: () => import('./routes/choose-company') },
       {
         id: 'app',
         lazy: () => import('./routes/app-layout'),
@@ -43,4 +44,13 @@ setUnauthenticatedHandler(() => {
   if (router.state.navigation.state !== 'idle') return; // a loader is already redirecting
   queryClient.clear();
   void router.navigate(paths.signIn(`${pathname}${search}`), { replace: true });
+});
+
+// Removed from the active company while using it: nothing cached belongs to a company any more;
+// the person picks one of the companies they still belong to.
+setCompanyAccessEndedHandler(() => {
+  if (window.location.pathname === paths.chooseCompany) return;
+  if (router.state.navigation.state !== 'idle') return; // a loader is already redirecting
+  queryClient.clear();
+  void router.navigate(paths.chooseCompany, { replace: true });
 });

@@ -2,6 +2,8 @@
 export const paths = {
   signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
   signUp: '/sign-up',
+  /** After access to the active company ended: pick one of the others. */
+  chooseCompany: '/choose-company',
   forgotPassword: '/forgot-password',
   resetPassword: (token: string) => `/reset-password/${encodeURIComponent(token)}`,
   invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
