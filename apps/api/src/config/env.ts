@@ -23,8 +23,12 @@ const envSchema = z
     MAIL_FROM: z.string().min(3).default('Seamwright <no-reply@seamwright.test>'),
     WEB_DIST_DIR: z.string().min(1).optional(),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
-    /** Express `trust proxy`: a hop count, or true/false. */
-    TRUST_PROXY: z.string().optional(),
+    /** Express `trust proxy`: a hop count, or true/false (required in production). */
+    TRUST_PROXY: z
+      .string()
+      .trim()
+      .regex(/^(|true|false|\d{1,2})$/, 'TRUST_PROXY must be true, false or a hop count')
+      .optional(),
     /** bcrypt cost; 12 in production, lower in tests so the suite stays fast. */
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
     /** Failed sign-ins allowed per IP + e-mail within the window before 429. */
@@ -38,13 +42,31 @@ const envSchema = z
     COOKIE_SECURE: booleanish.optional(),
   })
   .superRefine((value, ctx) => {
-    if (value.NODE_ENV === 'production' && !value.SESSION_SECRET) {
+    if (value.NODE_ENV !== 'production') return;
+    // Fail closed: a production server never falls back to a development default.
+    const missing = (name: keyof typeof value, why: string) =>
+      ctx.addIssue({
+        code: 'custom',
+        path: [name],
+        message: `${name} is required in production (${why})`,
+      });
+    if (!value.SESSION_SECRET) missing('SESSION_SECRET', 'it signs session and CSRF cookies');
+    else if (value.SESSION_SECRET === devSessionSecret)
       ctx.addIssue({
         code: 'custom',
         path: ['SESSION_SECRET'],
-        message: 'SESSION_SECRET is required in production',
+        message:
+          'SESSION_SECRET must be your own secret in production, not the development default',
       });
-    }
+    if (!value.APP_URL) missing('APP_URL', 'the origin state-changing requests must come from');
+    if (value.TRUST_PROXY === undefined || value.TRUST_PROXY === '')
+      missing('TRUST_PROXY', "set it explicitly, 'false' when no proxy is in front");
+    if (value.COOKIE_SECURE === false)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['COOKIE_SECURE'],
+        message: 'COOKIE_SECURE cannot be false in production',
+      });
   });
 
 export interface Env {
@@ -59,14 +81,26 @@ export interface Env {
   trustProxy: boolean | number;
   bcryptCost: number;
   login: { maxFailures: number; windowMs: number };
+  /** Secure cookies and HSTS. */
   cookieSecure: boolean;
+  /** `__Host-` names when served over https with Secure cookies: bound to this exact host. */
+  cookieNames: { session: string; csrf: string };
+  /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
+  trustedOrigins: string[];
 }
+
+/** The Vite dev server (apps/web/vite.config.ts) proxies /api from its own origin. */
+const viteDevOrigins = ['http://127.0.0.1:5173', 'http://localhost:5173'];
 
 function parseTrustProxy(raw: string | undefined): boolean | number {
   if (raw === undefined || raw === '' || raw === 'false' || raw === '0') return false;
   if (raw === 'true') return true;
-  const hops = Number(raw);
-  return Number.isInteger(hops) && hops > 0 ? hops : false;
+  return Number(raw);
+}
+
+function cookieNamesFor(appUrl: string, secure: boolean): Env['cookieNames'] {
+  const prefix = secure && appUrl.startsWith('https:') ? '__Host-' : '';
+  return { session: `${prefix}sw.sid`, csrf: `${prefix}sw.csrf` };
 }
 
 /**
@@ -81,6 +115,8 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
   }
   const e = parsed.data;
   const isProduction = e.NODE_ENV === 'production';
+  const appUrl = (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, '');
+  const cookieSecure = e.COOKIE_SECURE ?? isProduction;
   return {
     nodeEnv: e.NODE_ENV,
     port: e.PORT,
@@ -92,13 +128,18 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       password: e.DB_PASSWORD,
     },
     sessionSecret: e.SESSION_SECRET ?? devSessionSecret,
-    appUrl: (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, ''),
+    appUrl,
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, from: e.MAIL_FROM },
     webDistDir: e.WEB_DIST_DIR ?? null,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     bcryptCost: e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12),
     login: { maxFailures: e.LOGIN_MAX_FAILURES, windowMs: e.LOGIN_WINDOW_MS },
-    cookieSecure: e.COOKIE_SECURE ?? isProduction,
+    cookieSecure,
+    cookieNames: cookieNamesFor(appUrl, cookieSecure),
+    trustedOrigins: [
+      new URL(appUrl).origin,
+      ...(e.NODE_ENV === 'development' ? viteDevOrigins : []),
+    ],
   };
 }
