@@ -84,9 +84,13 @@ describe('loadEnv outside production', () => {
     expect(env.cookieNames).toEqual({ session: 'sw.sid', csrf: 'sw.csrf' });
     expect(env.trustedOrigins).toEqual([
       'http://127.0.0.1:5170',
+      'http://localhost:5170',
       'http://127.0.0.1:5173',
       'http://localhost:5173',
     ]);
     expect(loadEnv({ NODE_ENV: 'test' }).trustedOrigins).toEqual(['http://127.0.0.1:5170']);
+    expect(
+      loadEnv({ NODE_ENV: 'development', APP_URL: 'https://dev.example.test' }).trustedOrigins,
+    ).toEqual(['https://dev.example.test', 'http://127.0.0.1:5173', 'http://localhost:5173']);
   });
 });

@@ -98,6 +98,26 @@ function parseTrustProxy(raw: string | undefined): boolean | number {
   return Number(raw);
 }
 
+/**
+ * APP_URL's origin. In development also the Vite dev server and the other spelling of a
+ * loopback APP_URL (`localhost` for `127.0.0.1`), since developers type either.
+ */
+function trustedOriginsFor(appUrl: string, nodeEnv: Env['nodeEnv']): string[] {
+  const url = new URL(appUrl);
+  if (nodeEnv !== 'development') return [url.origin];
+  const loopbackAlias: Record<string, string> = {
+    '127.0.0.1': 'localhost',
+    localhost: '127.0.0.1',
+  };
+  const origins = [url.origin];
+  const alias = loopbackAlias[url.hostname];
+  if (alias) {
+    url.hostname = alias;
+    origins.push(url.origin);
+  }
+  return [...origins, ...viteDevOrigins];
+}
+
 function cookieNamesFor(appUrl: string, secure: boolean): Env['cookieNames'] {
   const prefix = secure && appUrl.startsWith('https:') ? '__Host-' : '';
   return { session: `${prefix}sw.sid`, csrf: `${prefix}sw.csrf` };
@@ -137,9 +157,6 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     login: { maxFailures: e.LOGIN_MAX_FAILURES, windowMs: e.LOGIN_WINDOW_MS },
     cookieSecure,
     cookieNames: cookieNamesFor(appUrl, cookieSecure),
-    trustedOrigins: [
-      new URL(appUrl).origin,
-      ...(e.NODE_ENV === 'development' ? viteDevOrigins : []),
-    ],
+    trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
   };
 }
