@@ -7,6 +7,7 @@
  * - `migrateDatabase(sequelize)` → applies pending migrations
  * - `seedDemoData(sequelize, env)` → loads the demo company once
  * - `startServer(options?)` → listens on env.port with graceful shutdown
+ * - `createLogger(level, destination?)` → the pino logger with the API's redaction rules
  */
 export { createApp } from './app.js';
 export type { AppDeps } from './app.js';
@@ -19,7 +20,8 @@ export type { SeedResult } from './seed/demo-data.js';
 export { startServer } from './server.js';
 export type { RunningServer, StartServerOptions } from './server.js';
 export type { RouteEntry } from './http/route-table.js';
-export { csrfCookieName, csrfHeaderName } from './http/csrf.js';
-export { sessionCookieName } from './http/session.js';
+export { csrfHeaderName } from './http/csrf.js';
+export { createLogger } from './http/logging.js';
+export { answerMalformedRequests } from './http/malformed-requests.js';
 export { executeSql, selectRows } from './db/sql.js';
 export { decoyPasswordFor } from './passwords.js';

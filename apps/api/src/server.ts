@@ -9,6 +9,7 @@ import type { Env } from './config/env.js';
 import { migrateDatabase } from './db/migrate.js';
 import { createSequelize } from './db/sequelize.js';
 import { createLogger } from './http/logging.js';
+import { answerMalformedRequests } from './http/malformed-requests.js';
 import { createSessionStore } from './http/session.js';
 import { createMailer } from './mail/mailer.js';
 
@@ -42,6 +43,7 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(env.port, '127.0.0.1', () => resolve(s));
   });
+  answerMalformedRequests(server);
   const url = `http://127.0.0.1:${env.port}`;
   logger.info({ url }, 'Seamwright API listening');
 

@@ -4,6 +4,8 @@
  */
 export const ErrorCode = {
   ValidationFailed: 'VALIDATION_FAILED',
+  /** The request itself is malformed (a bad percent-escape, a body that does not match its length). */
+  BadRequest: 'BAD_REQUEST',
   Unauthenticated: 'UNAUTHENTICATED',
   InvalidCredentials: 'INVALID_CREDENTIALS',
   Forbidden: 'FORBIDDEN',
@@ -17,6 +19,12 @@ export const ErrorCode = {
   Unprocessable: 'UNPROCESSABLE',
   RateLimited: 'RATE_LIMITED',
   PayloadTooLarge: 'PAYLOAD_TOO_LARGE',
+  /** A Content-Type, charset or Content-Encoding the API does not read. */
+  UnsupportedMediaType: 'UNSUPPORTED_MEDIA_TYPE',
+  /** Request headers over the server's limit. */
+  HeadersTooLarge: 'HEADERS_TOO_LARGE',
+  /** The request did not arrive in time. */
+  RequestTimeout: 'REQUEST_TIMEOUT',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

@@ -26,8 +26,12 @@ const envSchema = z
     MAIL_FROM: z.string().min(3).default('Seamwright <no-reply@seamwright.test>'),
     WEB_DIST_DIR: z.string().min(1).optional(),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
-    /** Express `trust proxy`: a hop count, or true/false. */
-    TRUST_PROXY: z.string().optional(),
+    /** Express `trust proxy`: a hop count, or true/false (required in production). */
+    TRUST_PROXY: z
+      .string()
+      .trim()
+      .regex(/^(|true|false|\d{1,2})$/, 'TRUST_PROXY must be true, false or a hop count')
+      .optional(),
     /** bcrypt cost; 12 in production, lower in tests so the suite stays fast. */
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
     /** Failed sign-ins allowed per IP + e-mail within the window before 429. */
@@ -64,13 +68,31 @@ const envSchema = z
     COOKIE_SECURE: booleanish.optional(),
   })
   .superRefine((value, ctx) => {
-    if (value.NODE_ENV === 'production' && !value.SESSION_SECRET) {
+    if (value.NODE_ENV !== 'production') return;
+    // Fail closed: a production server never falls back to a development default.
+    const missing = (name: keyof typeof value, why: string) =>
+      ctx.addIssue({
+        code: 'custom',
+        path: [name],
+        message: `${name} is required in production (${why})`,
+      });
+    if (!value.SESSION_SECRET) missing('SESSION_SECRET', 'it signs session and CSRF cookies');
+    else if (value.SESSION_SECRET === devSessionSecret)
       ctx.addIssue({
         code: 'custom',
         path: ['SESSION_SECRET'],
-        message: 'SESSION_SECRET is required in production',
+        message:
+          'SESSION_SECRET must be your own secret in production, not the development default',
       });
-    }
+    if (!value.APP_URL) missing('APP_URL', 'the origin state-changing requests must come from');
+    if (value.TRUST_PROXY === undefined || value.TRUST_PROXY === '')
+      missing('TRUST_PROXY', "set it explicitly, 'false' when no proxy is in front");
+    if (value.COOKIE_SECURE === false)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['COOKIE_SECURE'],
+        message: 'COOKIE_SECURE cannot be false in production',
+      });
   });
 
 export interface Env {
@@ -86,7 +108,12 @@ export interface Env {
   bcryptCost: number;
   login: { maxFailures: number; windowMs: number };
   rateLimits: RateLimits;
+  /** Secure cookies and HSTS. */
   cookieSecure: boolean;
+  /** `__Host-` names when served over https with Secure cookies: bound to this exact host. */
+  cookieNames: { session: string; csrf: string };
+  /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
+  trustedOrigins: string[];
 }
 
 /** Allowed requests per window, per IP and per account (e-mail, token or user). */
@@ -106,11 +133,38 @@ export interface RateLimits {
   invitationMailsPerCompanyPerDay: number;
 }
 
+/** The Vite dev server (apps/web/vite.config.ts) proxies /api from its own origin. */
+const viteDevOrigins = ['http://127.0.0.1:5173', 'http://localhost:5173'];
+
 function parseTrustProxy(raw: string | undefined): boolean | number {
   if (raw === undefined || raw === '' || raw === 'false' || raw === '0') return false;
   if (raw === 'true') return true;
-  const hops = Number(raw);
-  return Number.isInteger(hops) && hops > 0 ? hops : false;
+  return Number(raw);
+}
+
+/**
+ * APP_URL's origin. In development also the Vite dev server and the other spelling of a
+ * loopback APP_URL (`localhost` for `127.0.0.1`), since developers type either.
+ */
+function trustedOriginsFor(appUrl: string, nodeEnv: Env['nodeEnv']): string[] {
+  const url = new URL(appUrl);
+  if (nodeEnv !== 'development') return [url.origin];
+  const loopbackAlias: Record<string, string> = {
+    '127.0.0.1': 'localhost',
+    localhost: '127.0.0.1',
+  };
+  const origins = [url.origin];
+  const alias = loopbackAlias[url.hostname];
+  if (alias) {
+    url.hostname = alias;
+    origins.push(url.origin);
+  }
+  return [...origins, ...viteDevOrigins];
+}
+
+function cookieNamesFor(appUrl: string, secure: boolean): Env['cookieNames'] {
+  const prefix = secure && appUrl.startsWith('https:') ? '__Host-' : '';
+  return { session: `${prefix}sw.sid`, csrf: `${prefix}sw.csrf` };
 }
 
 /**
@@ -125,6 +179,8 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
   }
   const e = parsed.data;
   const isProduction = e.NODE_ENV === 'production';
+  const appUrl = (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, '');
+  const cookieSecure = e.COOKIE_SECURE ?? isProduction;
   return {
     nodeEnv: e.NODE_ENV,
     port: e.PORT,
@@ -136,7 +192,7 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       password: e.DB_PASSWORD,
     },
     sessionSecret: e.SESSION_SECRET ?? devSessionSecret,
-    appUrl: (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, ''),
+    appUrl,
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, from: e.MAIL_FROM },
     webDistDir: e.WEB_DIST_DIR ?? null,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
@@ -162,6 +218,8 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       },
       invitationMailsPerCompanyPerDay: e.INVITATION_MAILS_PER_COMPANY_PER_DAY,
     },
-    cookieSecure: e.COOKIE_SECURE ?? isProduction,
+    cookieSecure,
+    cookieNames: cookieNamesFor(appUrl, cookieSecure),
+    trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
   };
 }

@@ -6,6 +6,7 @@ import type { AppError } from '../errors.js';
 /** The single code → HTTP status map. */
 export const statusByCode: Record<ErrorCode, number> = {
   VALIDATION_FAILED: 400,
+  BAD_REQUEST: 400,
   UNAUTHENTICATED: 401,
   INVALID_CREDENTIALS: 401,
   FORBIDDEN: 403,
@@ -18,11 +19,15 @@ export const statusByCode: Record<ErrorCode, number> = {
   UNPROCESSABLE: 422,
   RATE_LIMITED: 429,
   PAYLOAD_TOO_LARGE: 413,
+  UNSUPPORTED_MEDIA_TYPE: 415,
+  HEADERS_TOO_LARGE: 431,
+  REQUEST_TIMEOUT: 408,
   INTERNAL: 500,
 };
 
 const titles: Record<ErrorCode, string> = {
   VALIDATION_FAILED: 'Some fields need attention',
+  BAD_REQUEST: 'The request is malformed',
   UNAUTHENTICATED: 'Sign in to continue',
   INVALID_CREDENTIALS: 'E-mail or password is wrong',
   FORBIDDEN: 'Your role cannot do this',
@@ -35,6 +40,9 @@ const titles: Record<ErrorCode, string> = {
   UNPROCESSABLE: 'The request cannot be processed',
   RATE_LIMITED: 'Too many attempts',
   PAYLOAD_TOO_LARGE: 'The request is too large',
+  UNSUPPORTED_MEDIA_TYPE: 'The request body is in a format the API does not read',
+  HEADERS_TOO_LARGE: 'The request headers are too large',
+  REQUEST_TIMEOUT: 'The request took too long',
   INTERNAL: 'Something went wrong on our side',
 };
 

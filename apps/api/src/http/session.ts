@@ -1,5 +1,6 @@
 // Sessions live in MariaDB (connect-session-sequelize), so any number of API processes can
-// serve the same users. The cookie holds only the session id.
+// serve the same users. The cookie holds only the session id; its name comes from the
+// environment (`__Host-sw.sid` on https, see config/env.ts).
 import type { Request, RequestHandler, Response } from 'express';
 import session from 'express-session';
 import connectSessionSequelize from 'connect-session-sequelize';
@@ -13,7 +14,6 @@ declare module 'express-session' {
   }
 }
 
-export const sessionCookieName = 'sw.sid';
 const sessionMaxAgeMs = 14 * 24 * 60 * 60 * 1000;
 
 const SequelizeStore = connectSessionSequelize(session.Store);
@@ -42,7 +42,7 @@ export function createSessionStore(
 
 export function createSessionMiddleware(env: Env, store: SessionStore): RequestHandler {
   return session({
-    name: sessionCookieName,
+    name: env.cookieNames.session,
     secret: env.sessionSecret,
     store,
     resave: false,
@@ -79,7 +79,7 @@ export async function signOut(req: Request, res: Response, env: Env): Promise<vo
   await new Promise<void>((resolve, reject) =>
     req.session.destroy((err) => (err ? reject(err as Error) : resolve())),
   );
-  res.clearCookie(sessionCookieName, {
+  res.clearCookie(env.cookieNames.session, {
     httpOnly: true,
     sameSite: 'lax',
     secure: env.cookieSecure,
