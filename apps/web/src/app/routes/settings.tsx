@@ -57,7 +57,7 @@ export function Component() {
         }
       />
       <Section id="profile" title="Your profile">
-        <MyProfile />
+        <MyProfile showEditLink />
       </Section>
       {canManageCompany ? (
         <Section id="company" title="Company details">
