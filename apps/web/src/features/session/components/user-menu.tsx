@@ -29,6 +29,8 @@ export function UserMenu({ tone = 'dark' }: { tone?: 'dark' | 'light' }) {
         </p>
         <Link
           to={paths.profile}
+          // The menu is a <details>; close it so it is not still open on the profile page.
+          onClick={(event) => event.currentTarget.closest('details')?.removeAttribute('open')}
           className={`mt-1 flex min-h-11 w-full items-center rounded px-2 font-semibold no-underline ${tone === 'dark' ? 'text-white hover:bg-moss-700' : 'text-ink hover:bg-sand-100'}`}
         >
           Your profile
