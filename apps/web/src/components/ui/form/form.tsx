@@ -50,7 +50,7 @@ export function Form<S extends FormSchema>({
   ...rest
 }: FormProps<S>) {
   const methods = useForm<z.input<S>, unknown, z.output<S>>({
-    // zodResolver's overloads cannot be picked for a generic schema; S is a zod object schema.
+    // zodResolver's overloads cannot be picked for a generic S; the casts only restate its types.
     resolver: zodResolver(schema as unknown as z.ZodObject) as unknown as Resolver<
       z.input<S>,
       unknown,
