@@ -222,6 +222,8 @@ test('someone in two companies switches between them and sees only the active on
 
   await sidebar.getByText('Switch company').click();
   await sidebar.getByRole('button', { name: new RegExp(secondCompanyName) }).click();
+  // Wait for the switch to land (it ends on Today) before moving on, or the two navigations race.
+  await expect(sidebar.getByText('Bookkeeper', { exact: true })).toBeVisible();
   await rail(page).getByRole('link', { name: 'Customers' }).click();
   await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
   await expect(page.getByRole('link', { name: customerName })).toHaveCount(0);

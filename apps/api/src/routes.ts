@@ -20,7 +20,7 @@ export function registerApiRoutes(
 ): void {
   registerHealthRoutes(routes, deps);
   registerAuthRoutes(routes, deps, issueCsrfToken);
-  registerMeRoutes(routes);
+  registerMeRoutes(routes, deps);
   registerCompanyRoutes(routes, deps);
   registerMembersRoutes(routes, deps);
   registerInvitationsRoutes(routes, deps);

@@ -10,6 +10,7 @@ import {
   createCustomer,
   createSite,
   signUpCompany,
+  testPassword,
   uniqueEmail,
 } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
@@ -69,6 +70,40 @@ const probes: Record<string, Probe> = {
       const companies = (res.body as { data: { companyId: string }[] }).data;
       expect(companies.map((c) => c.companyId)).toEqual([w.b.me.company.id]);
       expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
+    },
+  },
+  'patch /api/me': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      // Whatever ids the body names, only the session's own user is renamed.
+      const res = await b
+        .patch('/api/me', { name: 'Bravo Renamed', id: w.a.me.user.id, userId: w.a.me.user.id })
+        .expect(200);
+      expect(res.body.data.user.id).toBe(w.b.me.user.id);
+      const [aUser] = await selectRows(testApp().sequelize, 'SELECT name FROM users WHERE id = ?', [
+        w.a.me.user.id,
+      ]);
+      expect(aUser?.name).toBe(w.a.me.user.name);
+    },
+  },
+  'post /api/me/password': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const hashOfA = () =>
+        selectRows(testApp().sequelize, 'SELECT password_hash FROM users WHERE id = ?', [
+          w.a.me.user.id,
+        ]);
+      const before = await hashOfA();
+      await b
+        .post('/api/me/password', {
+          currentPassword: testPassword,
+          newPassword: 'bravo-isolation-password-2',
+          userId: w.a.me.user.id,
+        })
+        .expect(204);
+      expect(await hashOfA()).toEqual(before);
+      // A's sessions are not B's "other sessions".
+      await w.a.client.get('/api/me').expect(200);
     },
   },
   'post /api/me/company': {

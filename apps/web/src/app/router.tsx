@@ -30,6 +30,7 @@ export const router = createBrowserRouter([
           { path: '/customers/:customerId', lazy: () => import('./routes/customer') },
           { path: '/layout', lazy: () => import('./routes/layout-preview') },
           { path: '/settings', lazy: () => import('./routes/settings') },
+          { path: '/profile', lazy: () => import('./routes/profile') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

@@ -13,6 +13,7 @@ export const paths = {
   customer: (id: string) => `/customers/${encodeURIComponent(id)}`,
   layout: '/layout',
   settings: '/settings',
+  profile: '/profile',
 } as const;
 
 /** Pages a signed-out visitor may open; a 401 there must not bounce back to sign-in. */

@@ -1,7 +1,9 @@
 // Lookups keyed by the signed-in user rather than by a company: they build the tenant context
 // itself, so they cannot be company-scoped. The user id always comes from the session.
+import { Op } from 'sequelize';
 import type { Role } from '@seamwright/shared';
-import { CompanyModel, MembershipModel, UserModel } from '../../db/models/index.js';
+import { CompanyModel, MembershipModel, SessionModel, UserModel } from '../../db/models/index.js';
+import type { Tx } from '../../db/sequelize.js';
 
 export interface UserMembership {
   companyId: string;
@@ -63,4 +65,38 @@ export async function findUserById(userId: string) {
 export async function findCompanyById(companyId: string) {
   const row = await CompanyModel.findByPk(companyId);
   return row ? row.get({ plain: true }) : null;
+}
+
+/** The user's password hash, locked for the rest of `tx` so two changes cannot interleave. */
+export async function findPasswordHashOfUser(userId: string, tx: Tx): Promise<string | null> {
+  const row = await UserModel.findByPk(userId, {
+    attributes: ['passwordHash'],
+    transaction: tx,
+    lock: tx.LOCK.UPDATE,
+  });
+  return row ? row.passwordHash : null;
+}
+
+export async function updateNameOfUser(userId: string, name: string, tx: Tx): Promise<void> {
+  await UserModel.update({ name }, { where: { id: userId }, transaction: tx });
+}
+
+export async function updatePasswordHashOfUser(
+  userId: string,
+  passwordHash: string,
+  tx: Tx,
+): Promise<void> {
+  await UserModel.update({ passwordHash }, { where: { id: userId }, transaction: tx });
+}
+
+/** Ends every stored session of the user except `keepSessionId` (the one making the change). */
+export async function destroyOtherSessionsOfUser(
+  userId: string,
+  keepSessionId: string,
+  tx: Tx,
+): Promise<number> {
+  return SessionModel.destroy({
+    where: { userId, sid: { [Op.ne]: keepSessionId } },
+    transaction: tx,
+  });
 }
