@@ -15,6 +15,8 @@ export const ErrorCode = {
   Unprocessable: 'UNPROCESSABLE',
   RateLimited: 'RATE_LIMITED',
   PayloadTooLarge: 'PAYLOAD_TOO_LARGE',
+  /** The server is busy (e.g. the layout planner's queue is full); try again after Retry-After. */
+  ServiceBusy: 'SERVICE_BUSY',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

@@ -1,4 +1,5 @@
 // The only file that reads process.env. Everything else receives a typed `Env`.
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const devSessionSecret = 'seamwright-dev-session-secret-not-for-production';
@@ -36,6 +37,12 @@ const envSchema = z
       .default(15 * 60 * 1000),
     /** Serve sessions over https only (defaults to true in production). */
     COOKIE_SECURE: booleanish.optional(),
+    /** Layout-planner worker threads (default: one less than the cores, at least 1). */
+    PLANNER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+    /** Longest a planner task may run before it is stopped and answered 422. */
+    PLANNER_BUDGET_MS: z.coerce.number().int().min(50).max(600_000).default(5000),
+    /** Planner tasks allowed to wait for a thread; past it the API answers 503. */
+    PLANNER_MAX_QUEUE: z.coerce.number().int().min(0).max(10_000).optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV === 'production' && !value.SESSION_SECRET) {
@@ -60,6 +67,7 @@ export interface Env {
   bcryptCost: number;
   login: { maxFailures: number; windowMs: number };
   cookieSecure: boolean;
+  planner: { threads: number; budgetMs: number; maxQueue: number };
 }
 
 function parseTrustProxy(raw: string | undefined): boolean | number {
@@ -67,6 +75,16 @@ function parseTrustProxy(raw: string | undefined): boolean | number {
   if (raw === 'true') return true;
   const hops = Number(raw);
   return Number.isInteger(hops) && hops > 0 ? hops : false;
+}
+
+/** A queue of four tasks per thread keeps a burst waiting briefly instead of refused. */
+function plannerConfig(
+  threads: number | undefined,
+  budgetMs: number,
+  maxQueue: number | undefined,
+): Env['planner'] {
+  const count = threads ?? Math.max(1, availableParallelism() - 1);
+  return { threads: count, budgetMs, maxQueue: maxQueue ?? count * 4 };
 }
 
 /**
@@ -100,5 +118,6 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     bcryptCost: e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12),
     login: { maxFailures: e.LOGIN_MAX_FAILURES, windowMs: e.LOGIN_WINDOW_MS },
     cookieSecure: e.COOKIE_SECURE ?? isProduction,
+    planner: plannerConfig(e.PLANNER_THREADS, e.PLANNER_BUDGET_MS, e.PLANNER_MAX_QUEUE),
   };
 }

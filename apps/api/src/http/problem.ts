@@ -17,6 +17,7 @@ export const statusByCode: Record<ErrorCode, number> = {
   UNPROCESSABLE: 422,
   RATE_LIMITED: 429,
   PAYLOAD_TOO_LARGE: 413,
+  SERVICE_BUSY: 503,
   INTERNAL: 500,
 };
 
@@ -33,6 +34,7 @@ const titles: Record<ErrorCode, string> = {
   UNPROCESSABLE: 'The request cannot be processed',
   RATE_LIMITED: 'Too many attempts',
   PAYLOAD_TOO_LARGE: 'The request is too large',
+  SERVICE_BUSY: 'The server is busy; try again shortly',
   INTERNAL: 'Something went wrong on our side',
 };
 
