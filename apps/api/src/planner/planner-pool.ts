@@ -18,6 +18,11 @@ export interface PlannerPoolConfig {
 }
 
 const workerFile = new URL('./planner-worker.ts', import.meta.url);
+/**
+ * Planner threads run at a lower OS priority (Linux nice +10, through piscina), so on a busy
+ * machine the event loop that answers every other request is scheduled first.
+ */
+const workerNiceIncrement = 10;
 /** Heap per worker: a runaway plan fails alone instead of taking the process down. */
 const workerHeapMb = 512;
 /**
@@ -69,8 +74,14 @@ export class PlannerPool {
       idleTimeout: 60_000,
       execArgv: workerExecArgv(),
       resourceLimits: { maxOldGenerationSizeMb: workerHeapMb },
+      niceIncrement: workerNiceIncrement,
     });
     return this.#piscina;
+  }
+
+  /** Plans running or waiting for a thread right now. */
+  get tasksInFlight(): number {
+    return this.#inFlight;
   }
 
   /** Starts the first thread now, so the first request does not wait for it (server start). */
