@@ -20,6 +20,7 @@ import type { SessionStore } from './http/session.js';
 import { serveWebApp } from './http/web-app.js';
 import { createMailer } from './mail/mailer.js';
 import type { Mailer } from './mail/mailer.js';
+import type { PlannerPool } from './planner/planner-pool.js';
 import { registerApiRoutes } from './routes.js';
 
 export interface AppDeps {
@@ -30,6 +31,8 @@ export interface AppDeps {
   logger?: Logger;
   /** Defaults to a store without the background sweep (the server passes its own). */
   sessionStore?: SessionStore;
+  /** Owned by the caller, who closes it on shutdown (`createPlannerPool(env.planner)`). */
+  plannerPool: PlannerPool;
 }
 
 declare global {
@@ -50,6 +53,7 @@ export function createApp(deps: AppDeps): Express {
     sequelize,
     logger,
     mailer: deps.mailer ?? createMailer(env.smtp),
+    plannerPool: deps.plannerPool,
   };
   const store = deps.sessionStore ?? createSessionStore(sequelize, 0);
   const csrf = createCsrf(env);

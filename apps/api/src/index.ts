@@ -1,7 +1,8 @@
 /**
  * @seamwright/api — entry for scripts and tests.
  *
- * - `createApp({ env, sequelize, mailer?, logger?, sessionStore? })` → Express app (no listen)
+ * - `createApp({ env, sequelize, plannerPool, mailer?, logger?, sessionStore? })` → Express app
+ * - `new PlannerPool(env.planner)` → the layout planner's worker threads (close() when done)
  * - `loadEnv(source?)` → validated `Env`
  * - `createSequelize(env.db)` → Sequelize with every model registered
  * - `migrateDatabase(sequelize)` → applies pending migrations
@@ -12,6 +13,8 @@
 export { createApp } from './app.js';
 export type { AppDeps } from './app.js';
 export { loadEnv } from './config/env.js';
+export { PlannerPool } from './planner/planner-pool.js';
+export type { PlannerPoolConfig } from './planner/planner-pool.js';
 export type { Env } from './config/env.js';
 export { createSequelize } from './db/sequelize.js';
 export { migrateDatabase } from './db/migrate.js';

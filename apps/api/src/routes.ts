@@ -27,5 +27,5 @@ export function registerApiRoutes(
   registerCustomersRoutes(routes, deps);
   registerSitesRoutes(routes, deps);
   registerAuditRoutes(routes);
-  registerPlansRoutes(routes);
+  registerPlansRoutes(routes, deps);
 }

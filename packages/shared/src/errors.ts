@@ -25,6 +25,8 @@ export const ErrorCode = {
   HeadersTooLarge: 'HEADERS_TOO_LARGE',
   /** The request did not arrive in time. */
   RequestTimeout: 'REQUEST_TIMEOUT',
+  /** The server is busy (e.g. the layout planner's queue is full); try again after Retry-After. */
+  ServiceBusy: 'SERVICE_BUSY',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

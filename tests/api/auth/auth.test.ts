@@ -207,8 +207,8 @@ describe('sign-in, me and sign-out', () => {
   });
 
   it('counts failed sign-ins in the database, so a second API process sees the same limit', async () => {
-    const { app, sequelize } = testApp();
-    const secondProcess = createApp({ env: loadEnv(), sequelize });
+    const { app, sequelize, plannerPool } = testApp();
+    const secondProcess = createApp({ env: loadEnv(), sequelize, plannerPool });
     const owner = await signUpCompany(app);
     const first = await newClient(app);
     for (let i = 0; i < 5; i += 1)

@@ -1,4 +1,5 @@
 // The only file that reads process.env. Everything else receives a typed `Env`.
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const devSessionSecret = 'seamwright-dev-session-secret-not-for-production';
@@ -66,6 +67,12 @@ const envSchema = z
     INVITATION_MAILS_PER_COMPANY_PER_DAY: allowance(100),
     /** Serve sessions over https only (defaults to true in production). */
     COOKIE_SECURE: booleanish.optional(),
+    /** Layout-planner worker threads (default: one less than the cores, at least 1). */
+    PLANNER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+    /** Longest a planner task may run before it is stopped and answered 422. */
+    PLANNER_BUDGET_MS: z.coerce.number().int().min(50).max(600_000).default(5000),
+    /** Planner tasks allowed to wait for a thread; past it the API answers 503. */
+    PLANNER_MAX_QUEUE: z.coerce.number().int().min(0).max(10_000).optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV !== 'production') return;
@@ -114,6 +121,7 @@ export interface Env {
   cookieNames: { session: string; csrf: string };
   /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
   trustedOrigins: string[];
+  planner: { threads: number; budgetMs: number; maxQueue: number };
 }
 
 /** Allowed requests per window, per IP and per account (e-mail, token or user). */
@@ -165,6 +173,16 @@ function trustedOriginsFor(appUrl: string, nodeEnv: Env['nodeEnv']): string[] {
 function cookieNamesFor(appUrl: string, secure: boolean): Env['cookieNames'] {
   const prefix = secure && appUrl.startsWith('https:') ? '__Host-' : '';
   return { session: `${prefix}sw.sid`, csrf: `${prefix}sw.csrf` };
+}
+
+/** A queue of four tasks per thread keeps a burst waiting briefly instead of refused. */
+function plannerConfig(
+  threads: number | undefined,
+  budgetMs: number,
+  maxQueue: number | undefined,
+): Env['planner'] {
+  const count = threads ?? Math.max(1, availableParallelism() - 1);
+  return { threads: count, budgetMs, maxQueue: maxQueue ?? count * 4 };
 }
 
 /**
@@ -221,5 +239,6 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     cookieSecure,
     cookieNames: cookieNamesFor(appUrl, cookieSecure),
     trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
+    planner: plannerConfig(e.PLANNER_THREADS, e.PLANNER_BUDGET_MS, e.PLANNER_MAX_QUEUE),
   };
 }

@@ -22,6 +22,7 @@ export const statusByCode: Record<ErrorCode, number> = {
   UNSUPPORTED_MEDIA_TYPE: 415,
   HEADERS_TOO_LARGE: 431,
   REQUEST_TIMEOUT: 408,
+  SERVICE_BUSY: 503,
   INTERNAL: 500,
 };
 
@@ -43,6 +44,7 @@ const titles: Record<ErrorCode, string> = {
   UNSUPPORTED_MEDIA_TYPE: 'The request body is in a format the API does not read',
   HEADERS_TOO_LARGE: 'The request headers are too large',
   REQUEST_TIMEOUT: 'The request took too long',
+  SERVICE_BUSY: 'The server is busy; try again shortly',
   INTERNAL: 'Something went wrong on our side',
 };
 
