@@ -24,7 +24,7 @@ export interface AreaCandidate {
   /** Grain as reported (0–360 for a facing, as requested for a fixed grain). */
   readonly grainAngleDeg: number;
   readonly plan: LayoutPlan;
-  /** True when the reported grain is opposite to the plan's (corners are turned round). */
+  /** True when the grain runs opposite to the plan's cut corners (from 180° on). */
   readonly reversed: boolean;
   /** The area alone: the plan's own pieces. */
   readonly figures: Figures;
@@ -44,7 +44,9 @@ function candidateOf(
   plan: LayoutPlan,
   grainAngleDeg: number,
 ): AreaCandidate {
-  const reversed = Math.abs(normalizeDegrees(grainAngleDeg - plan.grainAngleDeg) - 180) < 1e-6;
+  // The single-area planner lays cuts out for the direction modulo 180° (the strips are
+  // the same both ways); a grain from 180° on runs the other way along them.
+  const reversed = normalizeDegrees(grainAngleDeg) >= 180;
   return {
     area,
     rollIndex,

@@ -39,8 +39,6 @@ export interface JobPacking {
 export interface PackVariant {
   readonly order: 'length' | 'width' | 'area';
   readonly split: 'full-length-right' | 'full-width-top';
-  /** New pieces in the item's own roll, or in this roll whenever the item fits it. */
-  readonly openIn: 'own' | number;
   /** Fill remnants before offcuts of new pieces, or simply the tightest fit. */
   readonly remnantsFirst: boolean;
   readonly useRemnants: boolean;
@@ -73,14 +71,6 @@ function orderOf(items: readonly PackJobItem[], order: PackVariant['order']): nu
     });
 }
 
-function openRoll(item: PackJobItem, stock: PackStock, openIn: PackVariant['openIn']): number {
-  if (openIn === 'own') return item.rollIndex;
-  const roll = stock.rolls[openIn];
-  const fits =
-    roll && item.acrossFt <= roll.widthFt + FIT_FT && item.alongFt <= roll.maxLengthFt + FIT_FT;
-  return fits ? openIn : item.rollIndex;
-}
-
 function pickRect(free: readonly FreeRect[], item: PackJobItem, remnantsFirst: boolean): number {
   let best = -1;
   let bestKey = [Infinity, Infinity];
@@ -101,7 +91,9 @@ function pickRect(free: readonly FreeRect[], item: PackJobItem, remnantsFirst: b
 /**
  * Packs every cut of a job into remnants and new full-width pieces: guillotine splits (each
  * placement cuts its free rectangle in two with one straight cut), cuts never turned (their
- * length runs along the piece's length), best-area fit. Deterministic for one variant.
+ * length runs along the piece's length), best-area fit. Any free space takes any cut that
+ * fits, whichever area it is from; a new piece is opened in the roll the cut's area is laid
+ * out for, as long as the cut. Deterministic for one variant.
  */
 export function packJob(
   items: readonly PackJobItem[],
@@ -125,7 +117,7 @@ export function packJob(
       rect = free[k] as FreeRect;
       free = free.filter((_, j) => j !== k);
     } else {
-      const rollIndex = openRoll(item, stock, variant.openIn);
+      const { rollIndex } = item;
       const widthFt = stock.rolls[rollIndex]?.widthFt ?? item.acrossFt;
       pieces.push({ kind: 'new', rollIndex, widthFt, lengthFt: item.alongFt });
       rect = { piece: pieces.length - 1, remnant: false, x: 0, y: 0, w: widthFt, h: item.alongFt };
@@ -171,14 +163,11 @@ function compact(pieces: PackedPiece[], placements: JobPlacement[]): JobPacking 
 }
 
 /**
- * Every variant worth trying for a stock: item orders × split rules × where new pieces open,
- * each with remnants first, with remnants at the tightest fit, and (so that listing remnants
+ * Every variant worth trying for a stock: item orders × split rules, each with remnants first, with remnants at the tightest fit, and (so that listing remnants
  * can never make a job worse) without remnants.
  */
 export function packVariants(stock: PackStock, useRemnants: boolean): PackVariant[] {
   const variants: PackVariant[] = [];
-  const opens: PackVariant['openIn'][] =
-    stock.rolls.length > 1 ? ['own', ...stock.rolls.map((_, i) => i)] : ['own'];
   const modes =
     useRemnants && stock.remnants.length > 0
       ? [
@@ -188,9 +177,8 @@ export function packVariants(stock: PackStock, useRemnants: boolean): PackVarian
         ]
       : [{ useRemnants: false, remnantsFirst: false }];
   for (const mode of modes)
-    for (const openIn of opens)
-      for (const order of ['length', 'width', 'area'] as const)
-        for (const split of ['full-length-right', 'full-width-top'] as const)
-          variants.push({ order, split, openIn, ...mode });
+    for (const order of ['length', 'width', 'area'] as const)
+      for (const split of ['full-length-right', 'full-width-top'] as const)
+        variants.push({ order, split, ...mode });
   return variants;
 }
