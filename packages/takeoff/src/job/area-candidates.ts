@@ -8,7 +8,7 @@ import { screenRange } from './screen-range.js';
 import type { JobArea, JobRequest } from './types.js';
 
 /** Most layouts per area and roll width handed to the job search. */
-const CANDIDATES_PER_ROLL = 3;
+const CANDIDATES_PER_ROLL = 4;
 
 /** A cut to place in the job's pieces: width across the grain, length along it. */
 export interface JobItem {
@@ -79,6 +79,9 @@ function layoutsFor(area: JobArea, request: LayoutRequest): { plan: LayoutPlan; 
     const found: { plan: LayoutPlan; angle: number }[] = [];
     const bestAngle = directed(best.grainAngleDeg);
     if (bestAngle !== null) found.push({ plan: best, angle: bestAngle });
+    // A facing also tries itself, so the range never plans worse than the facing alone.
+    if (grain.kind === 'facing')
+      found.push({ plan: fixed(request, grain.centreDeg), angle: grain.centreDeg });
     for (const other of best.alternatives) {
       const angle = directed(other.grainAngleDeg);
       if (angle !== null) found.push({ plan: fixed(request, angle), angle });

@@ -13,6 +13,8 @@ export interface JobEvaluation {
   /** True when the packing is each area's own pieces (the areas planned alone). */
   readonly alone: boolean;
   readonly figures: Figures;
+  /** Cuts from new pieces of another width than their area is laid out for (a tie-break). */
+  readonly mismatched: number;
 }
 
 const SQFT_TOLERANCE = 1e-6;
@@ -89,7 +91,11 @@ export class JobEvaluator {
         buttFt: 0,
       }),
     };
-    const evaluation = { choice: [...choice], candidates, packing, alone, figures };
+    const mismatched = items.filter((item, i) => {
+      const piece = packing.pieces[packing.placements[i]?.piece ?? -1];
+      return piece?.kind === 'new' && piece.rollIndex !== item.rollIndex;
+    }).length;
+    const evaluation = { choice: [...choice], candidates, packing, alone, figures, mismatched };
     this.memo.set(key, evaluation);
     return evaluation;
   }

@@ -24,7 +24,7 @@ function readRolls(value: unknown, lengthStepFt: number): JobRoll[] {
   const list = requireArray('rolls', value);
   if (list.length === 0) throw new LayoutInputError('rolls', 'needs at least one roll');
   if (list.length > MAX_JOB_ROLLS)
-    throw new LayoutInputError('rolls', `has more than ${MAX_JOB_ROLLS} rolls`);
+    throw new LayoutInputError('rolls', `must have at most ${MAX_JOB_ROLLS} rolls`);
   const rolls = list.map((item, i): JobRoll => {
     const roll = requireRecord(`rolls[${i}]`, item);
     const widthFt = readNumber(`rolls[${i}].widthFt`, roll.widthFt, { positive: true });
@@ -54,7 +54,7 @@ function readRemnants(value: unknown): JobRemnant[] {
   if (value === undefined || value === null) return [];
   const list = requireArray('remnants', value);
   if (list.length > MAX_JOB_REMNANTS)
-    throw new LayoutInputError('remnants', `has more than ${MAX_JOB_REMNANTS} remnants`);
+    throw new LayoutInputError('remnants', `must have at most ${MAX_JOB_REMNANTS} remnants`);
   const remnants = list.map((item, i): JobRemnant => {
     const remnant = requireRecord(`remnants[${i}]`, item);
     return {
@@ -116,9 +116,9 @@ function readArea(
     lengthStepFt: job.lengthStepFt,
     trimAllowanceFt: record.trimAllowanceFt ?? job.trimAllowanceFt,
   };
+  const id = readId(`areas[${index}].id`, record.id, `area-${index + 1}`);
   try {
-    const request = parseLayoutRequest(single);
-    return { id: readId(`areas[${index}].id`, record.id, `area-${index + 1}`), request, grain };
+    return { id, request: parseLayoutRequest(single), grain };
   } catch (error) {
     if (!(error instanceof LayoutInputError)) throw error;
     throw new LayoutInputError(jobPath(error.path, index, narrowest), error.detail);
@@ -141,7 +141,7 @@ export function parseJobRequest(json: unknown): JobRequest {
   const list = requireArray('areas', body.areas);
   if (list.length === 0) throw new LayoutInputError('areas', 'needs at least one area');
   if (list.length > MAX_JOB_AREAS)
-    throw new LayoutInputError('areas', `has more than ${MAX_JOB_AREAS} areas`);
+    throw new LayoutInputError('areas', `must have at most ${MAX_JOB_AREAS} areas`);
   const rolls = readRolls(body.rolls, lengthStepFt);
   const areas = list.map((item, i) => readArea(item, i, { rolls, lengthStepFt, trimAllowanceFt }));
   areas.forEach((area, i) => {
@@ -154,7 +154,7 @@ export function parseJobRequest(json: unknown): JobRequest {
     0,
   );
   if (points > MAX_RING_POINTS)
-    throw new LayoutInputError('areas', `have more than ${MAX_RING_POINTS} points in all`);
+    throw new LayoutInputError('areas', `must have at most ${MAX_RING_POINTS} points in all`);
   return {
     areas,
     rolls,

@@ -9,7 +9,9 @@ const EXHAUSTIVE_CHOICES = 64;
 const MAX_PASSES = 6;
 
 function better(a: JobEvaluation, b: JobEvaluation, costs: JobCosts | undefined): boolean {
-  return compareFigures(a.figures, b.figures, costs) < 0;
+  const order = compareFigures(a.figures, b.figures, costs);
+  // At equal figures, prefer areas whose cuts come from pieces of the width they are laid out for.
+  return order < 0 || (order === 0 && a.mismatched < b.mismatched);
 }
 
 function exhaustive(
