@@ -52,12 +52,17 @@ export class JobEvaluator {
   private readonly memo = new Map<string, JobEvaluation>();
   private readonly variants: PackVariant[];
 
+  /**
+   * With `withoutRemnants` (an evaluator of the same lists that ignores remnants), remnants
+   * are used and its packing of each choice competes too, so listing remnants never makes a
+   * choice worse; without it, remnants are ignored.
+   */
   constructor(
     private readonly lists: readonly (readonly AreaCandidate[])[],
     private readonly stock: PackStock,
-    useRemnants: boolean,
+    private readonly withoutRemnants?: JobEvaluator,
   ) {
-    this.variants = packVariants(stock, useRemnants);
+    this.variants = packVariants(stock, withoutRemnants !== undefined);
   }
 
   /** How many choices were packed so far. */
@@ -73,8 +78,9 @@ export class JobEvaluator {
     const items: PackJobItem[] = candidates.flatMap((candidate) =>
       candidate.items.map((item) => ({ ...item, rollIndex: candidate.rollIndex })),
     );
-    let packing = alonePacking(candidates);
-    let alone = true;
+    const plain = this.withoutRemnants?.evaluate(choice);
+    let packing = plain ? plain.packing : alonePacking(candidates);
+    let alone = plain ? plain.alone : true;
     for (const variant of this.variants) {
       const packed = packJob(items, this.stock, variant);
       if (betterPacking(packed, packing)) {

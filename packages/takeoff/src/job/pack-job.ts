@@ -163,8 +163,8 @@ function compact(pieces: PackedPiece[], placements: JobPlacement[]): JobPacking 
 }
 
 /**
- * Every variant worth trying for a stock: item orders × split rules, each with remnants first, with remnants at the tightest fit, and (so that listing remnants
- * can never make a job worse) without remnants.
+ * Every variant worth trying for a stock: item orders × split rules, with remnants (filled
+ * first, or at the tightest fit) or without them.
  */
 export function packVariants(stock: PackStock, useRemnants: boolean): PackVariant[] {
   const variants: PackVariant[] = [];
@@ -173,7 +173,6 @@ export function packVariants(stock: PackStock, useRemnants: boolean): PackVarian
       ? [
           { useRemnants: true, remnantsFirst: true },
           { useRemnants: true, remnantsFirst: false },
-          { useRemnants: false, remnantsFirst: false },
         ]
       : [{ useRemnants: false, remnantsFirst: false }];
   for (const mode of modes)

@@ -19,12 +19,12 @@ export function planJob(job: JobRequest): JobPlan {
   const lists = areaCandidates(job);
   const alone = lists.map(() => 0);
   const stock: PackStock = { rolls: job.rolls, remnants: job.remnants };
-  const plain = new JobEvaluator(lists, stock, false);
+  const plain = new JobEvaluator(lists, stock);
   let evaluator = plain;
   let best = searchJob(lists, plain, job.costs, alone);
   if (job.remnants.length > 0) {
     // Starting from the best plan without remnants keeps the result at least as good.
-    evaluator = new JobEvaluator(lists, stock, true);
+    evaluator = new JobEvaluator(lists, stock, plain);
     best = searchJob(lists, evaluator, job.costs, best.choice);
   }
   const alternatives = jobAlternatives(lists, evaluator, job);

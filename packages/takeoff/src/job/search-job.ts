@@ -7,6 +7,8 @@ import type { JobCosts } from './types.js';
 const EXHAUSTIVE_CHOICES = 64;
 /** Passes of the one-area-at-a-time search before it stops (it usually settles in two). */
 const MAX_PASSES = 6;
+/** Most choices one search packs before it stops improving (bounds big jobs; deterministic). */
+const MAX_EVALUATIONS = 160;
 
 function better(a: JobEvaluation, b: JobEvaluation, costs: JobCosts | undefined): boolean {
   const order = compareFigures(a.figures, b.figures, costs);
@@ -43,17 +45,18 @@ function descend(
   start: readonly number[],
 ): JobEvaluation {
   let best = evaluator.evaluate(start);
+  const budget = evaluator.evaluated + MAX_EVALUATIONS;
   for (let pass = 0; pass < MAX_PASSES; pass += 1) {
     const before = best;
     lists.forEach((list, area) => {
       const base = best.choice;
       list.forEach((_, option) => {
-        if (option === base[area]) return;
+        if (option === base[area] || evaluator.evaluated >= budget) return;
         const next = evaluator.evaluate(base.map((c, a) => (a === area ? option : c)));
         if (better(next, best, costs)) best = next;
       });
     });
-    if (best === before) break;
+    if (best === before || evaluator.evaluated >= budget) break;
   }
   return best;
 }
@@ -66,7 +69,7 @@ export function choiceCount(lists: readonly (readonly AreaCandidate[])[]): numbe
 /**
  * Picks one layout per area for the job. Small jobs try every choice; larger ones change one
  * area at a time from `start` (the areas alone, or the best without remnants) while that
- * helps. Deterministic: ties keep the earlier choice.
+ * helps, packing at most a fixed number of choices. Deterministic: ties keep the earlier choice.
  */
 export function searchJob(
   lists: readonly (readonly AreaCandidate[])[],
