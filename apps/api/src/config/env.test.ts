@@ -93,7 +93,8 @@ describe('loadEnv outside production', () => {
     expect(
       loadEnv({ NODE_ENV: 'development', APP_URL: 'https://dev.example.test' }).trustedOrigins,
     ).toEqual(['https://dev.example.test', 'http://127.0.0.1:5173', 'http://localhost:5173']);
-import { availableParallelism } from 'node:os';
+  });
+});
 
 describe('loadEnv planner settings', () => {
   it('defaults to one thread less than the cores, a 5 s budget and four waiting tasks per thread', () => {
