@@ -156,7 +156,12 @@ describe('password reset timing', () => {
       },
       close: () => undefined,
     };
-    const app = createApp({ env: loadEnv(), sequelize, mailer: stuckMailer });
+    const app = createApp({
+      env: loadEnv(),
+      sequelize,
+      mailer: stuckMailer,
+      plannerPool: testApp().plannerPool,
+    });
     const owner = await signUpCompany(app);
     const client = await newClient(app);
     const known = await client

@@ -22,7 +22,7 @@ interface Answer {
 /** An app like the suite's, with the given limits lowered and client IPs taken from the proxy header. */
 function appWith(overrides: Record<string, string>): App {
   const env = loadEnv({ ...process.env, TRUST_PROXY: '1', ...overrides });
-  return createApp({ env, sequelize: testApp().sequelize });
+  return createApp({ env, sequelize: testApp().sequelize, plannerPool: testApp().plannerPool });
 }
 
 function freshIp(): string {

@@ -1,6 +1,6 @@
 // An app whose log lines are kept in memory, for tests that read what the API logs.
 import { Writable } from 'node:stream';
-import { createApp, createLogger, createSequelize, loadEnv } from '@seamwright/api';
+import { PlannerPool, createApp, createLogger, createSequelize, loadEnv } from '@seamwright/api';
 import type { App } from '../../fixtures/app.js';
 
 export interface LoggedApp {
@@ -20,6 +20,11 @@ export function createLoggedApp(level: 'info' | 'error'): LoggedApp {
   });
   const env = loadEnv();
   const sequelize = createSequelize(env.db);
-  const app = createApp({ env, sequelize, logger: createLogger(level, sink) });
-  return { app, output: () => lines.join(''), close: () => sequelize.close() };
+  const plannerPool = new PlannerPool(env.planner);
+  const app = createApp({ env, sequelize, logger: createLogger(level, sink), plannerPool });
+  const close = async () => {
+    await plannerPool.close();
+    await sequelize.close();
+  };
+  return { app, output: () => lines.join(''), close };
 }

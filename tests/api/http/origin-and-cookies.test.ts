@@ -76,7 +76,7 @@ describe('cookies in production', () => {
     TRUST_PROXY: '1',
   });
   const sequelize = createSequelize(env.db);
-  const app = createApp({ env, sequelize });
+  const app = createApp({ env, sequelize, plannerPool: testApp().plannerPool });
 
   afterAll(async () => {
     await sequelize.close();

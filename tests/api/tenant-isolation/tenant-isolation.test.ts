@@ -242,6 +242,29 @@ const probes: Record<string, Probe> = {
       await b.post('/api/plans/preview', body).expect(200);
     },
   },
+  'post /api/plans/job-preview': {
+    kind: 'tenant',
+    run: async (b) => {
+      // Stateless computation: reads and writes no company rows.
+      const body = {
+        areas: [
+          {
+            id: 'front',
+            area: {
+              outer: [
+                [0, 0],
+                [12, 0],
+                [12, 10],
+                [0, 10],
+              ],
+            },
+          },
+        ],
+        rolls: [{ widthFt: 12 }],
+      };
+      await b.post('/api/plans/job-preview', body).expect(200);
+    },
+  },
   'get /api/audit-events': {
     kind: 'tenant',
     run: async (b, w) => {

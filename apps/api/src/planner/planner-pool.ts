@@ -3,10 +3,10 @@
 // goes through planLayout() here, so one slow request can never stall the API.
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
-import { LayoutInputError, checkLayoutRequestSize } from '@seamwright/takeoff';
-import type { LayoutPlan } from '@seamwright/takeoff';
+import { LayoutInputError, checkJobRequestSize, checkLayoutRequestSize } from '@seamwright/takeoff';
+import type { JobPlan, LayoutPlan } from '@seamwright/takeoff';
 import { AppError } from '../errors.js';
-import type { PlanOutcome, PlanTask } from './planner-task.js';
+import type { PlanKind, PlanOutcome, PlanTask } from './planner-task.js';
 
 export interface PlannerPoolConfig {
   /** Worker threads. */
@@ -119,6 +119,24 @@ export class PlannerPool {
   async planLayout(body: unknown, options: { budgetMs?: number } = {}): Promise<LayoutPlan> {
     // Array lengths only: an oversize request never takes a thread or a queue place.
     checkLayoutRequestSize(body);
+    // The worker answers each kind with that kind's plan.
+    return (await this.#run('layout', body, options)) as LayoutPlan;
+  }
+
+  /**
+   * Validates and plans a job (several areas together, plan-job's contract) in a worker
+   * thread, with the same errors, budget and queue as {@link planLayout}.
+   */
+  async planJob(body: unknown, options: { budgetMs?: number } = {}): Promise<JobPlan> {
+    checkJobRequestSize(body);
+    return (await this.#run('job', body, options)) as JobPlan;
+  }
+
+  async #run(
+    kind: PlanKind,
+    body: unknown,
+    options: { budgetMs?: number },
+  ): Promise<LayoutPlan | JobPlan> {
     if (this.#closed || this.#inFlight >= this.config.threads + this.config.maxQueue)
       throw this.#busy();
     const budgetMs = options.budgetMs ?? this.config.budgetMs;
@@ -134,7 +152,7 @@ export class PlannerPool {
     this.#inFlight += 1;
     try {
       const outcome = await this.#pool().run(
-        { body, startedPort: port2 },
+        { kind, body, startedPort: port2 },
         { signal: controller.signal, transferList: [port2] },
       );
       if (!outcome.ok)

@@ -1,11 +1,12 @@
 // Public surface of the job planner (several areas, shared offcuts, remnants, roll widths).
 export { planJob } from './plan-job.js';
+export { parseJobRequest } from './parse-job-request.js';
 export {
-  parseJobRequest,
+  checkJobRequestSize,
   MAX_JOB_AREAS,
   MAX_JOB_REMNANTS,
   MAX_JOB_ROLLS,
-} from './parse-job-request.js';
+} from './job-limits.js';
 export { FACING_DEGREES } from './grain-facing.js';
 export type {
   CompassFacing,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { LayoutInputError } from '../layout/errors.js';
-import { MAX_JOB_AREAS, parseJobRequest } from './parse-job-request.js';
+import { MAX_JOB_AREAS } from './job-limits.js';
+import { parseJobRequest } from './parse-job-request.js';
 
 type Json = Record<string, unknown>;
 

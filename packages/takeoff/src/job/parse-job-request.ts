@@ -1,9 +1,6 @@
 import { LayoutInputError } from '../layout/errors.js';
-import {
-  DEFAULT_MAX_LENGTH_FT,
-  MAX_RING_POINTS,
-  parseLayoutRequest,
-} from '../layout/parse-request.js';
+import { MAX_TOTAL_VERTICES } from '../layout/limits.js';
+import { DEFAULT_MAX_LENGTH_FT, parseLayoutRequest } from '../layout/parse-request.js';
 import {
   readNumber,
   readOptionalNumber,
@@ -11,14 +8,13 @@ import {
   requireRecord,
 } from '../layout/read-fields.js';
 import { readJobGrain } from './grain-facing.js';
+import {
+  MAX_JOB_AREAS,
+  MAX_JOB_REMNANTS,
+  MAX_JOB_ROLLS,
+  checkJobRequestSize,
+} from './job-limits.js';
 import type { JobArea, JobCosts, JobRemnant, JobRequest, JobRoll } from './types.js';
-
-/** Most areas in one job. */
-export const MAX_JOB_AREAS = 20;
-/** Most roll widths one job may offer (each multiplies the planning work). */
-export const MAX_JOB_ROLLS = 6;
-/** Most remnants one job may list. */
-export const MAX_JOB_REMNANTS = 100;
 
 function readRolls(value: unknown, lengthStepFt: number): JobRoll[] {
   const list = requireArray('rolls', value);
@@ -132,6 +128,8 @@ function readArea(
  * is one line. Each area is checked by the single-area parser.
  */
 export function parseJobRequest(json: unknown): JobRequest {
+  // Array lengths first: an oversize job is refused before any ring is read.
+  checkJobRequestSize(json);
   const body = requireRecord('request', json);
   const lengthStepFt =
     readOptionalNumber('lengthStepFt', body.lengthStepFt, { positive: true }) ?? 1;
@@ -153,8 +151,9 @@ export function parseJobRequest(json: unknown): JobRequest {
     (sum, area) => sum + area.request.area.outer.length + area.request.area.holes.flat().length,
     0,
   );
-  if (points > MAX_RING_POINTS)
-    throw new LayoutInputError('areas', `must have at most ${MAX_RING_POINTS} points in all`);
+  // (checkJobRequestSize counted array lengths; this counts points after closing points go.)
+  if (points > MAX_TOTAL_VERTICES)
+    throw new LayoutInputError('areas', `must have at most ${MAX_TOTAL_VERTICES} points in all`);
   return {
     areas,
     rolls,

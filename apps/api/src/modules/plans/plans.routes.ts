@@ -1,6 +1,6 @@
 import type { ServiceDeps } from '../../deps.js';
 import type { RouteTable } from '../../http/route-table.js';
-import { previewPlanHandler } from './plans.handlers.js';
+import { previewJobPlanHandler, previewPlanHandler } from './plans.handlers.js';
 
 export function registerPlansRoutes(routes: RouteTable, deps: ServiceDeps): void {
   routes.add(
@@ -8,5 +8,11 @@ export function registerPlansRoutes(routes: RouteTable, deps: ServiceDeps): void
     '/plans/preview',
     { access: 'tenant', permission: 'plans.preview' },
     previewPlanHandler(deps.plannerPool),
+  );
+  routes.add(
+    'post',
+    '/plans/job-preview',
+    { access: 'tenant', permission: 'plans.preview' },
+    previewJobPlanHandler(deps.plannerPool),
   );
 }

@@ -1,7 +1,7 @@
-// Layout preview: the planner validates and plans the request in the planner pool's worker
+// Layout and job previews: the planner validates and plans the request in the planner pool's worker
 // threads. Nothing is stored; the plan depends only on the request.
 import { LayoutInputError } from '@seamwright/takeoff';
-import type { LayoutPlan } from '@seamwright/takeoff';
+import type { JobPlan, LayoutPlan } from '@seamwright/takeoff';
 import { AppError } from '../../errors.js';
 import type { PlannerPool } from '../../planner/planner-pool.js';
 
@@ -20,6 +20,16 @@ export function layoutInputProblem(error: LayoutInputError): AppError {
 export async function previewPlan(pool: PlannerPool, body: unknown): Promise<LayoutPlan> {
   try {
     return await pool.planLayout(body);
+  } catch (error) {
+    if (error instanceof LayoutInputError) throw layoutInputProblem(error);
+    throw error;
+  }
+}
+
+/** Several areas of one job planned together (plan-job's contract), through the same pool. */
+export async function previewJobPlan(pool: PlannerPool, body: unknown): Promise<JobPlan> {
+  try {
+    return await pool.planJob(body);
   } catch (error) {
     if (error instanceof LayoutInputError) throw layoutInputProblem(error);
     throw error;
