@@ -19,7 +19,7 @@ import { sessionCan } from './guard';
 export async function loader() {
   if (await sessionCan('members.read')) {
     await Promise.all([
-      queryClient.ensureQueryData(membersQueryOptions()),
+      queryClient.ensureInfiniteQueryData(membersQueryOptions()),
       queryClient.ensureQueryData(invitationsQueryOptions()),
     ]);
   }
