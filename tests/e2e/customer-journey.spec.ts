@@ -235,6 +235,8 @@ test('someone in two companies switches between them and sees only the active on
 
   await sidebar.getByText('Switch company').click();
   await sidebar.getByRole('button', { name: new RegExp(secondCompanyName) }).click();
+  // A switch ends on Today; clicking on before it lands would be overtaken by that move.
+  await expect(page).toHaveTitle('Today · Seamwright');
   await rail(page).getByRole('link', { name: 'Customers' }).click();
   await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
   await expect(page.getByRole('link', { name: customerName })).toHaveCount(0);

@@ -8,6 +8,7 @@ import {
   acceptInvitation,
   emailFor,
   invite,
+  password,
   rail,
   runStamp,
   signUpCompany,
@@ -19,6 +20,14 @@ test.describe.configure({ mode: 'serial' });
 const ownerEmail = emailFor('owner-focus');
 const officeEmail = emailFor('office-focus');
 const companyName = `Wicken Fields ${runStamp}`;
+
+async function signIn(page: Page): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(ownerEmail);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveTitle('Today · Seamwright');
+}
 
 /** The computed outline of the element that has focus now. */
 function focusOutline(page: Page) {
@@ -69,10 +78,7 @@ test('pages name the tab and take focus at their heading; the rail shows focus i
 test('an archived customer keeps a Restore after the toast, and Delete hands focus back on cancel', async ({
   page,
 }) => {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(ownerEmail);
-  await page.getByLabel('Password').fill('long-enough-pass-2026');
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await signIn(page);
   await page.goto('/customers/new');
   await page.getByRole('form', { name: 'Save customer' }).getByLabel('Name').fill('Orrin Dell');
   await page.getByRole('button', { name: 'Save customer' }).click();
@@ -97,6 +103,27 @@ test('an archived customer keeps a Restore after the toast, and Delete hands foc
   await page.getByRole('button', { name: 'Cancel' }).click();
   await expect(edit).toBeFocused();
 
+  // More sites than one page: the list says how many there are and brings in the rest.
+  const customerId = new URL(page.url()).pathname.split('/').pop() ?? '';
+  const csrf = (await (await page.request.get('/api/auth/csrf')).json()) as {
+    data: { token: string };
+  };
+  for (let n = 1; n <= 101; n++) {
+    const created = await page.request.post(`/api/customers/${customerId}/sites`, {
+      data: { addressLine1: `${n} Tern Row`, city: 'Ashvale' },
+      headers: { 'x-csrf-token': csrf.data.token },
+    });
+    expect(created.status()).toBe(201);
+  }
+  await page.reload();
+  await expect(page.getByText('Showing 100 of 101 sites')).toBeVisible();
+  await expect(page.getByRole('heading', { level: 3 })).toHaveCount(100);
+  await page.getByText('Showing 100 of 101 sites').scrollIntoViewIfNeeded();
+  await page.screenshot({ path: '../.tmp/screens/sites-show-more-desktop.png' });
+  await page.getByRole('button', { name: 'Show 1 more' }).click();
+  await expect(page.getByText('All 101 sites shown')).toBeFocused();
+  await expect(page.getByRole('heading', { level: 3, name: '101 Tern Row' })).toBeVisible();
+
   const remove = page.getByRole('button', { name: 'Delete', exact: true });
   await remove.focus();
   await remove.press('Enter');
@@ -108,10 +135,7 @@ test('an archived customer keeps a Restore after the toast, and Delete hands foc
 });
 
 test('a role change is sent only on Save', async ({ browser, page }) => {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(ownerEmail);
-  await page.getByLabel('Password').fill('long-enough-pass-2026');
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await signIn(page);
   await page.goto('/settings');
   await invite(page, officeEmail, 'Office');
   const context = await browser.newContext({ bypassCSP: true });
@@ -130,7 +154,7 @@ test('a role change is sent only on Save', async ({ browser, page }) => {
       patches.push(request.url());
     }
   });
-  const role = page.getByLabel('Role of Bram Oakes');
+  const role = page.getByLabel('Role of Bram Oakes', { exact: true });
   await expect(role).toHaveValue('office');
   // Arrow keys step through the roles; none of those steps is a change of role yet.
   await role.focus();

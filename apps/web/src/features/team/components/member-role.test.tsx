@@ -39,7 +39,9 @@ describe('MemberRole', () => {
     expect(screen.queryByRole('button', { name: /Save role/ })).toBeNull();
 
     select('office');
-    fireEvent.click(screen.getByRole('button', { name: 'Keep Tamsin Orlov as crew lead' }));
+    fireEvent.click(
+      screen.getByRole('button', { name: 'Cancel the role change for Tamsin Orlov' }),
+    );
     expect(screen.getByLabelText<HTMLSelectElement>('Role of Tamsin Orlov').value).toBe(
       'crew_lead',
     );

@@ -53,7 +53,7 @@ export function MemberRole({ member, isSelf, isSaving, onSave }: MemberRoleProps
             variant="quiet"
             disabled={isSaving}
             onClick={() => setDraft(member.role)}
-            aria-label={`Keep ${member.name} as ${roleLabels[member.role].toLowerCase()}`}
+            aria-label={`Cancel the role change for ${member.name}`}
           >
             Cancel
           </Button>
