@@ -120,6 +120,10 @@ test('an archived customer keeps a Restore after the toast, and Delete hands foc
   await expect(page.getByRole('heading', { level: 3 })).toHaveCount(100);
   await page.getByText('Showing 100 of 101 sites').scrollIntoViewIfNeeded();
   await page.screenshot({ path: '../.tmp/screens/sites-show-more-desktop.png' });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.getByText('Showing 100 of 101 sites').scrollIntoViewIfNeeded();
+  await page.screenshot({ path: '../.tmp/screens/sites-show-more-phone.png' });
+  await page.setViewportSize({ width: 1280, height: 800 });
   await page.getByRole('button', { name: 'Show 1 more' }).click();
   await expect(page.getByText('All 101 sites shown')).toBeFocused();
   await expect(page.getByRole('heading', { level: 3, name: '101 Tern Row' })).toBeVisible();
@@ -165,6 +169,10 @@ test('a role change is sent only on Save', async ({ browser, page }) => {
   expect(patches).toEqual([]);
   await expectAccessible(page, 'Team with an unsaved role change');
   await page.screenshot({ path: '../.tmp/screens/role-save-desktop.png', fullPage: true });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await role.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: '../.tmp/screens/role-save-phone.png' });
+  await page.setViewportSize({ width: 1280, height: 800 });
 
   await page.getByRole('button', { name: 'Save role of Bram Oakes' }).click();
   await expect(page.getByText('Bram Oakes is now bookkeeper.')).toBeVisible();
