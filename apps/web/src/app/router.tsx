@@ -1,8 +1,19 @@
 import { createBrowserRouter, Outlet } from 'react-router-dom';
+import { FocusOnNavigate } from '../components/ui/route-focus';
 import { Loading } from '../components/ui/loading';
 import { paths, publicPathPrefixes } from '../config/paths';
 import { setCompanyAccessEndedHandler, setUnauthenticatedHandler } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
+
+/** Every page, signed in or not: focus follows navigation to the new page's heading. */
+function RootLayout() {
+  return (
+    <>
+      <FocusOnNavigate />
+      <Outlet />
+    </>
+  );
+}
 
 /**
  * Every page is a lazy route, so the sign-in page loads only what it needs. Route modules
@@ -11,7 +22,7 @@ import { queryClient } from '../lib/query-client';
 export const router = createBrowserRouter([
   {
     id: 'root',
-    Component: Outlet,
+    Component: RootLayout,
     HydrateFallback: () => <Loading />,
     children: [
       { path: '/sign-in', lazy: () => import('./routes/sign-in') },

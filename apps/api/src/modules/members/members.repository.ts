@@ -4,25 +4,38 @@ import { MembershipModel, UserModel } from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 
-export async function listMembers(ctx: RequestContext) {
-  const memberships = await scoped(ctx, MembershipModel).findAll({
-    order: [
-      ['createdAt', 'ASC'],
-      ['id', 'ASC'],
-    ],
-  });
-  const users = memberships.length
+/** One page of the company's members, oldest first, with their names; `where` narrows to one. */
+export async function listMembers(
+  ctx: RequestContext,
+  page: { limit: number; offset: number },
+  where: { id?: string } = {},
+) {
+  const memberships = scoped(ctx, MembershipModel);
+  const [rows, total] = await Promise.all([
+    memberships.findAll({
+      where,
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      limit: page.limit,
+      offset: page.offset,
+    }),
+    memberships.count(where),
+  ]);
+  const users = rows.length
     ? await UserModel.findAll({
-        where: { id: memberships.map((m) => m.userId) },
+        where: { id: rows.map((m) => m.userId) },
         attributes: ['id', 'name', 'email'],
       })
     : [];
   const byId = new Map(users.map((u) => [u.id, u]));
-  return memberships.map((m) => ({
+  const members = rows.map((m) => ({
     ...m,
     name: byId.get(m.userId)?.name ?? '',
     email: byId.get(m.userId)?.email ?? '',
   }));
+  return { rows: members, total };
 }
 
 export function findMember(ctx: RequestContext, id: string, tx: Tx) {

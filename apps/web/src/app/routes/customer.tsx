@@ -17,7 +17,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
   const id = params.customerId ?? '';
   await Promise.all([
     queryClient.ensureQueryData(customerQueryOptions(id)),
-    queryClient.ensureQueryData(sitesQueryOptions(id)),
+    queryClient.ensureInfiniteQueryData(sitesQueryOptions(id)),
   ]);
   return null;
 }

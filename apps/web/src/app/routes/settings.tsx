@@ -21,7 +21,7 @@ export async function loader() {
   if (await sessionCan('company.manage')) void queryClient.prefetchQuery(companyQueryOptions());
   if (await sessionCan('members.read')) {
     await Promise.all([
-      queryClient.ensureQueryData(membersQueryOptions()),
+      queryClient.ensureInfiniteQueryData(membersQueryOptions()),
       queryClient.ensureQueryData(invitationsQueryOptions()),
     ]);
   }
