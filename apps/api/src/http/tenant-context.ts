@@ -5,7 +5,10 @@ import type { Action } from '@seamwright/shared';
 import { can } from '@seamwright/shared';
 import type { RequestContext } from '../context.js';
 import { AppError } from '../errors.js';
-import { findFirstMembershipOfUser, findMembershipOfUser } from '../modules/me/me.repository.js';
+import {
+  unsafeFindFirstMembershipOfUser,
+  unsafeFindMembershipOfUser,
+} from '../modules/me/me.repository.js';
 import { saveSession } from './session.js';
 
 declare global {
@@ -21,10 +24,10 @@ declare global {
 export const requireTenant: RequestHandler = async (req, _res, next) => {
   const { userId, companyId } = req.session;
   if (!userId || !companyId) return next(new AppError('UNAUTHENTICATED', 'Sign in to continue'));
-  let membership = await findMembershipOfUser(userId, companyId);
+  let membership = await unsafeFindMembershipOfUser(userId, companyId);
   if (!membership) {
     // Removed from the active company: fall back to another company they still belong to.
-    membership = await findFirstMembershipOfUser(userId);
+    membership = await unsafeFindFirstMembershipOfUser(userId);
     if (!membership) {
       await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
       return next(new AppError('UNAUTHENTICATED', 'Your access to this company has ended'));

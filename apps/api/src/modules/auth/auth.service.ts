@@ -8,7 +8,7 @@ import { passwordResetMail } from '../../mail/templates.js';
 import { hashPassword, verifyAgainstDecoy, verifyPassword } from '../../passwords.js';
 import { createOneTimeToken, hashToken } from '../../tokens.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
-import { findFirstMembershipOfUser } from '../me/me.repository.js';
+import { unsafeFindFirstMembershipOfUser } from '../me/me.repository.js';
 import {
   addMembership,
   createCompany,
@@ -75,7 +75,7 @@ export function createAuthService(deps: ServiceDeps) {
       ? await verifyPassword(input.password, user.passwordHash)
       : await verifyAgainstDecoy(input.password);
     if (!user || !isValid) throw new AppError('INVALID_CREDENTIALS', 'E-mail or password is wrong');
-    const membership = await findFirstMembershipOfUser(user.id);
+    const membership = await unsafeFindFirstMembershipOfUser(user.id);
     if (!membership)
       throw new AppError('FORBIDDEN', 'This account no longer belongs to any company');
     return { userId: user.id, companyId: membership.companyId };
