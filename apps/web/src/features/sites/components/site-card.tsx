@@ -18,12 +18,19 @@ function Line({ label, value }: { label: string; value: string | null }) {
   );
 }
 
+interface SiteCardProps {
+  site: SiteView;
+  canWrite: boolean;
+  /** Called after the site is deleted (see `SitesPanel`'s `onSitesChanged`). */
+  onDeleted: () => Promise<unknown>;
+}
+
 /** One site: where it is, what the crew must know, and edit/delete for those who may. */
-export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean }) {
+export function SiteCard({ site, canWrite, onDeleted }: SiteCardProps) {
   const [isEditing, setIsEditing] = useState(false);
   const [isConfirming, setIsConfirming] = useState(false);
   const update = useUpdateSite(site.customerId, site.id);
-  const remove = useDeleteSite(site.customerId, site.id);
+  const remove = useDeleteSite(site.customerId, site.id, onDeleted);
   const toast = useToast();
   const title = site.label ?? site.addressLine1;
 

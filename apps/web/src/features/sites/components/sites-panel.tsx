@@ -7,10 +7,17 @@ import { useCreateSite } from '../api/create-site';
 import { SiteCard } from './site-card';
 import { SiteForm } from './site-form';
 
+interface SitesPanelProps {
+  customerId: string;
+  canWrite: boolean;
+  /** Called after a site is added or deleted, for the route to refresh other features' data. */
+  onSitesChanged: () => Promise<unknown>;
+}
+
 /** A customer's sites: the list and the "Add a site" form. */
-export function SitesPanel({ customerId, canWrite }: { customerId: string; canWrite: boolean }) {
+export function SitesPanel({ customerId, canWrite, onSitesChanged }: SitesPanelProps) {
   const sites = useSites(customerId);
-  const create = useCreateSite(customerId);
+  const create = useCreateSite(customerId, onSitesChanged);
   const toast = useToast();
   const [isAdding, setIsAdding] = useState(false);
 
@@ -49,7 +56,7 @@ export function SitesPanel({ customerId, canWrite }: { customerId: string; canWr
       ) : (
         <ul className="flex flex-col gap-3">
           {sites.map((site) => (
-            <SiteCard key={site.id} site={site} canWrite={canWrite} />
+            <SiteCard key={site.id} site={site} canWrite={canWrite} onDeleted={onSitesChanged} />
           ))}
         </ul>
       )}
