@@ -9,6 +9,7 @@ import { PasswordResetModel } from './password-reset.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { UserModel } from './user.model.js';
+import { guardTenantModels } from '../tenant-guard.js';
 // JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
 import tenantModelList from './tenant-models.json';
 
@@ -38,8 +39,9 @@ const allModels = [
 
 /**
  * The models whose rows belong to one company (they carry company_id). Lint allows them to be
- * queried only through `scoped(ctx, Model)` or in an `unsafe…` function; a unit test checks the
- * list against the models' attributes.
+ * queried only through `scoped(ctx, Model)` or in an `unsafe…` function, and a hook refuses an
+ * unscoped statement at run time (tenant-guard.ts); a unit test checks the list against the
+ * models' attributes.
  */
 export const tenantModelNames: readonly string[] = tenantModelList;
 
@@ -49,4 +51,5 @@ export const tenantModels: readonly ModelStatic<Model>[] = allModels.filter((mod
 
 export function initModels(sequelize: Sequelize): void {
   for (const model of allModels) model.initModel(sequelize);
+  guardTenantModels(tenantModels);
 }

@@ -29,6 +29,7 @@ export async function unsafeFindFirstMembershipOfUser(
     where: { userId },
     attributes: ['companyId', 'role'],
     order: [['createdAt', 'ASC']],
+    unscopedReason: 'chooses the company of a new tenant context',
   });
   return row ? { companyId: row.companyId, role: row.role } : null;
 }
@@ -44,6 +45,7 @@ export async function unsafeListCompaniesOfUser(userId: string): Promise<UserCom
   const memberships = await MembershipModel.findAll({
     where: { userId },
     attributes: ['companyId', 'role'],
+    unscopedReason: "lists the signed-in user's own companies",
   });
   if (memberships.length === 0) return [];
   const companies = await CompanyModel.findAll({
