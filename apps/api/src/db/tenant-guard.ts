@@ -34,7 +34,7 @@ export class TenantScopeError extends Error {
   }
 }
 
-interface GuardedOptions {
+export interface GuardedOptions {
   where?: unknown;
   unscopedReason?: string;
 }
@@ -44,6 +44,12 @@ function pinsCompany(where: unknown): boolean {
   if (typeof where !== 'object' || where === null) return false;
   const record = where as Record<string, unknown>;
   return record.companyId !== undefined || record.company_id !== undefined;
+}
+
+/** Throws unless `options` pins company_id or gives an `unscopedReason`. */
+export function assertTenantScoped(model: string, statement: string, options: GuardedOptions) {
+  if (options.unscopedReason || pinsCompany(options.where)) return;
+  throw new TenantScopeError(model, statement);
 }
 
 const guardedHooks = {
@@ -60,10 +66,9 @@ const guardedHooks = {
 export function guardTenantModels(models: readonly ModelStatic<Model>[]): void {
   for (const model of models) {
     for (const [hook, statement] of Object.entries(guardedHooks)) {
-      model.addHook(hook as keyof typeof guardedHooks, 'tenantGuard', (options: GuardedOptions) => {
-        if (options.unscopedReason || pinsCompany(options.where)) return;
-        throw new TenantScopeError(model.name, statement);
-      });
+      model.addHook(hook as keyof typeof guardedHooks, 'tenantGuard', (options: GuardedOptions) =>
+        assertTenantScoped(model.name, statement, options),
+      );
     }
   }
 }
