@@ -70,6 +70,7 @@ export default tseslint.config(
     },
   },
   {
+    // Feature boundaries of the web app, checked on resolved paths (see web-boundaries.js).
     files: ['apps/web/src/**/*.{ts,tsx}'],
     plugins: { 'import-x': importX },
     settings: {
