@@ -1,6 +1,6 @@
 import { defineConfig } from 'vitest/config';
 
-// Two projects: `unit` (pure packages and web components, no services) and `api` (supertest
+// Two projects: `unit` (pure packages, API units and our lint rules; no services) and `api` (supertest
 // against createApp() on the real MariaDB test database, started by scripts/run-tests.ts).
 export default defineConfig({
   test: {
@@ -8,7 +8,11 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts'],
+          include: [
+            'packages/*/src/**/*.test.ts',
+            'apps/api/src/**/*.test.ts',
+            'tools/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },

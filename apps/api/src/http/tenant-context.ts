@@ -5,7 +5,10 @@ import type { Action } from '@seamwright/shared';
 import { can } from '@seamwright/shared';
 import type { RequestContext } from '../context.js';
 import { AppError } from '../errors.js';
-import { findFirstMembershipOfUser, findMembershipOfUser } from '../modules/me/me.repository.js';
+import {
+  unsafeFindFirstMembershipOfUser,
+  unsafeFindMembershipOfUser,
+} from '../modules/me/me.repository.js';
 import { saveSession } from './session.js';
 
 declare global {
@@ -21,7 +24,7 @@ declare global {
 export const requireTenant: RequestHandler = async (req, _res, next) => {
   const { userId, companyId } = req.session;
   if (!userId) return next(new AppError('UNAUTHENTICATED', 'Sign in to continue'));
-  const membership = companyId ? await findMembershipOfUser(userId, companyId) : null;
+  const membership = companyId ? await unsafeFindMembershipOfUser(userId, companyId) : null;
   if (!membership) return next(await endCompanyAccess(req, userId));
   req.ctx = { userId, companyId: membership.companyId, role: membership.role };
   next();
@@ -34,7 +37,7 @@ export const requireTenant: RequestHandler = async (req, _res, next) => {
  * person must choose one (POST /api/me/company); with none, the session ends.
  */
 async function endCompanyAccess(req: Request, userId: string): Promise<AppError> {
-  if (await findFirstMembershipOfUser(userId)) {
+  if (await unsafeFindFirstMembershipOfUser(userId)) {
     if (req.session.companyId) {
       delete req.session.companyId;
       await saveSession(req);

@@ -7,7 +7,7 @@ import { inTransaction } from '../../db/sequelize.js';
 import { AppError } from '../../errors.js';
 import { decoyPasswordFor, hashPassword, verifyPassword } from '../../passwords.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
-import { findFirstMembershipOfUser } from '../me/me.repository.js';
+import { unsafeFindFirstMembershipOfUser } from '../me/me.repository.js';
 import {
   addMembership,
   createCompany,
@@ -69,7 +69,7 @@ export function createAuthService(deps: ServiceDeps) {
       ? await verifyPassword(input.password, user.passwordHash)
       : await decoy.verify(input.password);
     if (!user || !isValid) throw new AppError('INVALID_CREDENTIALS', 'E-mail or password is wrong');
-    const membership = await findFirstMembershipOfUser(user.id);
+    const membership = await unsafeFindFirstMembershipOfUser(user.id);
     if (!membership)
       throw new AppError('FORBIDDEN', 'This account no longer belongs to any company');
     return { userId: user.id, companyId: membership.companyId };

@@ -7,7 +7,7 @@ import {
 import { saveSession } from '../../http/session.js';
 import { contextOf, signedInUserOf } from '../../http/tenant-context.js';
 import { parseInput } from '../../http/validate.js';
-import { listCompaniesOfUser } from './me.repository.js';
+import { unsafeListCompaniesOfUser } from './me.repository.js';
 import { markWrongCurrentPassword } from './password-change-limiter.js';
 import { assertCanSwitchTo, buildMeView } from './me.service.js';
 import { WrongCurrentPasswordError, type ProfileService } from './profile.service.js';
@@ -19,7 +19,7 @@ export async function getMeHandler(req: Request, res: Response): Promise<void> {
 
 /** The companies the signed-in person belongs to; works without an active company. */
 export async function listMyCompaniesHandler(req: Request, res: Response): Promise<void> {
-  const data = await listCompaniesOfUser(signedInUserOf(req));
+  const data = await unsafeListCompaniesOfUser(signedInUserOf(req));
   res.json({ data, meta: { page: 1, pageSize: data.length, total: data.length } });
 }
 

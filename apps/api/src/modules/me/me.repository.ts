@@ -1,5 +1,6 @@
 // Lookups keyed by the signed-in user rather than by a company: they build the tenant context
-// itself, so they cannot be company-scoped. The user id always comes from the session.
+// itself, so they cannot be company-scoped, and are named unsafe… for the tenant-scope lint rule.
+// The user id always comes from the session.
 import { Op } from 'sequelize';
 import type { Role } from '@seamwright/shared';
 import { CompanyModel, MembershipModel, SessionModel, UserModel } from '../../db/models/index.js';
@@ -10,7 +11,8 @@ export interface UserMembership {
   role: Role;
 }
 
-export async function findMembershipOfUser(
+/** Unscoped: checks the session's company against the user's memberships, before a context exists. */
+export async function unsafeFindMembershipOfUser(
   userId: string,
   companyId: string,
 ): Promise<UserMembership | null> {
@@ -21,11 +23,15 @@ export async function findMembershipOfUser(
   return row ? { companyId: row.companyId, role: row.role } : null;
 }
 
-export async function findFirstMembershipOfUser(userId: string): Promise<UserMembership | null> {
+/** Unscoped: picks a company for a user whose session has none (or lost it) yet. */
+export async function unsafeFindFirstMembershipOfUser(
+  userId: string,
+): Promise<UserMembership | null> {
   const row = await MembershipModel.findOne({
     where: { userId },
     attributes: ['companyId', 'role'],
     order: [['createdAt', 'ASC']],
+    unscopedReason: 'chooses the company of a new tenant context',
   });
   return row ? { companyId: row.companyId, role: row.role } : null;
 }
@@ -36,11 +42,12 @@ export interface UserCompany {
   role: Role;
 }
 
-/** Every company the user belongs to, by company name. */
-export async function listCompaniesOfUser(userId: string): Promise<UserCompany[]> {
+/** Every company the user belongs to, by company name. Unscoped: it spans the user's companies. */
+export async function unsafeListCompaniesOfUser(userId: string): Promise<UserCompany[]> {
   const memberships = await MembershipModel.findAll({
     where: { userId },
     attributes: ['companyId', 'role'],
+    unscopedReason: "lists the signed-in user's own companies",
   });
   if (memberships.length === 0) return [];
   const companies = await CompanyModel.findAll({

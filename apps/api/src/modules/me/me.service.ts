@@ -2,9 +2,9 @@ import type { CompanyView, MeView } from '@seamwright/shared';
 import { AppError } from '../../errors.js';
 import {
   findCompanyById,
-  findMembershipOfUser,
+  unsafeFindMembershipOfUser,
   findUserById,
-  listCompaniesOfUser,
+  unsafeListCompaniesOfUser,
 } from './me.repository.js';
 
 export function toCompanyView(company: {
@@ -32,8 +32,8 @@ export async function buildMeView(userId: string, companyId: string): Promise<Me
   const [user, company, membership, companies] = await Promise.all([
     findUserById(userId),
     findCompanyById(companyId),
-    findMembershipOfUser(userId, companyId),
-    listCompaniesOfUser(userId),
+    unsafeFindMembershipOfUser(userId, companyId),
+    unsafeListCompaniesOfUser(userId),
   ]);
   if (!user || !company || !membership)
     throw new AppError('UNAUTHENTICATED', 'Sign in to continue');
@@ -42,6 +42,6 @@ export async function buildMeView(userId: string, companyId: string): Promise<Me
 
 /** Checks that the user belongs to `companyId`; another company is simply not found. */
 export async function assertCanSwitchTo(userId: string, companyId: string): Promise<void> {
-  if (!(await findMembershipOfUser(userId, companyId)))
+  if (!(await unsafeFindMembershipOfUser(userId, companyId)))
     throw new AppError('NOT_FOUND', 'Company not found');
 }

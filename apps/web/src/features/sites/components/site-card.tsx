@@ -29,13 +29,15 @@ interface SiteCardProps {
   canWrite: boolean;
   /** Where focus goes after this site is deleted: the next site or the list's heading. */
   focusAfterDelete: () => HTMLElement | null;
+  /** Called after the site is deleted (see `SitesPanel`'s `onSitesChanged`). */
+  onDeleted: () => Promise<unknown>;
 }
 
-export function SiteCard({ site, canWrite, focusAfterDelete }: SiteCardProps) {
+export function SiteCard({ site, canWrite, focusAfterDelete, onDeleted }: SiteCardProps) {
   const [isEditing, setIsEditing] = useState(false);
   const [isConfirming, setIsConfirming] = useState(false);
   const update = useUpdateSite(site.customerId, site.id);
-  const remove = useDeleteSite(site.customerId, site.id);
+  const remove = useDeleteSite(site.customerId, site.id, onDeleted);
   const toast = useToast();
   const title = site.label ?? site.addressLine1;
   const { target: editButtonRef, request: focusEditButton } =

@@ -15,10 +15,17 @@ function focusAfterDeleting(nextSiteId: string | undefined): HTMLElement | null 
   return next ?? document.getElementById('sites-heading');
 }
 
+interface SitesPanelProps {
+  customerId: string;
+  canWrite: boolean;
+  /** Called after a site is added or deleted, for the route to refresh other features' data. */
+  onSitesChanged: () => Promise<unknown>;
+}
+
 /** A customer's sites: the list and the "Add a site" form. */
-export function SitesPanel({ customerId, canWrite }: { customerId: string; canWrite: boolean }) {
+export function SitesPanel({ customerId, canWrite, onSitesChanged }: SitesPanelProps) {
   const sites = useSites(customerId);
-  const create = useCreateSite(customerId);
+  const create = useCreateSite(customerId, onSitesChanged);
   const toast = useToast();
   const [isAdding, setIsAdding] = useState(false);
 
@@ -66,6 +73,7 @@ export function SitesPanel({ customerId, canWrite }: { customerId: string; canWr
                 site={site}
                 canWrite={canWrite}
                 focusAfterDelete={() => focusAfterDeleting(sites.items[index + 1]?.id)}
+                onDeleted={onSitesChanged}
               />
             ))}
           </ul>
