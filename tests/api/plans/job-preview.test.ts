@@ -51,7 +51,8 @@ describe('POST /api/plans/job-preview', () => {
     // one each area would buy its own 15 × 20 piece (600 sq ft).
     expect(res.body.data.orderedSqFt).toBe(300);
     expect(res.body.data.pieces).toHaveLength(1);
-    expect(res.body.data.areas.map((a: { id: string }) => a.id)).toEqual(['front', 'side']);
+    const areas = res.body.data.areas as { id: string }[];
+    expect(areas.map((a) => a.id)).toEqual(['front', 'side']);
     // computed by hand: 300 sq ft × 300 cents, no seams.
     expect(res.body.data.cost).toMatchObject({ turfCents: 90000, seamCents: 0, totalCents: 90000 });
   });
