@@ -8,6 +8,8 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
+          // Property tests run hundreds of plans; on a busy 2-core machine 5 s is too tight.
+          testTimeout: 30000,
           include: [
             'packages/*/src/**/*.test.ts',
             'apps/api/src/**/*.test.ts',
