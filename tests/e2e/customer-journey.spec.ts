@@ -224,6 +224,8 @@ test('someone in two companies switches between them and sees only the active on
 
   await sidebar.getByText('Switch company').click();
   await sidebar.getByRole('button', { name: new RegExp(firstCompany.companyName) }).click();
+  // A finished switch lands on Today; clicking on before that races the switch's own navigation.
+  await expect(page).toHaveURL((url) => url.pathname === '/');
   // The rail names the new company and role, and the switch list has closed.
   await expect(sidebar.getByText('Office', { exact: true })).toBeVisible();
   await expect(
@@ -238,6 +240,7 @@ test('someone in two companies switches between them and sees only the active on
   // Wait for the switch to land (it ends on Today) before moving on, or the two navigations race.
   await expect(sidebar.getByText('Bookkeeper', { exact: true })).toBeVisible();
   await expect(page).toHaveTitle('Today · Seamwright');
+  await expect(page).toHaveURL((url) => url.pathname === '/');
   await rail(page).getByRole('link', { name: 'Customers' }).click();
   await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
   await expect(page.getByRole('link', { name: customerName })).toHaveCount(0);
