@@ -1,44 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { testApp } from '../../fixtures/app.js';
 import { addMember, signUpCompany } from '../../fixtures/factories.js';
+import { jobContractExampleRequest } from '@seamwright/takeoff';
 
-// The job request of the job contract (issue text): a 20 × 10 ft front and a 20 × 5 ft side.
-const twoAreas = {
-  areas: [
-    {
-      id: 'front',
-      area: {
-        outer: [
-          [0, 0],
-          [20, 0],
-          [20, 10],
-          [0, 10],
-        ],
-        holes: [],
-      },
-      grain: { angleDeg: 0 },
-    },
-    {
-      id: 'side',
-      area: {
-        outer: [
-          [30, 0],
-          [50, 0],
-          [50, 5],
-          [30, 5],
-        ],
-        holes: [],
-      },
-      grain: { facing: 'E', toleranceDeg: 0 },
-    },
-  ],
-  rolls: [
-    { widthFt: 15, maxLengthFt: 100 },
-    { widthFt: 12, maxLengthFt: 100 },
-  ],
-  lengthStepFt: 1,
-  costs: { turfCentsPerSqFt: 300, sideSeamCentsPerFt: 150, buttSeamCentsPerFt: 250 },
-};
+// The job request of the job contract: a 20 × 10 ft front and a 20 × 5 ft side strip.
+const twoAreas = jobContractExampleRequest();
 
 describe('POST /api/plans/job-preview', () => {
   it('plans both areas from one shared 15 × 20 ft piece for any signed-in role', async () => {

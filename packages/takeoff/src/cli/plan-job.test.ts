@@ -2,6 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { jobContractExampleRequest } from '../job/sample-jobs.js';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const root = join(here, '../../../..');
@@ -16,44 +17,9 @@ function run(input: string): { status: number | null; stdout: string; stderr: st
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
 
-/** The job of the issue: front lawn 20 × 10 and side strip 20 × 5, two roll widths, costs. */
+/** The job of the job contract: front lawn 20 × 10 and side strip 20 × 5, two roll widths, costs. */
 function issueJob(): Record<string, unknown> {
-  return {
-    areas: [
-      {
-        id: 'front',
-        area: {
-          outer: [
-            [0, 0],
-            [20, 0],
-            [20, 10],
-            [0, 10],
-          ],
-          holes: [],
-        },
-        grain: { angleDeg: 0 },
-      },
-      {
-        id: 'side',
-        area: {
-          outer: [
-            [30, 0],
-            [50, 0],
-            [50, 5],
-            [30, 5],
-          ],
-          holes: [],
-        },
-        grain: { facing: 'E', toleranceDeg: 0 },
-      },
-    ],
-    rolls: [
-      { widthFt: 15, maxLengthFt: 100 },
-      { widthFt: 12, maxLengthFt: 100 },
-    ],
-    lengthStepFt: 1,
-    costs: { turfCentsPerSqFt: 300, sideSeamCentsPerFt: 150, buttSeamCentsPerFt: 250 },
-  };
+  return jobContractExampleRequest();
 }
 
 // Each case starts Node with tsx (a few seconds on a busy machine).

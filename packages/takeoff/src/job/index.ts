@@ -27,5 +27,5 @@ export type {
   RollChoice,
   SeamTotals,
 } from './types.js';
-export { sampleJobs } from './sample-jobs.js';
+export { jobContractExampleRequest, sampleJobs } from './sample-jobs.js';
 export type { SampleJob } from './sample-jobs.js';

@@ -52,3 +52,36 @@ export function sampleJobs(): SampleJob[] {
     },
   ];
 }
+
+/**
+ * The request of the job contract's worked example: a 20 × 10 ft front and a 20 × 5 ft side
+ * strip, 15 and 12 ft rolls, seam costs. A fresh object each call, so callers may change it.
+ */
+export function jobContractExampleRequest() {
+  const rectangle = (x0: number, x1: number, height: number): [number, number][] => [
+    [x0, 0],
+    [x1, 0],
+    [x1, height],
+    [x0, height],
+  ];
+  return {
+    areas: [
+      {
+        id: 'front',
+        area: { outer: rectangle(0, 20, 10), holes: [] as [number, number][][] },
+        grain: { angleDeg: 0 } as Record<string, unknown>,
+      },
+      {
+        id: 'side',
+        area: { outer: rectangle(30, 50, 5), holes: [] as [number, number][][] },
+        grain: { facing: 'E', toleranceDeg: 0 } as Record<string, unknown>,
+      },
+    ],
+    rolls: [
+      { widthFt: 15, maxLengthFt: 100 },
+      { widthFt: 12, maxLengthFt: 100 },
+    ],
+    lengthStepFt: 1,
+    costs: { turfCentsPerSqFt: 300, sideSeamCentsPerFt: 150, buttSeamCentsPerFt: 250 },
+  };
+}
