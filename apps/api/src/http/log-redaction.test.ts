@@ -37,6 +37,15 @@ describe('redactUrl', () => {
     );
   });
 
+  it("keeps the web build's hashed asset names readable", () => {
+    expect(redactUrl('/assets/customer-details-Bq3xY7LmN2pQ.js', [])).toBe(
+      '/assets/customer-details-Bq3xY7LmN2pQ.js',
+    );
+    expect(redactUrl('/invitations/Bq3xY7LmN2pQk9sT4vW8zA1cE5gH0jL3', [])).toBe(
+      '/invitations/[redacted]',
+    );
+  });
+
   it('never throws on malformed escapes', () => {
     expect(redactUrl('/api/invitations/%E0%A4%A?token=%E0', patterns)).toBe(
       '/api/invitations/[redacted]?token=[redacted]',

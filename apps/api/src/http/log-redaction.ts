@@ -47,7 +47,11 @@ function matches(pattern: TokenRoutePattern, segments: readonly string[]): boole
   });
 }
 
+/** The web build's files: long hashed names, never a token, worth keeping readable in logs. */
+const builtAssets = /^\/assets\//;
+
 function redactPath(path: string, patterns: readonly TokenRoutePattern[]): string {
+  if (builtAssets.test(path)) return path;
   const segments = segmentsOf(path);
   const route = patterns.find((pattern) => matches(pattern, segments));
   const out = segments.map((segment, i) => {
