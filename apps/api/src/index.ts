@@ -22,3 +22,4 @@ export type { RouteEntry } from './http/route-table.js';
 export { csrfCookieName, csrfHeaderName } from './http/csrf.js';
 export { sessionCookieName } from './http/session.js';
 export { executeSql, selectRows } from './db/sql.js';
+export { hashPassword } from './passwords.js';
