@@ -6,6 +6,7 @@ import { can } from '@seamwright/shared';
 import type { RequestContext } from '../context.js';
 import { AppError } from '../errors.js';
 import { findFirstMembershipOfUser, findMembershipOfUser } from '../modules/me/me.repository.js';
+import type { UserMembership } from '../modules/me/me.repository.js';
 import { saveSession } from './session.js';
 
 declare global {
@@ -17,11 +18,26 @@ declare global {
   }
 }
 
+/**
+ * The member's role in the company, as read together with the session on this request (one
+ * statement; see session-store.ts), or read now when the session did not come from the store.
+ */
+async function currentMembership(
+  req: Request,
+  userId: string,
+  companyId: string,
+): Promise<UserMembership | null> {
+  const loaded = req.sessionMembership;
+  if (loaded?.userId === userId && loaded.companyId === companyId)
+    return loaded.role ? { companyId, role: loaded.role } : null;
+  return findMembershipOfUser(userId, companyId);
+}
+
 /** Requires a signed-in member of the session's active company; sets `req.ctx`. */
 export const requireTenant: RequestHandler = async (req, _res, next) => {
   const { userId, companyId } = req.session;
   if (!userId || !companyId) return next(new AppError('UNAUTHENTICATED', 'Sign in to continue'));
-  let membership = await findMembershipOfUser(userId, companyId);
+  let membership = await currentMembership(req, userId, companyId);
   if (!membership) {
     // Removed from the active company: fall back to another company they still belong to.
     membership = await findFirstMembershipOfUser(userId);
