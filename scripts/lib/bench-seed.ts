@@ -3,6 +3,7 @@
 // a handful of members in the large one. Bulk multi-row inserts, so seeding takes seconds.
 // Every name is invented from the syllables below.
 import { randomUUID } from 'node:crypto';
+import { executeSql } from '@seamwright/api';
 import type { createSequelize } from '@seamwright/api';
 
 type Sequelize = ReturnType<typeof createSequelize>;
@@ -140,6 +141,14 @@ export async function seedBenchCompany(
   }
   await insertInBatches(sequelize, 'customers', customers);
   await insertInBatches(sequelize, 'sites', sites);
+  // The totals the service keeps on every change (migration 0006), for these bulk-loaded rows.
+  await executeSql(
+    sequelize,
+    `INSERT INTO customer_counts (company_id, active, archived)
+     SELECT company_id, SUM(archived_at IS NULL), SUM(archived_at IS NOT NULL)
+     FROM customers WHERE company_id = ? GROUP BY company_id`,
+    [companyId],
+  );
   const middle = customers[Math.floor(customers.length / 2)];
   return {
     companyId,

@@ -9,6 +9,7 @@ import {
   SiteModel,
   UserModel,
 } from '../db/models/index.js';
+import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 
@@ -94,6 +95,7 @@ export async function seedDemoData(
         );
       }
     }
+    await unsafeRecountCustomers(company.id, transaction);
   });
   return { created: true, ...result };
 }

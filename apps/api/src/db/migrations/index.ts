@@ -2,6 +2,7 @@
 // tsx, vitest and any bundler; add new files at the end.
 import { initialSchema } from './0001-initial-schema.js';
 import { rateLimitHits } from './0002-rate-limit-hits.js';
+import { customerList } from './0006-customer-list.js';
 import type { Migration } from './types.js';
 
-export const migrations: Migration[] = [initialSchema, rateLimitHits];
+export const migrations: Migration[] = [initialSchema, rateLimitHits, customerList];

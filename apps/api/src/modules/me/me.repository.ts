@@ -1,6 +1,7 @@
 // Lookups keyed by the signed-in user rather than by a company: they build the tenant context
 // itself, so they cannot be company-scoped. The user id always comes from the session.
 import type { Role } from '@seamwright/shared';
+import { QueryTypes } from 'sequelize';
 import { CompanyModel, MembershipModel, UserModel } from '../../db/models/index.js';
 
 export interface UserMembership {
@@ -28,31 +29,51 @@ export async function findFirstMembershipOfUser(userId: string): Promise<UserMem
   return row ? { companyId: row.companyId, role: row.role } : null;
 }
 
-export interface UserCompany {
-  companyId: string;
-  companyName: string;
-  role: Role;
+export interface CompanyRow {
+  id: string;
+  name: string;
+  slug: string;
+  timeZone: string;
+  region: string | null;
+  currency: string;
+  measurementSystem: 'imperial' | 'metric';
 }
 
-/** Every company the user belongs to, by company name. */
-export async function listCompaniesOfUser(userId: string): Promise<UserCompany[]> {
-  const memberships = await MembershipModel.findAll({
-    where: { userId },
-    attributes: ['companyId', 'role'],
-  });
-  if (memberships.length === 0) return [];
-  const companies = await CompanyModel.findAll({
-    where: { id: memberships.map((m) => m.companyId) },
-    attributes: ['id', 'name'],
-  });
-  const names = new Map(companies.map((c) => [c.id, c.name]));
-  return memberships
-    .map((m) => ({
-      companyId: m.companyId,
-      companyName: names.get(m.companyId) ?? '',
-      role: m.role,
-    }))
-    .sort((a, b) => a.companyName.localeCompare(b.companyName));
+export interface UserWithCompanies {
+  user: { id: string; name: string; email: string };
+  /** Every company the user belongs to, with their role there (in no particular order). */
+  memberships: (CompanyRow & { role: Role })[];
+}
+
+interface UserCompanyRow extends Partial<CompanyRow> {
+  userName: string;
+  userEmail: string;
+  role: Role | null;
+}
+
+/**
+ * The user and every company they belong to, in one statement (GET /api/me runs on every page
+ * load; see docs/PERFORMANCE.md). Plain SQL: the join is by primary and unique keys.
+ */
+export async function findUserWithCompanies(userId: string): Promise<UserWithCompanies | null> {
+  // The models share one Sequelize instance, set when they were registered.
+  const rows = await UserModel.sequelize!.query<UserCompanyRow>(
+    `SELECT u.name AS userName, u.email AS userEmail, m.role,
+       c.id, c.name, c.slug, c.time_zone AS timeZone, c.region, c.currency,
+       c.measurement_system AS measurementSystem
+     FROM users u
+     LEFT JOIN memberships m ON m.user_id = u.id
+     LEFT JOIN companies c ON c.id = m.company_id
+     WHERE u.id = ?`,
+    { replacements: [userId], type: QueryTypes.SELECT },
+  );
+  const [first] = rows;
+  if (!first) return null;
+  const memberships: UserWithCompanies['memberships'] = [];
+  for (const { userName: _n, userEmail: _e, role, ...company } of rows) {
+    if (role && company.id) memberships.push({ ...(company as CompanyRow), role });
+  }
+  return { user: { id: userId, name: first.userName, email: first.userEmail }, memberships };
 }
 
 export async function findUserById(userId: string) {
