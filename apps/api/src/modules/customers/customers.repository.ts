@@ -42,41 +42,37 @@ const viewColumns = `c.id, c.name, c.email, c.phone, c.billing_address AS billin
   (SELECT COUNT(*) FROM sites s WHERE s.company_id = :companyId AND s.customer_id = c.id) AS siteCount`;
 
 export type CustomerListRow = Omit<CustomerRow, 'companyId'> & { siteCount: number };
-type ListRow = CustomerListRow & { total: number | null };
+type ListRow = Omit<CustomerListRow, 'id'> & { id: string | null; total: number | null };
 
-function toListRow({ total: _total, ...row }: ListRow): CustomerListRow {
+function toListRow({ total: _total, ...row }: ListRow & { id: string }): CustomerListRow {
   return { ...row, siteCount: Number(row.siteCount) };
 }
 
 /**
  * One page of customers with their site counts and the list's total, in one statement: the
  * page's ids come from an index alone (so a late page skips index entries, not rows), then
- * only those 25 rows are read. See docs/PERFORMANCE.md for the plan.
+ * only those rows are read. The total sits in a one-row table the page is left-joined to, so
+ * it comes back even when the page is empty. See docs/PERFORMANCE.md for the plan.
  */
 export async function listCustomers(ctx: RequestContext, query: CustomerListQuery) {
-  const sql = scopedSql(ctx, CustomerModel.sequelize!);
   const filter = listFilter(query);
   const direction = query.sort.direction === 'desc' ? 'DESC' : 'ASC';
+  const column = sortColumns[query.sort.field];
   // The id breaks ties in the same direction, so the index serves the order in both directions.
-  const order = `${sortColumns[query.sort.field]} ${direction}, id ${direction}`;
-  const rows = await sql.select<ListRow>(
-    `SELECT ${viewColumns}, (${totalSql(query, filter.sql)}) AS total
-     FROM (SELECT id FROM customers WHERE company_id = :companyId${filter.sql}
-           ORDER BY ${order} LIMIT :limit OFFSET :offset) page
-     JOIN customers c ON c.id = page.id AND c.company_id = :companyId
-     ORDER BY c.${order}`,
+  const order = (table: string) => `${table}${column} ${direction}, ${table}id ${direction}`;
+  const rows = await scopedSql(ctx, CustomerModel.sequelize!).select<ListRow>(
+    `SELECT t.total, ${viewColumns}
+     FROM (SELECT (${totalSql(query, filter.sql)}) AS total) t
+     LEFT JOIN (
+       (SELECT id FROM customers WHERE company_id = :companyId${filter.sql}
+        ORDER BY ${order('')} LIMIT :limit OFFSET :offset) page
+       JOIN customers c ON c.id = page.id AND c.company_id = :companyId
+     ) ON TRUE
+     ORDER BY ${order('c.')}`,
     { ...filter.replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize },
   );
-  let total = rows[0]?.total;
-  if (total === undefined) {
-    // Past the last page: no row carried the total, so ask for it alone.
-    const [row] = await sql.select<{ total: number | null }>(
-      `SELECT (${totalSql(query, filter.sql)}) AS total`,
-      filter.replacements,
-    );
-    total = row?.total;
-  }
-  return { rows: rows.map(toListRow), total: Number(total ?? 0) };
+  const onPage = rows.filter((row): row is ListRow & { id: string } => row.id !== null);
+  return { rows: onPage.map(toListRow), total: Number(rows[0]?.total ?? 0) };
 }
 
 /** One customer of this company with its site count, or null. */
@@ -84,7 +80,7 @@ export async function findCustomerView(
   ctx: RequestContext,
   id: string,
 ): Promise<CustomerListRow | null> {
-  const [row] = await scopedSql(ctx, CustomerModel.sequelize!).select<ListRow>(
+  const [row] = await scopedSql(ctx, CustomerModel.sequelize!).select<ListRow & { id: string }>(
     `SELECT ${viewColumns}, NULL AS total FROM customers c
      WHERE c.id = :id AND c.company_id = :companyId`,
     { id },

@@ -1,28 +1,24 @@
 import type { Role } from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
-import { MembershipModel, UserModel } from '../../db/models/index.js';
+import { MembershipModel } from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
-import { scoped } from '../../db/tenant-scope.js';
+import { scoped, scopedSql } from '../../db/tenant-scope.js';
 
-export async function listMembers(ctx: RequestContext) {
-  const memberships = await scoped(ctx, MembershipModel).findAll({
-    order: [
-      ['createdAt', 'ASC'],
-      ['id', 'ASC'],
-    ],
-  });
-  const users = memberships.length
-    ? await UserModel.findAll({
-        where: { id: memberships.map((m) => m.userId) },
-        attributes: ['id', 'name', 'email'],
-      })
-    : [];
-  const byId = new Map(users.map((u) => [u.id, u]));
-  return memberships.map((m) => ({
-    ...m,
-    name: byId.get(m.userId)?.name ?? '',
-    email: byId.get(m.userId)?.email ?? '',
-  }));
+/** The company's members with their names and e-mails, oldest first, in one statement. */
+export function listMembers(ctx: RequestContext) {
+  return scopedSql(ctx, MembershipModel.sequelize!).select<{
+    id: string;
+    userId: string;
+    role: Role;
+    createdAt: Date;
+    name: string;
+    email: string;
+  }>(
+    `SELECT m.id, m.user_id AS userId, m.role, m.created_at AS createdAt, u.name, u.email
+     FROM memberships m JOIN users u ON u.id = m.user_id
+     WHERE m.company_id = :companyId
+     ORDER BY m.created_at, m.id`,
+  );
 }
 
 export function findMember(ctx: RequestContext, id: string, tx: Tx) {
