@@ -20,6 +20,6 @@ export { startServer } from './server.js';
 export type { RunningServer, StartServerOptions } from './server.js';
 export type { RouteEntry } from './http/route-table.js';
 export { csrfCookieName, csrfHeaderName } from './http/csrf.js';
-export { sessionCookieName } from './http/session.js';
+export { createSessionStore, sessionCookieName } from './http/session.js';
 export { executeSql, selectRows } from './db/sql.js';
 export { hashPassword } from './passwords.js';

@@ -63,11 +63,9 @@ export async function listCustomers(ctx: RequestContext, query: CustomerListQuer
   const rows = await scopedSql(ctx, CustomerModel.sequelize!).select<ListRow>(
     `SELECT t.total, ${viewColumns}
      FROM (SELECT (${totalSql(query, filter.sql)}) AS total) t
-     LEFT JOIN (
-       (SELECT id FROM customers WHERE company_id = :companyId${filter.sql}
-        ORDER BY ${order('')} LIMIT :limit OFFSET :offset) page
-       JOIN customers c ON c.id = page.id AND c.company_id = :companyId
-     ) ON TRUE
+     LEFT JOIN (SELECT id FROM customers WHERE company_id = :companyId${filter.sql}
+                ORDER BY ${order('')} LIMIT :limit OFFSET :offset) page ON TRUE
+     LEFT JOIN customers c ON c.id = page.id AND c.company_id = :companyId
      ORDER BY ${order('c.')}`,
     { ...filter.replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize },
   );
