@@ -99,12 +99,14 @@ describe('session store', () => {
     const { sid } = await sessionRow(userId);
     const store = createSessionStore(testApp().sequelize, 0);
     const loaded = await new Promise<Parameters<typeof store.set>[1]>((resolve, reject) =>
-      store.load(sid, (err, session) => (err || !session ? reject(err) : resolve(session))),
+      store.load(sid, (err, session) =>
+        err || !session ? reject(new Error('session not loaded')) : resolve(session),
+      ),
     );
     // A password reset or a sign-out elsewhere ends the session; then this request saves it.
     await executeSql(testApp().sequelize, 'DELETE FROM sessions WHERE sid = ?', [sid]);
     await new Promise<void>((resolve, reject) =>
-      store.set(sid, loaded, (err) => (err ? reject(err as Error) : resolve())),
+      store.set(sid, loaded, (err) => (err ? reject(new Error('save failed')) : resolve())),
     );
     expect(
       await selectRows(testApp().sequelize, 'SELECT sid FROM sessions WHERE sid = ?', [sid]),
