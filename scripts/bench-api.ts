@@ -208,4 +208,5 @@ for (const r of results) {
 }
 console.log(`\nAPI peak resident memory: ${peakMb.toFixed(0)} MB`);
 if (cpuProfile) console.log(`CPU profile written to ${profileDir}`);
-if (results.some((r) => r.non2xx + r.errors > 0)) fail('bench', 'some requests failed');
+if (results.some((r) => r.non2xx + r.errors > 0 || r.requests === 0))
+  fail('bench', 'some requests failed or none completed');

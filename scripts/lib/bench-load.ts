@@ -82,6 +82,7 @@ export async function measureRoute(
   // The probe's own query counts once; it is left in (one statement over thousands of requests).
   const questions = (await probe.questions()) - before.questions;
   const requests = result.requests.total;
+  const perRequest = (value: number) => (requests > 0 ? value / requests : NaN);
   return {
     name,
     requestsPerSecond: result.requests.average,
@@ -90,9 +91,9 @@ export async function measureRoute(
     non2xx: result.non2xx,
     errors: result.errors,
     requests,
-    statementsPerRequest: questions / requests,
-    apiCpuMs: (cpuMs(probe.apiPid) - before.api) / requests,
-    dbCpuMs: (cpuMs(probe.dbPid) - before.db) / requests,
+    statementsPerRequest: perRequest(questions),
+    apiCpuMs: perRequest(cpuMs(probe.apiPid) - before.api),
+    dbCpuMs: perRequest(cpuMs(probe.dbPid) - before.db),
   };
 }
 
