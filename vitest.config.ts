@@ -1,6 +1,6 @@
 import { defineConfig } from 'vitest/config';
 
-// Two projects: `unit` (pure packages and web components, no services) and `api` (supertest
+// Two projects: `unit` (pure packages, API units and our lint rules; no services) and `api` (supertest
 // against createApp() on the real MariaDB test database, started by scripts/run-tests.ts).
 export default defineConfig({
   test: {
@@ -8,7 +8,13 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['packages/*/src/**/*.test.ts', 'apps/api/src/**/*.test.ts'],
+          // Property tests run hundreds of plans; on a busy 2-core machine 5 s is too tight.
+          testTimeout: 30000,
+          include: [
+            'packages/*/src/**/*.test.ts',
+            'apps/api/src/**/*.test.ts',
+            'tools/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },

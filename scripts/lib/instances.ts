@@ -1,8 +1,9 @@
 // Ports and names of the two local set-ups. Development and tests never share a database.
 // These are local, loopback-only credentials for disposable data, not secrets.
 //
-// SW_PORT_OFFSET (a small whole number, default 0) shifts every port, so that several
-// checkouts of the project can run their own instances side by side on one machine.
+// SW_PORT_OFFSET (a whole number, default 0) shifts every port, so that several checkouts of
+// the project can run their own instances side by side on one machine. The ports of one
+// checkout span 1025–1091 and 3307–12112, so use multiples of 100 to keep checkouts apart.
 function readPortOffset(raw: string | undefined): number {
   if (raw === undefined || raw === '') return 0;
   const offset = Number(raw);

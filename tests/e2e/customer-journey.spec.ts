@@ -152,7 +152,7 @@ test('the crew lead cannot open customers or their billing details', async ({ br
   await expectAccessible(page, 'Settings (crew lead)');
 });
 
-test('on a phone the crew lead gets one column and a bottom bar with Today only', async ({
+test('on a phone the crew lead gets one column and a bottom bar with Today, Layout and Profile', async ({
   browser,
 }) => {
   const page = await newPage(browser, { width: 390, height: 844 });
@@ -161,8 +161,21 @@ test('on a phone the crew lead gets one column and a bottom bar with Today only'
   await page.getByLabel('Password').fill('long-enough-pass-2026');
   await page.getByRole('button', { name: 'Sign in' }).click();
   const bottomBar = page.getByRole('navigation', { name: 'Sections' }).last();
-  await expect(bottomBar.getByRole('link')).toHaveText(['Today']);
+  await expect(bottomBar.getByRole('link')).toHaveText(['Today', 'Layout', 'Profile']);
   await expectAccessible(page, 'Today (crew lead, phone)');
+  await page.screenshot({ path: '../.tmp/screens/crew-today-phone.png' });
+
+  await bottomBar.getByRole('link', { name: 'Layout' }).click();
+  await expect(page).toHaveTitle('Layout · Seamwright');
+  await expect(page.getByRole('heading', { level: 1, name: 'Layout' })).toBeFocused();
+  await bottomBar.getByRole('link', { name: 'Profile' }).click();
+  await expect(page.getByText('Crew lead at')).toBeVisible();
+  await expect(bottomBar.getByRole('link', { name: 'Profile' })).toHaveAttribute(
+    'aria-current',
+    'page',
+  );
+  await expectAccessible(page, 'Profile (crew lead, phone)');
+  await page.screenshot({ path: '../.tmp/screens/crew-profile-phone.png', fullPage: true });
 });
 
 test('a second company sees none of the first company’s customers', async ({ browser }) => {
@@ -222,6 +235,9 @@ test('someone in two companies switches between them and sees only the active on
 
   await sidebar.getByText('Switch company').click();
   await sidebar.getByRole('button', { name: new RegExp(secondCompanyName) }).click();
+  // Wait for the switch to land (it ends on Today) before moving on, or the two navigations race.
+  await expect(sidebar.getByText('Bookkeeper', { exact: true })).toBeVisible();
+  await expect(page).toHaveTitle('Today · Seamwright');
   await rail(page).getByRole('link', { name: 'Customers' }).click();
   await expect(page.getByRole('heading', { name: 'No customers yet' })).toBeVisible();
   await expect(page.getByRole('link', { name: customerName })).toHaveCount(0);

@@ -129,6 +129,7 @@ test('archive can be undone, delete asks once, and a site can be edited and dele
   await siteForm.getByLabel('Town or city').fill('Ashvale');
   await siteForm.getByRole('button', { name: 'Save site' }).click();
   await expect(page.getByText('Not counted yet')).toBeVisible();
+  await expect(siteForm).toHaveCount(0); // the new-site form has closed
 
   await page.getByRole('button', { name: 'Edit site 3 Sedge Walk' }).click();
   await page

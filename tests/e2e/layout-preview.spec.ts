@@ -22,7 +22,7 @@ test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 
   await form.getByRole('radio', { name: 'Rectangle' }).check();
   await form.getByLabel('Length (north–south)').fill(`30'`);
   await form.getByLabel('Width (east–west)').fill(`20'`);
-  await form.getByRole('radio', { name: '15 ft' }).check();
+  await form.getByRole('radio', { name: `15' 0"` }).check();
   await form.getByRole('radio', { name: 'Runs east–west' }).check();
 
   // Check value: 30 × 20 ft with a 15 ft roll, grain along the 20 ft side → two 15 × 20 ft
@@ -39,7 +39,7 @@ test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 
   ).toHaveText('2');
   const drawing = page.getByRole('img', { name: /Layout plan/ });
   await expect(drawing.locator('[data-cut]')).toHaveCount(2);
-  await expect(page.getByText('Piece 2 — 15 × 20 ft')).toBeVisible();
+  await expect(page.getByText(`Piece 2 — 15' 0" × 20' 0"`)).toBeVisible();
   await expect(page).toHaveURL(/grain=east-west/);
 
   // The state is in the URL: a reload shows the same plan.
@@ -51,14 +51,14 @@ test('a rectangle 30′ × 20′ on a 15 ft roll, grain east–west, orders 600 
   const perimeter = page
     .getByRole('group', { name: 'Plan figures' })
     .locator('div', { has: page.locator('dt', { hasText: /^Perimeter$/ }) });
-  await expect(perimeter).toContainText('100 ft not tagged yet');
+  await expect(perimeter).toContainText(`100' 0" not tagged yet`);
   const edges = page.getByRole('group', { name: 'What does each edge meet?' });
   await expect(edges.getByLabel('North edge')).toHaveValue('unknown');
   await edges.getByLabel('North edge').selectOption({ label: 'Planting bed' });
   // Check value: 30 ft N–S × 20 ft E–W, so the north side is 20 ft and the other three
   // 30 + 20 + 30 = 80 ft (arithmetic).
-  await expect(perimeter).toContainText('20 ft against beds');
-  await expect(perimeter).toContainText('80 ft not tagged yet');
+  await expect(perimeter).toContainText(`20' 0" against beds`);
+  await expect(perimeter).toContainText(`80' 0" not tagged yet`);
   await expect(
     page.getByRole('table', { name: 'Material takeoff' }).getByText('Edging / bender board'),
   ).toBeVisible();

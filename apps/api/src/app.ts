@@ -1,5 +1,6 @@
 // createApp(): the whole HTTP application without listening. Order matters: request id and
-// logging first, security headers, body parsing, session, CSRF, then routes, 404, errors.
+// logging first, security headers, body parsing (JSON only), session, CSRF, then routes, 404,
+// errors. The route table is built before the logger so the logger knows the token routes.
 import express from 'express';
 import type { Express } from 'express';
 import type { Logger } from 'pino';
@@ -7,7 +8,9 @@ import type { Sequelize } from 'sequelize';
 import type { Env } from './config/env.js';
 import type { ServiceDeps } from './deps.js';
 import { createCsrf } from './http/csrf.js';
+import { requireJsonBody } from './http/client-errors.js';
 import { apiNotFound, errorHandler } from './http/error-handler.js';
+import { tokenRoutePatterns } from './http/log-redaction.js';
 import { createHttpLogger, createLogger } from './http/logging.js';
 import { RouteTable } from './http/route-table.js';
 import type { RouteEntry } from './http/route-table.js';
@@ -17,6 +20,7 @@ import type { SessionStore } from './http/session.js';
 import { serveWebApp } from './http/web-app.js';
 import { createMailer } from './mail/mailer.js';
 import type { Mailer } from './mail/mailer.js';
+import type { PlannerPool } from './planner/planner-pool.js';
 import { registerApiRoutes } from './routes.js';
 
 export interface AppDeps {
@@ -27,6 +31,8 @@ export interface AppDeps {
   logger?: Logger;
   /** Defaults to a store without the background sweep (the server passes its own). */
   sessionStore?: SessionStore;
+  /** Owned by the caller, who closes it on shutdown (`createPlannerPool(env.planner)`). */
+  plannerPool: PlannerPool;
 }
 
 declare global {
@@ -47,6 +53,7 @@ export function createApp(deps: AppDeps): Express {
     sequelize,
     logger,
     mailer: deps.mailer ?? createMailer(env.smtp),
+    plannerPool: deps.plannerPool,
   };
   const store = deps.sessionStore ?? createSessionStore(sequelize, 0);
   const csrf = createCsrf(env);
@@ -55,16 +62,17 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', env.trustProxy);
   app.set('query parser', 'extended');
-  app.use(createHttpLogger(logger));
-  app.use(createSecurityHeaders(env.cookieSecure));
-
   const routes = new RouteTable('/api');
   registerApiRoutes(routes, services, csrf.issueToken);
   app.locals.apiRoutes = routes.entries;
 
+  app.use(createHttpLogger(logger, tokenRoutePatterns(routes.entries.map((r) => r.path))));
+  app.use(createSecurityHeaders(env.cookieSecure));
+
   app.use(
     '/api',
     express.json({ limit: '1mb' }),
+    requireJsonBody,
     createSessionMiddleware(env, store),
     csrf.verify,
     routes.router,

@@ -2,6 +2,7 @@ import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { Env } from './config/env.js';
 import type { Mailer } from './mail/mailer.js';
+import type { PlannerPool } from './planner/planner-pool.js';
 
 /** What services need from the outside world, built once in createApp. */
 export interface ServiceDeps {
@@ -9,4 +10,6 @@ export interface ServiceDeps {
   sequelize: Sequelize;
   mailer: Mailer;
   logger: Logger;
+  /** The layout planner's worker threads; every server-side plan goes through it. */
+  plannerPool: PlannerPool;
 }

@@ -1,16 +1,20 @@
 /**
  * @seamwright/api — entry for scripts and tests.
  *
- * - `createApp({ env, sequelize, mailer?, logger?, sessionStore? })` → Express app (no listen)
+ * - `createApp({ env, sequelize, plannerPool, mailer?, logger?, sessionStore? })` → Express app
+ * - `new PlannerPool(env.planner)` → the layout planner's worker threads (close() when done)
  * - `loadEnv(source?)` → validated `Env`
  * - `createSequelize(env.db)` → Sequelize with every model registered
  * - `migrateDatabase(sequelize)` → applies pending migrations
  * - `seedDemoData(sequelize, env)` → loads the demo company once
  * - `startServer(options?)` → listens on env.port with graceful shutdown
+ * - `createLogger(level, destination?)` → the pino logger with the API's redaction rules
  */
 export { createApp } from './app.js';
 export type { AppDeps } from './app.js';
 export { loadEnv } from './config/env.js';
+export { PlannerPool } from './planner/planner-pool.js';
+export type { PlannerPoolConfig } from './planner/planner-pool.js';
 export type { Env } from './config/env.js';
 export { createSequelize } from './db/sequelize.js';
 export { migrateDatabase } from './db/migrate.js';
@@ -19,7 +23,9 @@ export type { SeedResult } from './seed/demo-data.js';
 export { startServer } from './server.js';
 export type { RunningServer, StartServerOptions } from './server.js';
 export type { RouteEntry } from './http/route-table.js';
-export { csrfCookieName, csrfHeaderName } from './http/csrf.js';
-export { createSessionStore, sessionCookieName } from './http/session.js';
+export { csrfHeaderName } from './http/csrf.js';
+export { createLogger } from './http/logging.js';
+export { answerMalformedRequests } from './http/malformed-requests.js';
+export { createSessionStore } from './http/session.js';
 export { executeSql, selectRows } from './db/sql.js';
-export { hashPassword } from './passwords.js';
+export { decoyPasswordFor, hashPassword } from './passwords.js';

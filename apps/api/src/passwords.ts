@@ -1,4 +1,5 @@
 // bcryptjs hashing. The cost comes from the environment: 12 in production, 4 in tests.
+import { randomBytes } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 
 export function hashPassword(password: string, cost: number): Promise<string> {
@@ -9,10 +10,38 @@ export function verifyPassword(password: string, hash: string): Promise<boolean>
   return bcrypt.compare(password, hash);
 }
 
-/** A hash to compare against when the e-mail is unknown, so both answers take as long. */
-const decoyHash = bcrypt.hashSync('decoy-password-never-matches', 10);
+export interface DecoyPassword {
+  /** The decoy's hash; its `$2b$NN$` prefix shows the cost. */
+  hash: string;
+  /** Costs as much as checking a real password, and never matches. */
+  verify(password: string): Promise<false>;
+}
 
-export async function verifyAgainstDecoy(password: string): Promise<false> {
-  await bcrypt.compare(password, decoyHash);
-  return false;
+/**
+ * A hash to compare against when the e-mail is unknown, so that answer takes as long as a wrong
+ * password. It must use the same cost as real hashes (a cheaper decoy makes unknown e-mails
+ * answer faster), so it is built once at start-up from `env.bcryptCost`; that takes as long as
+ * one real hash. The secret is random, so nothing can ever match it.
+ */
+function createDecoyPassword(cost: number): DecoyPassword {
+  const hash = bcrypt.hashSync(randomBytes(18).toString('base64url'), cost);
+  return {
+    hash,
+    async verify(password) {
+      await bcrypt.compare(password, hash);
+      return false;
+    },
+  };
+}
+
+const decoys = new Map<number, DecoyPassword>();
+
+/** The decoy for `cost`, built on first use (at start-up, by the auth service) and then reused. */
+export function decoyPasswordFor(cost: number): DecoyPassword {
+  let decoy = decoys.get(cost);
+  if (!decoy) {
+    decoy = createDecoyPassword(cost);
+    decoys.set(cost, decoy);
+  }
+  return decoy;
 }

@@ -20,12 +20,12 @@ export function registerApiRoutes(
 ): void {
   registerHealthRoutes(routes, deps);
   registerAuthRoutes(routes, deps, issueCsrfToken);
-  registerMeRoutes(routes);
+  registerMeRoutes(routes, deps);
   registerCompanyRoutes(routes, deps);
   registerMembersRoutes(routes, deps);
   registerInvitationsRoutes(routes, deps);
   registerCustomersRoutes(routes, deps);
   registerSitesRoutes(routes, deps);
   registerAuditRoutes(routes);
-  registerPlansRoutes(routes);
+  registerPlansRoutes(routes, deps);
 }

@@ -1,6 +1,6 @@
 // Starts the API: connects, migrates when asked, listens, and shuts down gracefully on
-// SIGTERM/SIGINT (stop accepting, finish in-flight requests, stop the session sweep, close
-// the pool). Run directly with `tsx src/server.ts`, or call startServer() from a script.
+// SIGTERM/SIGINT (stop accepting, finish in-flight requests, stop the session sweep and the
+// planner threads, close the database pool). Run directly with `tsx src/server.ts`, or call startServer() from a script.
 import type { Server } from 'node:http';
 import { fileURLToPath } from 'node:url';
 import { createApp } from './app.js';
@@ -9,8 +9,10 @@ import type { Env } from './config/env.js';
 import { migrateDatabase } from './db/migrate.js';
 import { createSequelize } from './db/sequelize.js';
 import { createLogger } from './http/logging.js';
+import { answerMalformedRequests } from './http/malformed-requests.js';
 import { createSessionStore } from './http/session.js';
 import { createMailer } from './mail/mailer.js';
+import { PlannerPool } from './planner/planner-pool.js';
 
 export interface RunningServer {
   server: Server;
@@ -38,10 +40,13 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
   }
   const sessionStore = createSessionStore(sequelize, sessionSweepIntervalMs);
   const mailer = createMailer(env.smtp);
-  const app = createApp({ env, sequelize, logger, mailer, sessionStore });
+  const plannerPool = new PlannerPool(env.planner);
+  plannerPool.warm();
+  const app = createApp({ env, sequelize, logger, mailer, sessionStore, plannerPool });
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(env.port, '127.0.0.1', () => resolve(s));
   });
+  answerMalformedRequests(server);
   const url = `http://127.0.0.1:${env.port}`;
   logger.info({ url }, 'Seamwright API listening');
 
@@ -51,6 +56,7 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
       await new Promise<void>((resolve) => server.close(() => resolve()));
       sessionStore.stopExpiringSessions();
       mailer.close();
+      await plannerPool.close();
       await sequelize.close();
       logger.info('Seamwright API stopped');
     })();

@@ -14,15 +14,19 @@ export const timeZoneSchema = z
     }
   }, 'Choose a known time zone, such as America/Denver');
 
-export const updateCompanyInputSchema = z
-  .object({
-    name: requiredText('Company name', 120),
-    timeZone: timeZoneSchema,
-    region: optionalText(8),
-    address: optionalText(500),
-    measurementSystem: z.enum(['imperial', 'metric']),
-  })
-  .partial();
+/** Every editable detail of the company, as the settings form sends them all. */
+export const companyDetailsSchema = z.object({
+  name: requiredText('Company name', 120),
+  timeZone: timeZoneSchema,
+  region: optionalText(8),
+  /** The postal address as it prints on estimates and invoices (several lines). */
+  address: optionalText(500),
+  measurementSystem: z.enum(['imperial', 'metric']),
+});
+export type CompanyDetails = z.infer<typeof companyDetailsSchema>;
+
+/** `PATCH /api/company`: any of the details; fields left out stay as they are. */
+export const updateCompanyInputSchema = companyDetailsSchema.partial();
 export type UpdateCompanyInput = z.infer<typeof updateCompanyInputSchema>;
 
 /** `GET /api/company` and `PATCH /api/company`: the company with its editable details. */

@@ -4,10 +4,14 @@
  */
 export const ErrorCode = {
   ValidationFailed: 'VALIDATION_FAILED',
+  /** The request itself is malformed (a bad percent-escape, a body that does not match its length). */
+  BadRequest: 'BAD_REQUEST',
   Unauthenticated: 'UNAUTHENTICATED',
   InvalidCredentials: 'INVALID_CREDENTIALS',
   Forbidden: 'FORBIDDEN',
   CsrfInvalid: 'CSRF_INVALID',
+  /** The active company removed the person; they still belong to another and must choose one. */
+  CompanyAccessEnded: 'COMPANY_ACCESS_ENDED',
   NotFound: 'NOT_FOUND',
   Conflict: 'CONFLICT',
   EmailTaken: 'EMAIL_TAKEN',
@@ -15,6 +19,14 @@ export const ErrorCode = {
   Unprocessable: 'UNPROCESSABLE',
   RateLimited: 'RATE_LIMITED',
   PayloadTooLarge: 'PAYLOAD_TOO_LARGE',
+  /** A Content-Type, charset or Content-Encoding the API does not read. */
+  UnsupportedMediaType: 'UNSUPPORTED_MEDIA_TYPE',
+  /** Request headers over the server's limit. */
+  HeadersTooLarge: 'HEADERS_TOO_LARGE',
+  /** The request did not arrive in time. */
+  RequestTimeout: 'REQUEST_TIMEOUT',
+  /** The server is busy (e.g. the layout planner's queue is full); try again after Retry-After. */
+  ServiceBusy: 'SERVICE_BUSY',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

@@ -4,6 +4,7 @@ export * from './list.js';
 export * from './text.js';
 export * from './auth.js';
 export * from './company.js';
+export * from './profile.js';
 export * from './members.js';
 export * from './customers.js';
 export * from './sites.js';

@@ -6,3 +6,5 @@ export * from './materials/index.js';
 export * from './cautions/index.js';
 // Turf layout planner: strips, cuts, seams, cut sheet (layout helper).
 export * from './layout/index.js';
+// Job planner: several areas of one job planned together (job helper).
+export * from './job/index.js';

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { createApp, loadEnv, selectRows } from '@seamwright/api';
+import { createApp, decoyPasswordFor, loadEnv, selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import { newClient } from '../../fixtures/client.js';
 import { signUpCompany, testPassword, uniqueEmail } from '../../fixtures/factories.js';
@@ -159,6 +159,21 @@ describe('sign-in, me and sign-out', () => {
     expect(unknown.body.detail).toBe(wrong.body.detail);
   });
 
+  it('checks an unknown e-mail against a decoy of the same bcrypt cost as real passwords', async () => {
+    const { app, sequelize } = testApp();
+    const owner = await signUpCompany(app);
+    const [row] = await selectRows<{ password_hash: string }>(
+      sequelize,
+      'SELECT password_hash FROM users WHERE id = ?',
+      [owner.me.user.id],
+    );
+    const cost = String(loadEnv().bcryptCost).padStart(2, '0');
+    // `$2b$04$…`: the cost is the second field; a cheaper decoy would answer unknown e-mails faster.
+    const decoyPrefix = decoyPasswordFor(loadEnv().bcryptCost).hash.slice(0, 7);
+    expect(decoyPrefix).toBe(`$2b$${cost}$`);
+    expect(decoyPrefix).toBe(String(row?.password_hash).slice(0, 7));
+  });
+
   it('answers 401 UNAUTHENTICATED on /api/me when signed out', async () => {
     const res = await request(testApp().app).get('/api/me').expect(401);
     expect(res.body.code).toBe('UNAUTHENTICATED');
@@ -192,8 +207,8 @@ describe('sign-in, me and sign-out', () => {
   });
 
   it('counts failed sign-ins in the database, so a second API process sees the same limit', async () => {
-    const { app, sequelize } = testApp();
-    const secondProcess = createApp({ env: loadEnv(), sequelize });
+    const { app, sequelize, plannerPool } = testApp();
+    const secondProcess = createApp({ env: loadEnv(), sequelize, plannerPool });
     const owner = await signUpCompany(app);
     const first = await newClient(app);
     for (let i = 0; i < 5; i += 1)

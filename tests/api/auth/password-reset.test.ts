@@ -1,5 +1,6 @@
+import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { executeSql, selectRows } from '@seamwright/api';
+import { createApp, executeSql, loadEnv, selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import { newClient } from '../../fixtures/client.js';
 import { signUpCompany, testPassword, uniqueEmail } from '../../fixtures/factories.js';
@@ -83,3 +84,111 @@ describe('password reset', () => {
     expect(short.body.errors[0].path).toBe('password');
   });
 });
+
+describe('password reset links and sessions', () => {
+  it('a new request retires the earlier link, so only the newest one works', async () => {
+    const { app } = testApp();
+    const owner = await signUpCompany(app);
+    const client = await newClient(app);
+    await client.post('/api/auth/password-reset', { email: owner.email }).expect(202);
+    const first = tokenFromMail(await waitForMail(owner.email), 'reset-password');
+    await client.post('/api/auth/password-reset', { email: owner.email }).expect(202);
+    const second = await waitForNewToken(owner.email, first);
+
+    const stale = await client
+      .post(`/api/auth/password-reset/${first}`, { password: newPassword })
+      .expect(410);
+    expect(stale.body.code).toBe('TOKEN_INVALID');
+    await client.post(`/api/auth/password-reset/${second}`, { password: newPassword }).expect(204);
+    await client.post('/api/auth/login', { email: owner.email, password: newPassword }).expect(200);
+  });
+
+  it('a completed reset retires every other outstanding link and ends every session of the user', async () => {
+    const { app, sequelize } = testApp();
+    const owner = await signUpCompany(app);
+    const elsewhere = await newClient(app);
+    await elsewhere
+      .post('/api/auth/login', { email: owner.email, password: testPassword })
+      .expect(200);
+    // A second link still open (e.g. asked for on another device just as the first was used).
+    const other = `other-link-${randomUUID()}`;
+    await executeSql(
+      sequelize,
+      `INSERT INTO password_resets (id, user_id, token_hash, expires_at, used_at, created_at)
+       VALUES (UUID(), ?, SHA2(?, 256), NOW() + INTERVAL 1 HOUR, NULL, NOW(3))`,
+      [owner.me.user.id, other],
+    );
+    const anonymous = await newClient(app);
+    await anonymous.post('/api/auth/password-reset', { email: owner.email }).expect(202);
+    const token = tokenFromMail(await waitForMail(owner.email), 'reset-password');
+    // Asking alone ends no session.
+    await owner.client.get('/api/me').expect(200);
+
+    await anonymous
+      .post(`/api/auth/password-reset/${token}`, { password: newPassword })
+      .expect(204);
+    const open = await selectRows(
+      sequelize,
+      'SELECT id FROM password_resets WHERE user_id = ? AND used_at IS NULL',
+      [owner.me.user.id],
+    );
+    expect(open).toHaveLength(0);
+    await anonymous
+      .post(`/api/auth/password-reset/${other}`, { password: 'yet-another-password' })
+      .expect(410);
+    await owner.client.get('/api/me').expect(401);
+    await elsewhere.get('/api/me').expect(401);
+    expect(
+      await selectRows(sequelize, 'SELECT sid FROM sessions WHERE user_id = ?', [owner.me.user.id]),
+    ).toHaveLength(0);
+  });
+});
+
+describe('password reset timing', () => {
+  it('answers before the e-mail is delivered, the same for known and unknown addresses', async () => {
+    const { sequelize } = testApp();
+    const delivered: string[] = [];
+    // A mail server that accepts the connection and never answers.
+    const stuckMailer = {
+      send: (mail: { to: string }) => {
+        delivered.push(mail.to);
+        return new Promise<void>(() => undefined);
+      },
+      close: () => undefined,
+    };
+    const app = createApp({
+      env: loadEnv(),
+      sequelize,
+      mailer: stuckMailer,
+      plannerPool: testApp().plannerPool,
+    });
+    const owner = await signUpCompany(app);
+    const client = await newClient(app);
+    const known = await client
+      .post('/api/auth/password-reset', { email: owner.email })
+      .timeout(3000)
+      .expect(202);
+    const unknown = await client
+      .post('/api/auth/password-reset', { email: uniqueEmail('nobody') })
+      .timeout(3000)
+      .expect(202);
+    expect(known.body).toEqual(unknown.body);
+    // The link was still made and handed to the mailer, after the answer.
+    await expect.poll(() => delivered, { timeout: 3000 }).toEqual([owner.email]);
+    const links = await selectRows(sequelize, 'SELECT id FROM password_resets WHERE user_id = ?', [
+      owner.me.user.id,
+    ]);
+    expect(links).toHaveLength(1);
+  });
+});
+
+/** Waits for a reset e-mail whose token differs from `previous`. */
+async function waitForNewToken(email: string, previous: string): Promise<string> {
+  const deadline = Date.now() + 3000;
+  while (Date.now() < deadline) {
+    const token = tokenFromMail(await waitForMail(email), 'reset-password');
+    if (token !== previous) return token;
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+  throw new Error(`no second reset e-mail to ${email}`);
+}

@@ -13,7 +13,10 @@ describe('GET /api/health', () => {
     const env = loadEnv({ ...process.env, DB_PORT: '1' });
     const sequelize = createSequelize(env.db);
     try {
-      const res = await request(createApp({ env, sequelize })).get('/api/health').expect(503);
+      const { plannerPool } = testApp();
+      const res = await request(createApp({ env, sequelize, plannerPool }))
+        .get('/api/health')
+        .expect(503);
       expect(res.body.data).toMatchObject({ api: 'ok', database: 'down' });
     } finally {
       await sequelize.close();

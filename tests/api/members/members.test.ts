@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
-import { addMember, signUpCompany } from '../../fixtures/factories.js';
+import {
+  addMember,
+  createCustomer,
+  signUpCompany,
+  testPassword,
+} from '../../fixtures/factories.js';
+import { tokenFromMail, waitForMail } from '../../fixtures/mail.js';
 
 interface Member {
   id: string;
@@ -54,6 +60,61 @@ describe('members', () => {
       entityId: member.id,
       userName: 'Olive Owner',
     });
+  });
+
+  it('asks a removed member who still has another company to choose one, and never serves that company on its own', async () => {
+    const { app } = testApp();
+    const person = await signUpCompany(app, 'Home Turf Co');
+    const homeCustomer = await createCustomer(person.client, { name: 'Home-only customer' });
+    const other = await signUpCompany(app, 'Visited Yard Co');
+    await other.client
+      .post('/api/invitations', { email: person.email, role: 'office' })
+      .expect(201);
+    const token = tokenFromMail(await waitForMail(person.email), 'invitations');
+    const joined = await person.client
+      .post(`/api/invitations/${token}/accept`, { password: testPassword })
+      .expect(200);
+    expect(joined.body.data.company.id).toBe(other.me.company.id);
+
+    const member = (
+      (await other.client.get('/api/members').expect(200)).body.data as Member[]
+    ).find((m) => m.userId === person.me.user.id)!;
+    await other.client.del(`/api/members/${member.id}`).expect(204);
+
+    // Not 200 with the home company's customers: the screen was opened for the other company.
+    const ended = await person.client.get('/api/customers').expect(403);
+    expect(ended.body.code).toBe('COMPANY_ACCESS_ENDED');
+    expect(ended.headers['content-type']).toMatch(/problem\+json/);
+    expect(JSON.stringify(ended.body)).not.toContain(homeCustomer.id);
+    // Still signed in, but without an active company until they choose one.
+    expect((await person.client.get('/api/me').expect(403)).body.code).toBe('COMPANY_ACCESS_ENDED');
+    await person.client.post('/api/customers', { name: 'Nowhere' }).expect(403);
+    const companies = await person.client.get('/api/me/companies').expect(200);
+    expect(companies.body.data).toEqual([
+      { companyId: person.me.company.id, companyName: 'Home Turf Co', role: 'owner' },
+    ]);
+
+    await person.client.post('/api/me/company', { companyId: other.me.company.id }).expect(404);
+    const chosen = await person.client
+      .post('/api/me/company', { companyId: person.me.company.id })
+      .expect(200);
+    expect(chosen.body.data).toMatchObject({ role: 'owner', company: { name: 'Home Turf Co' } });
+    const list = await person.client.get('/api/customers').expect(200);
+    expect(JSON.stringify(list.body)).toContain(homeCustomer.id);
+  });
+
+  it('ends the session of a removed member who has no company left', async () => {
+    const { app } = testApp();
+    const owner = await signUpCompany(app);
+    const office = await addMember(app, owner.client, 'office');
+    const member = (
+      (await owner.client.get('/api/members').expect(200)).body.data as Member[]
+    ).find((m) => m.userId === office.me.user.id)!;
+    await owner.client.del(`/api/members/${member.id}`).expect(204);
+    expect((await office.client.get('/api/me').expect(401)).body.code).toBe('UNAUTHENTICATED');
+    // The session is gone, not merely without a company.
+    await office.client.get('/api/me/companies').expect(401);
+    await office.client.post('/api/me/company', { companyId: owner.me.company.id }).expect(401);
   });
 
   it("applies a role change on the member's next request", async () => {

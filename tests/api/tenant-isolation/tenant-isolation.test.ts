@@ -10,6 +10,7 @@ import {
   createCustomer,
   createSite,
   signUpCompany,
+  testPassword,
   uniqueEmail,
 } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
@@ -24,8 +25,10 @@ interface World {
   aOfficeMemberId: string;
 }
 
+/** `signed-in` routes need a signed-in person but no active company (choosing a company). */
 type Probe =
-  { kind: 'public'; why: string } | { kind: 'tenant'; run: (b: Client, w: World) => Promise<void> };
+  | { kind: 'public'; why: string }
+  | { kind: 'tenant' | 'signed-in'; run: (b: Client, w: World) => Promise<void> };
 
 const notFound = async (pending: PromiseLike<{ status: number; body: { code?: string } }>) => {
   const res = await pending;
@@ -60,8 +63,51 @@ const probes: Record<string, Probe> = {
       expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
     },
   },
-  'post /api/me/company': {
+  'get /api/me/companies': {
+    kind: 'signed-in',
+    run: async (b, w) => {
+      const res = await b.get('/api/me/companies').expect(200);
+      const companies = (res.body as { data: { companyId: string }[] }).data;
+      expect(companies.map((c) => c.companyId)).toEqual([w.b.me.company.id]);
+      expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
+    },
+  },
+  'patch /api/me': {
     kind: 'tenant',
+    run: async (b, w) => {
+      // Whatever ids the body names, only the session's own user is renamed.
+      const res = await b
+        .patch('/api/me', { name: 'Bravo Renamed', id: w.a.me.user.id, userId: w.a.me.user.id })
+        .expect(200);
+      expect(res.body.data.user.id).toBe(w.b.me.user.id);
+      const [aUser] = await selectRows(testApp().sequelize, 'SELECT name FROM users WHERE id = ?', [
+        w.a.me.user.id,
+      ]);
+      expect(aUser?.name).toBe(w.a.me.user.name);
+    },
+  },
+  'post /api/me/password': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const hashOfA = () =>
+        selectRows(testApp().sequelize, 'SELECT password_hash FROM users WHERE id = ?', [
+          w.a.me.user.id,
+        ]);
+      const before = await hashOfA();
+      await b
+        .post('/api/me/password', {
+          currentPassword: testPassword,
+          newPassword: 'bravo-isolation-password-2',
+          userId: w.a.me.user.id,
+        })
+        .expect(204);
+      expect(await hashOfA()).toEqual(before);
+      // A's sessions are not B's "other sessions".
+      await w.a.client.get('/api/me').expect(200);
+    },
+  },
+  'post /api/me/company': {
+    kind: 'signed-in',
     run: (b, w) => notFound(b.post('/api/me/company', { companyId: w.a.me.company.id })),
   },
   'get /api/company': {
@@ -196,6 +242,29 @@ const probes: Record<string, Probe> = {
       await b.post('/api/plans/preview', body).expect(200);
     },
   },
+  'post /api/plans/job-preview': {
+    kind: 'tenant',
+    run: async (b) => {
+      // Stateless computation: reads and writes no company rows.
+      const body = {
+        areas: [
+          {
+            id: 'front',
+            area: {
+              outer: [
+                [0, 0],
+                [12, 0],
+                [12, 10],
+                [0, 10],
+              ],
+            },
+          },
+        ],
+        rolls: [{ widthFt: 12 }],
+      };
+      await b.post('/api/plans/job-preview', body).expect(200);
+    },
+  },
   'get /api/audit-events': {
     kind: 'tenant',
     run: async (b, w) => {
@@ -262,12 +331,12 @@ describe('tenant isolation', () => {
     expect(Object.keys(probes).filter((key) => !registered.includes(key))).toEqual([]);
   });
 
-  it('routes marked public in the table are public in the app, and every other route needs a member', () => {
+  it('routes marked public in the table are public in the app, and every other route needs a member (or, to choose a company, a signed-in person)', () => {
     for (const route of testApp().app.locals.apiRoutes) {
       const probe = probes[`${route.method} ${route.path}`];
       expect({ route: `${route.method} ${route.path}`, access: route.access }).toEqual({
         route: `${route.method} ${route.path}`,
-        access: probe?.kind === 'public' ? 'public' : 'tenant',
+        access: probe?.kind ?? 'tenant',
       });
     }
   });
@@ -275,7 +344,7 @@ describe('tenant isolation', () => {
   it("gives company B 404 (never A's data) on every tenant route, and leaves A's rows untouched", async () => {
     const before = await snapshotOfA(world);
     for (const [key, probe] of Object.entries(probes)) {
-      if (probe.kind !== 'tenant') continue;
+      if (probe.kind === 'public') continue;
       try {
         await probe.run(world.b.client, world);
       } catch (error) {

@@ -1,4 +1,5 @@
 // The only file that reads process.env. Everything else receives a typed `Env`.
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const devSessionSecret = 'seamwright-dev-session-secret-not-for-production';
@@ -6,6 +7,9 @@ const devSessionSecret = 'seamwright-dev-session-secret-not-for-production';
 const booleanish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
   .transform((value) => value === 'true' || value === '1' || value === 'yes');
+
+/** A request count allowed within a rate-limit window. */
+const allowance = (fallback: number) => z.coerce.number().int().min(1).default(fallback);
 
 const envSchema = z
   .object({
@@ -23,8 +27,12 @@ const envSchema = z
     MAIL_FROM: z.string().min(3).default('Seamwright <no-reply@seamwright.test>'),
     WEB_DIST_DIR: z.string().min(1).optional(),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
-    /** Express `trust proxy`: a hop count, or true/false. */
-    TRUST_PROXY: z.string().optional(),
+    /** Express `trust proxy`: a hop count, or true/false (required in production). */
+    TRUST_PROXY: z
+      .string()
+      .trim()
+      .regex(/^(|true|false|\d{1,2})$/, 'TRUST_PROXY must be true, false or a hop count')
+      .optional(),
     /** bcrypt cost; 12 in production, lower in tests so the suite stays fast. */
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
     /** Failed sign-ins allowed per IP + e-mail within the window before 429. */
@@ -34,17 +42,64 @@ const envSchema = z
       .int()
       .min(1000)
       .default(15 * 60 * 1000),
+    /**
+     * Rate limits of the other sign-in flows, each per IP and per account (e-mail, link token or
+     * user), within one window. Per-IP allowances are generous because an office shares one IP.
+     */
+    RATE_LIMIT_WINDOW_MS: z.coerce
+      .number()
+      .int()
+      .min(1000)
+      .default(15 * 60 * 1000),
+    /** Failed sign-ins from one IP across all e-mails (LOGIN_MAX_FAILURES is per IP + e-mail). */
+    RATE_LIMIT_LOGIN_FAILURES_PER_IP: allowance(50),
+    RATE_LIMIT_SIGNUP_PER_IP: allowance(10),
+    RATE_LIMIT_SIGNUP_PER_EMAIL: allowance(3),
+    RATE_LIMIT_RESET_REQUEST_PER_IP: allowance(10),
+    RATE_LIMIT_RESET_REQUEST_PER_EMAIL: allowance(3),
+    RATE_LIMIT_RESET_PER_IP: allowance(20),
+    RATE_LIMIT_RESET_PER_TOKEN: allowance(5),
+    RATE_LIMIT_ACCEPT_PER_IP: allowance(20),
+    RATE_LIMIT_ACCEPT_PER_TOKEN: allowance(5),
+    RATE_LIMIT_INVITE_PER_IP: allowance(60),
+    RATE_LIMIT_INVITE_PER_USER: allowance(30),
+    /** Invitation e-mails one company may send per 24 hours. */
+    INVITATION_MAILS_PER_COMPANY_PER_DAY: allowance(100),
     /** Serve sessions over https only (defaults to true in production). */
     COOKIE_SECURE: booleanish.optional(),
+    /** Layout-planner worker threads (default: one less than the cores, at least 1). */
+    PLANNER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+    /** Longest a planner task may run before it is stopped and answered 422. */
+    PLANNER_BUDGET_MS: z.coerce.number().int().min(50).max(600_000).default(5000),
+    /** Planner tasks allowed to wait for a thread; past it the API answers 503. */
+    PLANNER_MAX_QUEUE: z.coerce.number().int().min(0).max(10_000).optional(),
   })
   .superRefine((value, ctx) => {
-    if (value.NODE_ENV === 'production' && !value.SESSION_SECRET) {
+    if (value.NODE_ENV !== 'production') return;
+    // Fail closed: a production server never falls back to a development default.
+    const missing = (name: keyof typeof value, why: string) =>
+      ctx.addIssue({
+        code: 'custom',
+        path: [name],
+        message: `${name} is required in production (${why})`,
+      });
+    if (!value.SESSION_SECRET) missing('SESSION_SECRET', 'it signs session and CSRF cookies');
+    else if (value.SESSION_SECRET === devSessionSecret)
       ctx.addIssue({
         code: 'custom',
         path: ['SESSION_SECRET'],
-        message: 'SESSION_SECRET is required in production',
+        message:
+          'SESSION_SECRET must be your own secret in production, not the development default',
       });
-    }
+    if (!value.APP_URL) missing('APP_URL', 'the origin state-changing requests must come from');
+    if (value.TRUST_PROXY === undefined || value.TRUST_PROXY === '')
+      missing('TRUST_PROXY', "set it explicitly, 'false' when no proxy is in front");
+    if (value.COOKIE_SECURE === false)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['COOKIE_SECURE'],
+        message: 'COOKIE_SECURE cannot be false in production',
+      });
   });
 
 export interface Env {
@@ -59,14 +114,75 @@ export interface Env {
   trustProxy: boolean | number;
   bcryptCost: number;
   login: { maxFailures: number; windowMs: number };
+  rateLimits: RateLimits;
+  /** Secure cookies and HSTS. */
   cookieSecure: boolean;
+  /** `__Host-` names when served over https with Secure cookies: bound to this exact host. */
+  cookieNames: { session: string; csrf: string };
+  /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
+  trustedOrigins: string[];
+  planner: { threads: number; budgetMs: number; maxQueue: number };
 }
+
+/** Allowed requests per window, per IP and per account (e-mail, token or user). */
+export interface FlowLimit {
+  perIp: number;
+  perAccount: number;
+}
+
+export interface RateLimits {
+  windowMs: number;
+  loginFailuresPerIp: number;
+  signup: FlowLimit;
+  passwordResetRequest: FlowLimit;
+  passwordReset: FlowLimit;
+  invitationAccept: FlowLimit;
+  invitationSend: FlowLimit;
+  invitationMailsPerCompanyPerDay: number;
+}
+
+/** The Vite dev server (apps/web/vite.config.ts) proxies /api from its own origin. */
+const viteDevOrigins = ['http://127.0.0.1:5173', 'http://localhost:5173'];
 
 function parseTrustProxy(raw: string | undefined): boolean | number {
   if (raw === undefined || raw === '' || raw === 'false' || raw === '0') return false;
   if (raw === 'true') return true;
-  const hops = Number(raw);
-  return Number.isInteger(hops) && hops > 0 ? hops : false;
+  return Number(raw);
+}
+
+/**
+ * APP_URL's origin. In development also the Vite dev server and the other spelling of a
+ * loopback APP_URL (`localhost` for `127.0.0.1`), since developers type either.
+ */
+function trustedOriginsFor(appUrl: string, nodeEnv: Env['nodeEnv']): string[] {
+  const url = new URL(appUrl);
+  if (nodeEnv !== 'development') return [url.origin];
+  const loopbackAlias: Record<string, string> = {
+    '127.0.0.1': 'localhost',
+    localhost: '127.0.0.1',
+  };
+  const origins = [url.origin];
+  const alias = loopbackAlias[url.hostname];
+  if (alias) {
+    url.hostname = alias;
+    origins.push(url.origin);
+  }
+  return [...origins, ...viteDevOrigins];
+}
+
+function cookieNamesFor(appUrl: string, secure: boolean): Env['cookieNames'] {
+  const prefix = secure && appUrl.startsWith('https:') ? '__Host-' : '';
+  return { session: `${prefix}sw.sid`, csrf: `${prefix}sw.csrf` };
+}
+
+/** A queue of four tasks per thread keeps a burst waiting briefly instead of refused. */
+function plannerConfig(
+  threads: number | undefined,
+  budgetMs: number,
+  maxQueue: number | undefined,
+): Env['planner'] {
+  const count = threads ?? Math.max(1, availableParallelism() - 1);
+  return { threads: count, budgetMs, maxQueue: maxQueue ?? count * 4 };
 }
 
 /**
@@ -81,6 +197,8 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
   }
   const e = parsed.data;
   const isProduction = e.NODE_ENV === 'production';
+  const appUrl = (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, '');
+  const cookieSecure = e.COOKIE_SECURE ?? isProduction;
   return {
     nodeEnv: e.NODE_ENV,
     port: e.PORT,
@@ -92,13 +210,35 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       password: e.DB_PASSWORD,
     },
     sessionSecret: e.SESSION_SECRET ?? devSessionSecret,
-    appUrl: (e.APP_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/+$/, ''),
+    appUrl,
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, from: e.MAIL_FROM },
     webDistDir: e.WEB_DIST_DIR ?? null,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     bcryptCost: e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12),
     login: { maxFailures: e.LOGIN_MAX_FAILURES, windowMs: e.LOGIN_WINDOW_MS },
-    cookieSecure: e.COOKIE_SECURE ?? isProduction,
+    rateLimits: {
+      windowMs: e.RATE_LIMIT_WINDOW_MS,
+      loginFailuresPerIp: e.RATE_LIMIT_LOGIN_FAILURES_PER_IP,
+      signup: { perIp: e.RATE_LIMIT_SIGNUP_PER_IP, perAccount: e.RATE_LIMIT_SIGNUP_PER_EMAIL },
+      passwordResetRequest: {
+        perIp: e.RATE_LIMIT_RESET_REQUEST_PER_IP,
+        perAccount: e.RATE_LIMIT_RESET_REQUEST_PER_EMAIL,
+      },
+      passwordReset: { perIp: e.RATE_LIMIT_RESET_PER_IP, perAccount: e.RATE_LIMIT_RESET_PER_TOKEN },
+      invitationAccept: {
+        perIp: e.RATE_LIMIT_ACCEPT_PER_IP,
+        perAccount: e.RATE_LIMIT_ACCEPT_PER_TOKEN,
+      },
+      invitationSend: {
+        perIp: e.RATE_LIMIT_INVITE_PER_IP,
+        perAccount: e.RATE_LIMIT_INVITE_PER_USER,
+      },
+      invitationMailsPerCompanyPerDay: e.INVITATION_MAILS_PER_COMPANY_PER_DAY,
+    },
+    cookieSecure,
+    cookieNames: cookieNamesFor(appUrl, cookieSecure),
+    trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
+    planner: plannerConfig(e.PLANNER_THREADS, e.PLANNER_BUDGET_MS, e.PLANNER_MAX_QUEUE),
   };
 }

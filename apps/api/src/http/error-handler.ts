@@ -1,28 +1,17 @@
 // The one place errors become HTTP answers.
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors.js';
+import { clientErrorFrom } from './client-errors.js';
 import { sendProblem } from './problem.js';
 
-interface BodyParserError {
-  type?: string;
-  status?: number;
-}
-
-function isBodyParserError(error: unknown): error is BodyParserError {
-  return typeof error === 'object' && error !== null && 'type' in error && 'status' in error;
-}
-
-/** Translates anything thrown into problem+json. Unknown errors: logged, generic 500. */
+/**
+ * Translates anything thrown into problem+json. Library errors with a 4xx status are the
+ * client's (see client-errors.ts); anything else is logged and answered with a generic 500.
+ */
 export const errorHandler: ErrorRequestHandler = (error: unknown, req, res, _next) => {
   const requestId = typeof req.id === 'string' ? req.id : undefined;
-  let appError: AppError;
-  if (error instanceof AppError) {
-    appError = error;
-  } else if (isBodyParserError(error) && error.type === 'entity.parse.failed') {
-    appError = new AppError('VALIDATION_FAILED', 'The request body is not valid JSON');
-  } else if (isBodyParserError(error) && error.type === 'entity.too.large') {
-    appError = new AppError('PAYLOAD_TOO_LARGE', 'The request body is too large');
-  } else {
+  let appError = error instanceof AppError ? error : clientErrorFrom(error);
+  if (!appError) {
     req.log.error({ err: error, requestId }, 'unhandled error');
     appError = new AppError(
       'INTERNAL',

@@ -6,10 +6,12 @@ import type { AppError } from '../errors.js';
 /** The single code → HTTP status map. */
 export const statusByCode: Record<ErrorCode, number> = {
   VALIDATION_FAILED: 400,
+  BAD_REQUEST: 400,
   UNAUTHENTICATED: 401,
   INVALID_CREDENTIALS: 401,
   FORBIDDEN: 403,
   CSRF_INVALID: 403,
+  COMPANY_ACCESS_ENDED: 403,
   NOT_FOUND: 404,
   CONFLICT: 409,
   EMAIL_TAKEN: 409,
@@ -17,15 +19,21 @@ export const statusByCode: Record<ErrorCode, number> = {
   UNPROCESSABLE: 422,
   RATE_LIMITED: 429,
   PAYLOAD_TOO_LARGE: 413,
+  UNSUPPORTED_MEDIA_TYPE: 415,
+  HEADERS_TOO_LARGE: 431,
+  REQUEST_TIMEOUT: 408,
+  SERVICE_BUSY: 503,
   INTERNAL: 500,
 };
 
 const titles: Record<ErrorCode, string> = {
   VALIDATION_FAILED: 'Some fields need attention',
+  BAD_REQUEST: 'The request is malformed',
   UNAUTHENTICATED: 'Sign in to continue',
   INVALID_CREDENTIALS: 'E-mail or password is wrong',
   FORBIDDEN: 'Your role cannot do this',
   CSRF_INVALID: 'The form expired; reload and try again',
+  COMPANY_ACCESS_ENDED: 'Your access to this company has ended',
   NOT_FOUND: 'Not found',
   CONFLICT: 'This conflicts with the current state',
   EMAIL_TAKEN: 'That e-mail already has an account',
@@ -33,6 +41,10 @@ const titles: Record<ErrorCode, string> = {
   UNPROCESSABLE: 'The request cannot be processed',
   RATE_LIMITED: 'Too many attempts',
   PAYLOAD_TOO_LARGE: 'The request is too large',
+  UNSUPPORTED_MEDIA_TYPE: 'The request body is in a format the API does not read',
+  HEADERS_TOO_LARGE: 'The request headers are too large',
+  REQUEST_TIMEOUT: 'The request took too long',
+  SERVICE_BUSY: 'The server is busy; try again shortly',
   INTERNAL: 'Something went wrong on our side',
 };
 

@@ -4,12 +4,15 @@
 import { Router } from 'express';
 import type { RequestHandler } from 'express';
 import type { Action } from '@seamwright/shared';
-import { requirePermission, requireTenant } from './tenant-context.js';
+import { requirePermission, requireSignedIn, requireTenant } from './tenant-context.js';
 
 export type HttpMethod = 'get' | 'post' | 'patch' | 'put' | 'delete';
 
-/** `public`: anyone; `tenant`: a signed-in member of the active company. */
-export type Access = 'public' | 'tenant';
+/**
+ * `public`: anyone; `tenant`: a signed-in member of the active company; `signed-in`: a signed-in
+ * person with or without an active company (only to list and choose their companies).
+ */
+export type Access = 'public' | 'tenant' | 'signed-in';
 
 export interface RouteEntry {
   method: HttpMethod;
@@ -38,6 +41,7 @@ export class RouteTable {
   ): void {
     const chain: RequestHandler[] = [];
     if (options.access === 'tenant') chain.push(requireTenant);
+    if (options.access === 'signed-in') chain.push(requireSignedIn);
     if (options.permission) chain.push(requirePermission(options.permission));
     this.router[method](path, ...chain, ...handlers);
     this.entries.push({

@@ -1,5 +1,6 @@
 // Sessions live in MariaDB (our own store, http/session-store.ts), so any number of API
-// processes can serve the same users. The cookie holds only the session id.
+// processes can serve the same users. The cookie holds only the session id; its name comes
+// from the environment (`__Host-sw.sid` on https, see config/env.ts).
 import type { Request, RequestHandler, Response } from 'express';
 import session from 'express-session';
 import type { Sequelize } from 'sequelize';
@@ -15,7 +16,6 @@ declare module 'express-session' {
   }
 }
 
-export const sessionCookieName = 'sw.sid';
 const sessionMaxAgeMs = 14 * 24 * 60 * 60 * 1000;
 /**
  * A signed-in session's 14 days start again on activity, but its row and cookie are rewritten
@@ -49,7 +49,7 @@ const refreshNowAndThen: RequestHandler = (req, _res, next) => {
 
 export function createSessionMiddleware(env: Env, store: SessionStore): RequestHandler[] {
   const load = session({
-    name: sessionCookieName,
+    name: env.cookieNames.session,
     secret: env.sessionSecret,
     store,
     resave: false,
@@ -90,7 +90,7 @@ export async function signOut(req: Request, res: Response, env: Env): Promise<vo
   await new Promise<void>((resolve, reject) =>
     req.session.destroy((err) => (err ? reject(err as Error) : resolve())),
   );
-  res.clearCookie(sessionCookieName, {
+  res.clearCookie(env.cookieNames.session, {
     httpOnly: true,
     sameSite: 'lax',
     secure: env.cookieSecure,

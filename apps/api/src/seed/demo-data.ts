@@ -2,6 +2,7 @@
 import type { Role } from '@seamwright/shared';
 import type { Sequelize } from 'sequelize';
 import type { Env } from '../config/env.js';
+import type { RequestContext } from '../context.js';
 import {
   CompanyModel,
   CustomerModel,
@@ -9,6 +10,7 @@ import {
   SiteModel,
   UserModel,
 } from '../db/models/index.js';
+import { scoped } from '../db/tenant-scope.js';
 import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
@@ -54,21 +56,27 @@ export async function seedDemoData(
       { ...demoCompany, region: null, settings: {} },
       { transaction },
     );
+    // The seed acts as each demo user in turn, so its rows go through the same scoping as a
+    // request's; the owner (listed first) adds the customers and sites.
+    const contexts: RequestContext[] = [];
     for (const demoUser of demoUsers) {
       const [user] = await UserModel.findOrCreate({
         where: { email: demoUser.email },
         defaults: { name: demoUser.name, email: demoUser.email, passwordHash },
         transaction,
       });
-      await MembershipModel.create(
-        { companyId: company.id, userId: user.id, role: demoUser.role },
-        { transaction },
+      const ctx = { companyId: company.id, userId: user.id, role: demoUser.role };
+      await scoped(ctx, MembershipModel).create(
+        { userId: user.id, role: demoUser.role },
+        transaction,
       );
+      contexts.push(ctx);
     }
+    const [owner] = contexts;
+    if (!owner) throw new Error('The demo needs at least one user.');
     for (const demo of demoCustomers) {
-      const customer = await CustomerModel.create(
+      const customer = await scoped(owner, CustomerModel).create(
         {
-          companyId: company.id,
           name: demo.name,
           email: demo.email,
           phone: demo.phone,
@@ -78,20 +86,19 @@ export async function seedDemoData(
           notes: demo.notes,
           archivedAt: demo.archived ? new Date() : null,
         },
-        { transaction },
+        transaction,
       );
       for (const site of demo.sites) {
-        await SiteModel.create(
+        await scoped(owner, SiteModel).create(
           {
             ...site,
-            companyId: company.id,
             customerId: customer.id,
             addressLine2: null,
             city: demoTown.city,
             region: null,
             postalCode: demoTown.postalCode,
           },
-          { transaction },
+          transaction,
         );
       }
     }

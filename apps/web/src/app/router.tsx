@@ -1,8 +1,19 @@
 import { createBrowserRouter, Outlet } from 'react-router-dom';
+import { FocusOnNavigate } from '../components/ui/route-focus';
 import { Loading } from '../components/ui/loading';
 import { paths, publicPathPrefixes } from '../config/paths';
-import { setUnauthenticatedHandler } from '../lib/api-client';
+import { setCompanyAccessEndedHandler, setUnauthenticatedHandler } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
+
+/** Every page, signed in or not: focus follows navigation to the new page's heading. */
+function RootLayout() {
+  return (
+    <>
+      <FocusOnNavigate />
+      <Outlet />
+    </>
+  );
+}
 
 /**
  * Every page is a lazy route, so the sign-in page loads only what it needs. Route modules
@@ -11,7 +22,7 @@ import { queryClient } from '../lib/query-client';
 export const router = createBrowserRouter([
   {
     id: 'root',
-    Component: Outlet,
+    Component: RootLayout,
     HydrateFallback: () => <Loading />,
     children: [
       { path: '/sign-in', lazy: () => import('./routes/sign-in') },
@@ -19,6 +30,7 @@ export const router = createBrowserRouter([
       { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
       { path: '/reset-password/:token', lazy: () => import('./routes/reset-password') },
       { path: '/invitations/:token', lazy: () => import('./routes/invitation') },
+      { path: '/choose-company', lazy: () => import('./routes/choose-company') },
       {
         id: 'app',
         lazy: () => import('./routes/app-layout'),
@@ -29,6 +41,7 @@ export const router = createBrowserRouter([
           { path: '/customers/:customerId', lazy: () => import('./routes/customer') },
           { path: '/layout', lazy: () => import('./routes/layout-preview') },
           { path: '/settings', lazy: () => import('./routes/settings') },
+          { path: '/profile', lazy: () => import('./routes/profile') },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },
@@ -43,4 +56,13 @@ setUnauthenticatedHandler(() => {
   if (router.state.navigation.state !== 'idle') return; // a loader is already redirecting
   queryClient.clear();
   void router.navigate(paths.signIn(`${pathname}${search}`), { replace: true });
+});
+
+// Removed from the active company while using it: nothing cached belongs to a company any more;
+// the person picks one of the companies they still belong to.
+setCompanyAccessEndedHandler(() => {
+  if (window.location.pathname === paths.chooseCompany) return;
+  if (router.state.navigation.state !== 'idle') return; // a loader is already redirecting
+  queryClient.clear();
+  void router.navigate(paths.chooseCompany, { replace: true });
 });

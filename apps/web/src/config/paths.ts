@@ -2,6 +2,8 @@
 export const paths = {
   signIn: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
   signUp: '/sign-up',
+  /** After access to the active company ended: pick one of the others. */
+  chooseCompany: '/choose-company',
   forgotPassword: '/forgot-password',
   resetPassword: (token: string) => `/reset-password/${encodeURIComponent(token)}`,
   invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
@@ -11,6 +13,7 @@ export const paths = {
   customer: (id: string) => `/customers/${encodeURIComponent(id)}`,
   layout: '/layout',
   settings: '/settings',
+  profile: '/profile',
 } as const;
 
 /** Pages a signed-out visitor may open; a 401 there must not bounce back to sign-in. */

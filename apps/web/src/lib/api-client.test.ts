@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ErrorCode } from '@seamwright/shared';
-import { ApiError, api, refreshCsrfToken } from './api-client';
+import { ApiError, api, refreshCsrfToken, setCompanyAccessEndedHandler } from './api-client';
 
 function problem(status: number, body: unknown): Response {
   return new Response(JSON.stringify(body), {
@@ -62,6 +62,18 @@ describe('api client error mapping', () => {
       { path: 'sites.0.city', message: 'Town or city is required' },
     ]);
     expect(apiError.fieldMessage('sites.0.city')).toBe('Town or city is required');
+  });
+
+  it('hands 403 COMPANY_ACCESS_ENDED to the router (choose a company) and still throws', async () => {
+    const ended = vi.fn();
+    setCompanyAccessEndedHandler(ended);
+    stubFetch(() =>
+      problem(403, { type: 'x', title: 'ended', status: 403, code: 'COMPANY_ACCESS_ENDED' }),
+    );
+    const error = await api.get('/customers').catch((e: unknown) => e);
+    setCompanyAccessEndedHandler(null);
+    expect((error as ApiError).code).toBe(ErrorCode.CompanyAccessEnded);
+    expect(ended).toHaveBeenCalledTimes(1);
   });
 
   it('derives a code from the status when the body is not problem+json', async () => {

@@ -18,10 +18,16 @@ const unsafeMethods = new Set<Method>(['POST', 'PATCH', 'PUT', 'DELETE']);
 let csrfToken: string | null = null;
 let csrfPending: Promise<string> | null = null;
 let onUnauthenticated: (() => void) | null = null;
+let onCompanyAccessEnded: (() => void) | null = null;
 
 /** Lets the router decide what a 401 means (go to sign-in with a return path). */
 export function setUnauthenticatedHandler(handler: (() => void) | null): void {
   onUnauthenticated = handler;
+}
+
+/** Lets the router decide what 403 COMPANY_ACCESS_ENDED means (choose another company). */
+export function setCompanyAccessEndedHandler(handler: (() => void) | null): void {
+  onCompanyAccessEnded = handler;
 }
 
 async function loadCsrfToken(): Promise<string> {
@@ -100,6 +106,8 @@ export async function apiRequest<T>(
       error = await toApiError(response);
     }
     if (error.status === 401 && error.code === ErrorCode.Unauthenticated) onUnauthenticated?.();
+    if (error.status === 403 && error.code === ErrorCode.CompanyAccessEnded)
+      onCompanyAccessEnded?.();
     throw error;
   }
   return readBody<T>(response);

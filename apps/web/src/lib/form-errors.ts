@@ -35,7 +35,7 @@ export function useServerSubmit<TFieldValues extends FieldValues, TTransformed>(
     handleSubmit: UseFormHandleSubmit<TFieldValues, TTransformed>;
     setError: UseFormSetError<TFieldValues>;
   },
-  fields: readonly FieldPath<TFieldValues>[],
+  fields: readonly FieldPath<TFieldValues>[] | (() => readonly string[]),
   action: (values: TTransformed) => Promise<unknown>,
 ) {
   const [formError, setFormError] = useState<string | null>(null);
@@ -44,7 +44,11 @@ export function useServerSubmit<TFieldValues extends FieldValues, TTransformed>(
     try {
       await action(values);
     } catch (error) {
-      setFormError(applyServerErrors(error, form.setError, fields));
+      const names = typeof fields === 'function' ? fields() : fields;
+      // The names are this form's own fields (or those it shows), so they are paths of TFieldValues.
+      setFormError(
+        applyServerErrors(error, form.setError, names as readonly FieldPath<TFieldValues>[]),
+      );
     }
   });
   return { submit, formError };

@@ -17,6 +17,11 @@ export function useSession(): MeView {
   return me;
 }
 
+/** The session when inside the signed-in layout, else null (for parts that also render outside it). */
+export function useOptionalSession(): MeView | null {
+  return use(SessionContext);
+}
+
 /** Whether the signed-in role may do `action` (the server checks again; this only hides). */
 export function useCan(action: Action): boolean {
   return can(useSession().role, action);

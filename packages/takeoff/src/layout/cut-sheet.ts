@@ -54,6 +54,7 @@ export function cutSheetOf(
         cut.corners.reduce((sum, c) => sum + c[0], 0) / 4,
         cut.corners.reduce((sum, c) => sum + c[1], 0) / 4,
       ];
+      const position = positionWord(centre, outer);
       return [
         {
           cut: cutIndex,
@@ -61,7 +62,11 @@ export function cutSheetOf(
           acrossToFt: roundFt(cut.acrossOffsetFt + cut.acrossFt),
           alongFromFt: cut.alongOffsetFt,
           alongToFt: roundFt(cut.alongOffsetFt + cut.alongFt),
-          goes: `${positionWord(centre, outer)}, ${feet(from)}–${feet(from + cut.acrossFt)} ft from the ${edgeWord} edge`,
+          goes: `${position}, ${feet(from)}–${feet(from + cut.acrossFt)} ft from the ${edgeWord} edge`,
+          position,
+          fromEdge: edgeWord,
+          fromEdgeStartFt: roundFt(from),
+          fromEdgeEndFt: roundFt(from + cut.acrossFt),
         },
       ];
     }),

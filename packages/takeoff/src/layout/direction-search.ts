@@ -22,7 +22,8 @@ export function roundDirection(angleDeg: number): number {
   return rounded >= 180 ? 0 : rounded;
 }
 
-function edgeDirections(request: LayoutRequest): number[] {
+/** Directions (0–180) of the longest edges of the area, longest first. */
+export function edgeDirections(request: LayoutRequest): number[] {
   const rings = [request.area.outer, ...request.area.holes];
   const edges = rings.flatMap((ring) =>
     edgeLengths(ring).map((length, i) => {

@@ -4,9 +4,19 @@ export {
   parseLayoutRequest,
   DEFAULT_MAX_LENGTH_FT,
   DEFAULT_WALKWAY_WIDTH_FT,
+} from './parse-request.js';
+export {
+  checkLayoutRequestSize,
+  MAX_COORDINATE_FT,
+  MAX_HOLES,
+  MAX_PIECES_PER_STRIP,
   MAX_RING_POINTS,
   MAX_STRIPS,
-} from './parse-request.js';
+  MAX_TOTAL_VERTICES,
+  MAX_TRAFFIC_PATH_POINTS,
+  MAX_TRAFFIC_PATHS,
+  MIN_LENGTH_STEP_FT,
+} from './limits.js';
 export { LayoutInputError } from './errors.js';
 export { EDGE_TAGS as LAYOUT_EDGE_TAGS } from './types.js';
 export type {

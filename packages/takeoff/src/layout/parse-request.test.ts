@@ -1,7 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { LayoutInputError } from './errors.js';
+import {
+  MAX_HOLES,
+  MAX_PIECES_PER_STRIP,
+  MAX_RING_POINTS,
+  MAX_TOTAL_VERTICES,
+  MAX_TRAFFIC_PATH_POINTS,
+  MAX_TRAFFIC_PATHS,
+  MIN_LENGTH_STEP_FT,
+  checkLayoutRequestSize,
+} from './limits.js';
 import { parseLayoutRequest } from './parse-request.js';
-import { contractExampleRequest } from './sample-yards.js';
+import { contractExampleRequest, irregularYard } from './sample-yards.js';
 
 const valid = contractExampleRequest();
 
@@ -246,5 +256,108 @@ describe('parseLayoutRequest', () => {
       expect((error as LayoutInputError).path).toBe('roll.widthFt');
     }
     expect.assertions(1);
+  });
+
+  describe('limits on the work a request may ask for', () => {
+    /** A small square hole at column i of a grid inside a large outer ring. */
+    const squareHole = (i: number): [number, number][] => {
+      const x = 10 + (i % 20) * 3;
+      const y = 10 + Math.floor(i / 20) * 3;
+      return [
+        [x, y],
+        [x + 1, y],
+        [x + 1, y + 1],
+        [x, y + 1],
+      ];
+    };
+    const bigSquare: [number, number][] = [
+      [0, 0],
+      [100, 0],
+      [100, 100],
+      [0, 100],
+    ];
+    const line = (count: number): [number, number][] =>
+      Array.from({ length: count }, (_, i): [number, number] => [1 + i * 0.01, 5]);
+
+    const limitCases: [string, unknown, string][] = [
+      [
+        'an outer ring past MAX_RING_POINTS',
+        { ...valid, area: { outer: irregularYard(MAX_RING_POINTS + 1, 1) } },
+        `area.outer must have at most ${MAX_RING_POINTS} points (it has ${MAX_RING_POINTS + 1})`,
+      ],
+      [
+        'more holes than MAX_HOLES',
+        {
+          ...valid,
+          area: {
+            outer: bigSquare,
+            holes: Array.from({ length: MAX_HOLES + 1 }, (_, i) => squareHole(i)),
+          },
+        },
+        `area.holes must have at most ${MAX_HOLES} holes (it has ${MAX_HOLES + 1})`,
+      ],
+      [
+        'more points than MAX_TOTAL_VERTICES across the rings',
+        {
+          ...valid,
+          area: {
+            outer: irregularYard(4900, 1, 180, 200),
+            holes: Array.from({ length: 40 }, () => irregularYard(200, 2, 1, 2)),
+          },
+        },
+        `area must have at most ${MAX_TOTAL_VERTICES} points across the outer ring and holes (it has 12900)`,
+      ],
+      [
+        'more traffic paths than MAX_TRAFFIC_PATHS',
+        { ...valid, trafficPaths: Array.from({ length: MAX_TRAFFIC_PATHS + 1 }, () => line(2)) },
+        `trafficPaths must have at most ${MAX_TRAFFIC_PATHS} paths (it has ${MAX_TRAFFIC_PATHS + 1})`,
+      ],
+      [
+        'a traffic path past MAX_TRAFFIC_PATH_POINTS',
+        { ...valid, trafficPaths: [{ points: line(MAX_TRAFFIC_PATH_POINTS + 1) }] },
+        `trafficPaths[0].points must have at most ${MAX_TRAFFIC_PATH_POINTS} points (it has ${MAX_TRAFFIC_PATH_POINTS + 1})`,
+      ],
+      [
+        'a length step below MIN_LENGTH_STEP_FT',
+        { ...valid, lengthStepFt: 0.01 },
+        'lengthStepFt must be at least 1 in (1/12 ft)',
+      ],
+      [
+        'a longest piece needing more than MAX_PIECES_PER_STRIP pieces per strip',
+        { ...valid, roll: { widthFt: 15, maxLengthFt: 0.25 }, lengthStepFt: 0.25 },
+        `roll.maxLengthFt is too short for this area (more than ${MAX_PIECES_PER_STRIP} pieces along one strip)`,
+      ],
+    ];
+    for (const [name, json, message] of limitCases) {
+      it(`rejects ${name}, naming the limit`, () => {
+        expect(messageOf(json)).toBe(message);
+      });
+    }
+
+    it('accepts requests right at the limits', () => {
+      const atLimits = {
+        ...valid,
+        area: {
+          outer: bigSquare,
+          holes: Array.from({ length: MAX_HOLES }, (_, i) => squareHole(i)),
+        },
+        trafficPaths: Array.from({ length: MAX_TRAFFIC_PATHS }, () =>
+          line(MAX_TRAFFIC_PATH_POINTS),
+        ),
+        lengthStepFt: MIN_LENGTH_STEP_FT,
+      };
+      expect(parseLayoutRequest(atLimits).area.holes).toHaveLength(MAX_HOLES);
+      const closedRing = [...irregularYard(MAX_TOTAL_VERTICES, 1), [0, 0]];
+      closedRing[closedRing.length - 1] = closedRing[0] as [number, number];
+      expect(() => checkLayoutRequestSize({ ...valid, area: { outer: closedRing } })).not.toThrow();
+    });
+
+    it('refuses an oversize request before reading any point', () => {
+      // Points that are not even pairs: the size check must answer first, from lengths alone.
+      const garbage = Array.from({ length: MAX_TOTAL_VERTICES + 1 }, () => 'x');
+      expect(messageOf({ ...valid, area: { outer: garbage } })).toMatch(
+        /^area\.outer must have at most/,
+      );
+    });
   });
 });

@@ -2,16 +2,17 @@ import { normalizeRing } from '../geometry/ring.js';
 import type { Point } from '../geometry/types.js';
 import { findRingProblem } from '../geometry/validate-rings.js';
 import { LayoutInputError } from './errors.js';
+import {
+  MAX_COORDINATE_FT,
+  MAX_PIECES_PER_STRIP,
+  MAX_STRIPS,
+  checkLayoutRequestSize,
+  checkLengthStep,
+} from './limits.js';
 import { EDGE_TAGS } from './types.js';
 import type { EdgeTag, LayoutRequest, TrafficPath } from './types.js';
 import { readNumber, readOptionalNumber, requireArray, requireRecord } from './read-fields.js';
 
-/** Largest accepted ring, to keep a request's work bounded. */
-export const MAX_RING_POINTS = 5000;
-/** Largest accepted coordinate magnitude (feet). */
-export const MAX_COORDINATE_FT = 1e6;
-/** Most strips a request may need across its widest direction. */
-export const MAX_STRIPS = 2000;
 /** Walkway width when a traffic path gives none (feet; a common garden path, from memory). */
 export const DEFAULT_WALKWAY_WIDTH_FT = 3;
 /** Longest piece when the request gives none (feet; master rolls run about 100 ft, common practice). */
@@ -30,8 +31,6 @@ function readPoint(path: string, value: unknown): Point {
 
 function readRing(path: string, value: unknown): Point[] {
   const points = requireArray(path, value);
-  if (points.length > MAX_RING_POINTS + 1)
-    throw new LayoutInputError(path, `has more than ${MAX_RING_POINTS} points`);
   const ring = normalizeRing(points.map((point, i) => readPoint(`${path}[${i}]`, point)));
   if (ring.length < 3) throw new LayoutInputError(path, 'needs at least 3 points');
   return ring;
@@ -73,9 +72,11 @@ function readGrain(value: unknown): { angleDeg: number } | undefined {
  * Validates an untrusted layout request (parsed JSON) and fills in defaults. Throws
  * {@link LayoutInputError} naming the first problem: a missing or non-numeric field, NaN or
  * Infinity, a ring with fewer than 3 points, a self-intersecting ring, a hole outside the
- * outer ring or overlapping another hole, edge tags that do not match the edges.
+ * outer ring or overlapping another hole, edge tags that do not match the edges, or a
+ * request past one of the limits in limits.ts (checked first, from array lengths alone).
  */
 export function parseLayoutRequest(json: unknown): LayoutRequest {
+  checkLayoutRequestSize(json);
   const body = requireRecord('request', json);
   const area = requireRecord('area', body.area);
   const outer = readRing('area.outer', area.outer);
@@ -88,6 +89,7 @@ export function parseLayoutRequest(json: unknown): LayoutRequest {
   const widthFt = readNumber('roll.widthFt', roll.widthFt, { positive: true });
   const lengthStepFt =
     readOptionalNumber('lengthStepFt', body.lengthStepFt, { positive: true }) ?? 1;
+  checkLengthStep(lengthStepFt);
   const maxLengthFt =
     readOptionalNumber('roll.maxLengthFt', roll.maxLengthFt, { positive: true }) ??
     DEFAULT_MAX_LENGTH_FT;
@@ -103,6 +105,12 @@ export function parseLayoutRequest(json: unknown): LayoutRequest {
     throw new LayoutInputError(
       'roll.widthFt',
       `is too narrow for this area (more than ${MAX_STRIPS} strips)`,
+    );
+  }
+  if ((2 * span) / maxLengthFt > MAX_PIECES_PER_STRIP) {
+    throw new LayoutInputError(
+      'roll.maxLengthFt',
+      `is too short for this area (more than ${MAX_PIECES_PER_STRIP} pieces along one strip)`,
     );
   }
   const trafficPaths =

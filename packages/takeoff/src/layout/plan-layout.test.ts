@@ -312,7 +312,18 @@ describe('planLayout — shapes', () => {
       lengthFt: 20,
       widthFt: 15,
       grainArrow: { angleDeg: 90, bearingDeg: 0, compass: 'N' },
-      cuts: [{ cut: 0, acrossFromFt: 0, acrossToFt: 15, goes: 'west, 0–15 ft from the west edge' }],
+      cuts: [
+        {
+          cut: 0,
+          acrossFromFt: 0,
+          acrossToFt: 15,
+          goes: 'west, 0–15 ft from the west edge',
+          position: 'west',
+          fromEdge: 'west',
+          fromEdgeStartFt: 0,
+          fromEdgeEndFt: 15,
+        },
+      ],
     });
   });
 

@@ -108,6 +108,13 @@ export interface CutSheetCut {
   readonly alongToFt: number;
   /** Where it goes, in words, e.g. "north-west, 0–15 ft from the west edge". */
   readonly goes: string;
+  /** The parts of `goes`, for screens that show lengths in their own units: "north-west". */
+  readonly position: string;
+  /** The edge the strips are measured from: "west". */
+  readonly fromEdge: string;
+  /** How far from that edge the cut starts and ends (ft). */
+  readonly fromEdgeStartFt: number;
+  readonly fromEdgeEndFt: number;
 }
 
 /** One line of the cut sheet: a piece to cut from the roll and what it becomes. */

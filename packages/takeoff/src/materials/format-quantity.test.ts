@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatQuantity } from './format-quantity.js';
+import { formatQuantity, formatQuantityIn } from './format-quantity.js';
 
 describe('formatQuantity', () => {
   it.each([
@@ -13,5 +13,23 @@ describe('formatQuantity', () => {
     [151, 'ea', '151 ea'],
   ] as const)('%s %s reads "%s"', (quantity, unit, expected) => {
     expect(formatQuantity(quantity, unit)).toBe(expected);
+  });
+});
+
+describe('formatQuantityIn', () => {
+  // 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959), so 1 sq ft = 0.09290304 m².
+  it.each([
+    [600, 'sq ft', '55.74 m²'], // 600 × 0.09290304 = 55.74
+    [66.67, 'sq yd', '55.74 m²'], // 66.67 × 9 × 0.09290304 = 55.74
+    [100, 'lf', '30.48 m'],
+    [5.85, 'cu yd', '5.85 cu yd'],
+    [2, 'loads', '2 loads'],
+  ] as const)('metric: %s %s reads "%s"', (quantity, unit, expected) => {
+    expect(formatQuantityIn('metric', quantity, unit)).toBe(expected);
+  });
+
+  it('leaves imperial quantities as formatQuantity shows them', () => {
+    expect(formatQuantityIn('imperial', 600, 'sq ft')).toBe('600 sq ft');
+    expect(formatQuantityIn('imperial', 100, 'lf')).toBe('100 lf');
   });
 });

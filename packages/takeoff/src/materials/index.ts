@@ -1,6 +1,6 @@
 export { computeTakeoff, takeoffWarnings } from './compute-takeoff.js';
 export { applyOverrides, unmatchedOverrides } from './overrides.js';
-export { formatQuantity } from './format-quantity.js';
+export { formatQuantity, formatQuantityIn } from './format-quantity.js';
 export type { TakeoffOverride } from './overrides.js';
 export { takeoffInputSchema, turfPieceSchema } from './takeoff-input.js';
 export type { NormalisedTakeoffInput, TakeoffInput } from './takeoff-input.js';

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { formatArea, formatFeetInches, formatLength, formatNumber } from './format-length.js';
+import {
+  formatArea,
+  formatFeetInches,
+  formatLength,
+  formatLengthRange,
+  formatNumber,
+} from './format-length.js';
+import { parseLength } from './parse-length.js';
 
 describe('formatFeetInches', () => {
   it.each<[number, 1 | 0.5 | 0.25 | 0.125 | undefined, string]>([
@@ -41,5 +48,33 @@ describe('formatLength, formatArea and formatNumber', () => {
     expect(formatNumber(32407.407)).toBe('32,407.41');
     expect(formatNumber(12.5, 0)).toBe('13');
     expect(formatNumber(-0.0001)).toBe('0');
+  });
+});
+
+describe('metric lengths', () => {
+  // 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959).
+  it.each([
+    [1, '0.3 m'],
+    [10, '3.05 m'], // 3.048
+    [15, '4.57 m'], // 4.572
+    [100, '30.48 m'],
+    [1000 / 0.3048, '1,000 m'],
+  ])('%d ft → %s', (feet, expected) => {
+    expect(formatLength(feet, { system: 'metric' })).toBe(expected);
+  });
+
+  it('reads back what it shows, within half a centimetre', () => {
+    for (const feet of [0.5, 3.25, 20.5, 32.5, 99.99, 250]) {
+      const shown = formatLength(feet, { system: 'metric' });
+      const read = parseLength(shown, { system: 'metric' });
+      expect(read.ok).toBe(true);
+      if (read.ok) expect(Math.abs(read.feet - feet) * 0.3048).toBeLessThanOrEqual(0.005);
+    }
+  });
+
+  it('gives a range in the company’s system', () => {
+    expect(formatLengthRange(0, 15, { system: 'imperial' })).toBe(`0' 0"–15' 0"`);
+    expect(formatLengthRange(2.5, 20.25, { system: 'imperial' })).toBe(`2' 6"–20' 3"`);
+    expect(formatLengthRange(0, 15, { system: 'metric' })).toBe('0–4.57 m'); // 15 × 0.3048 = 4.572
   });
 });

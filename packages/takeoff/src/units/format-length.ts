@@ -62,6 +62,20 @@ export function formatLength(
   );
 }
 
+/**
+ * A stretch of length, as a cut sheet gives where a cut starts and ends: `0' 0"–15' 0"` for
+ * imperial companies, `0–4.57 m` for metric ones (the unit once, after the second number).
+ */
+export function formatLengthRange(
+  fromFeet: number,
+  toFeet: number,
+  options: { system: MeasurementSystem; precisionIn?: InchPrecision },
+): string {
+  if (options.system === 'metric')
+    return `${formatNumber(feetToMetres(fromFeet), 2)}–${formatLength(toFeet, options)}`;
+  return `${formatLength(fromFeet, options)}–${formatLength(toFeet, options)}`;
+}
+
 /** Area units {@link formatArea} can show. */
 export type AreaUnit = 'sq ft' | 'sq yd' | 'm²';
 

@@ -6,5 +6,11 @@ export type {
   LengthParseResult,
   MeasurementSystem,
 } from './parse-length.js';
-export { formatArea, formatFeetInches, formatLength, formatNumber } from './format-length.js';
+export {
+  formatArea,
+  formatFeetInches,
+  formatLength,
+  formatLengthRange,
+  formatNumber,
+} from './format-length.js';
 export type { AreaUnit, InchPrecision } from './format-length.js';

@@ -1,5 +1,5 @@
-// Registers every model on a Sequelize instance.
-import type { Sequelize } from 'sequelize';
+// Registers every model on a Sequelize instance, and names the tenant models.
+import type { Model, ModelStatic, Sequelize } from 'sequelize';
 import { AuditEventModel } from './audit-event.model.js';
 import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
@@ -9,6 +9,9 @@ import { PasswordResetModel } from './password-reset.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { UserModel } from './user.model.js';
+import { guardTenantModels } from '../tenant-guard.js';
+// JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
+import tenantModelList from './tenant-models.json';
 
 export {
   AuditEventModel,
@@ -22,18 +25,31 @@ export {
   UserModel,
 };
 
+const allModels = [
+  CompanyModel,
+  UserModel,
+  MembershipModel,
+  InvitationModel,
+  PasswordResetModel,
+  CustomerModel,
+  SiteModel,
+  AuditEventModel,
+  SessionModel,
+] as const;
+
+/**
+ * The models whose rows belong to one company (they carry company_id). Lint allows them to be
+ * queried only through `scoped(ctx, Model)` or in an `unsafe…` function, and a hook refuses an
+ * unscoped statement at run time (tenant-guard.ts); a unit test checks the list against the
+ * models' attributes.
+ */
+export const tenantModelNames: readonly string[] = tenantModelList;
+
+export const tenantModels: readonly ModelStatic<Model>[] = allModels.filter((model) =>
+  tenantModelNames.includes(model.name),
+);
+
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [
-    CompanyModel,
-    UserModel,
-    MembershipModel,
-    InvitationModel,
-    PasswordResetModel,
-    CustomerModel,
-    SiteModel,
-    AuditEventModel,
-    SessionModel,
-  ]) {
-    model.initModel(sequelize);
-  }
+  for (const model of allModels) model.initModel(sequelize);
+  guardTenantModels(tenantModels);
 }

@@ -7,7 +7,7 @@ import type {
 } from 'sequelize';
 
 /**
- * The express-session store's table (written by http/session-store.ts with plain SQL).
+ * The express-session store's table (connect-session-sequelize uses this model by name).
  * `userId` is copied out of the session data so a password reset can end a user's sessions.
  */
 export class SessionModel extends Model<

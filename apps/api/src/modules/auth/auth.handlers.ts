@@ -10,10 +10,12 @@ import { signIn, signOut } from '../../http/session.js';
 import { parseInput } from '../../http/validate.js';
 import { buildMeView } from '../me/me.service.js';
 import type { AuthService } from './auth.service.js';
+import type { PasswordResetService } from './password-reset.service.js';
 
 interface AuthHandlerDeps {
   env: Env;
   auth: AuthService;
+  passwordReset: PasswordResetService;
   issueCsrfToken: (req: Request, res: Response) => string;
   onLoginSucceeded: (req: Request) => Promise<void> | void;
 }
@@ -21,6 +23,7 @@ interface AuthHandlerDeps {
 export function createAuthHandlers({
   env,
   auth,
+  passwordReset,
   issueCsrfToken,
   onLoginSucceeded,
 }: AuthHandlerDeps) {
@@ -45,14 +48,14 @@ export function createAuthHandlers({
       await signOut(req, res, env);
       res.status(204).end();
     },
-    requestPasswordReset: async (req: Request, res: Response): Promise<void> => {
+    requestPasswordReset: (req: Request, res: Response): void => {
       const input = parseInput(passwordResetRequestSchema, req.body);
-      await auth.requestPasswordReset(input.email);
+      passwordReset.requestPasswordReset(input.email);
       res.status(202).json({ data: { accepted: true } });
     },
     completePasswordReset: async (req: Request, res: Response): Promise<void> => {
       const input = parseInput(passwordResetCompleteSchema, req.body);
-      await auth.completePasswordReset(String(req.params.token), input.password);
+      await passwordReset.completePasswordReset(String(req.params.token), input.password);
       res.status(204).end();
     },
   };

@@ -68,8 +68,24 @@ export async function createPasswordReset(
   userId: string,
   tokenHash: string,
   expiresAt: Date,
+  tx: Tx,
 ): Promise<void> {
-  await PasswordResetModel.create({ userId, tokenHash, expiresAt, usedAt: null });
+  await PasswordResetModel.create(
+    { userId, tokenHash, expiresAt, usedAt: null },
+    { transaction: tx },
+  );
+}
+
+/** Marks every still-unused reset of the user as used, so none of those links works any more. */
+export async function invalidatePasswordResetsOfUser(
+  userId: string,
+  now: Date,
+  tx: Tx,
+): Promise<void> {
+  await PasswordResetModel.update(
+    { usedAt: now },
+    { where: { userId, usedAt: null }, transaction: tx },
+  );
 }
 
 /** An unused, unexpired reset with this hash, locked for the rest of `tx`. */
@@ -80,10 +96,6 @@ export async function findUsablePasswordReset(tokenHash: string, now: Date, tx: 
     lock: tx.LOCK.UPDATE,
   });
   return row ? { id: row.id, userId: row.userId } : null;
-}
-
-export async function markPasswordResetUsed(id: string, now: Date, tx: Tx): Promise<void> {
-  await PasswordResetModel.update({ usedAt: now }, { where: { id }, transaction: tx });
 }
 
 /** Ends every stored session of the user (after a password change). */

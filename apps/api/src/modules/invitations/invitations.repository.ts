@@ -45,6 +45,7 @@ export function deleteInvitation(ctx: RequestContext, id: string, tx: Tx) {
 export async function unsafeFindOpenInvitationByTokenHash(tokenHash: string, now: Date, tx?: Tx) {
   const row = await InvitationModel.findOne({
     where: { tokenHash, acceptedAt: null, expiresAt: { [Op.gt]: now } },
+    unscopedReason: 'the invitation token identifies the company',
     ...(tx ? { transaction: tx, lock: tx.LOCK.UPDATE } : {}),
   });
   if (!row) return null;

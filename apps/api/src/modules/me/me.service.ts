@@ -1,6 +1,6 @@
 import type { CompanyView, MeView } from '@seamwright/shared';
 import { AppError } from '../../errors.js';
-import { findMembershipOfUser, findUserWithCompanies } from './me.repository.js';
+import { unsafeFindMembershipOfUser, unsafeFindUserWithCompanies } from './me.repository.js';
 
 export function toCompanyView(company: {
   id: string;
@@ -24,7 +24,7 @@ export function toCompanyView(company: {
 
 /** The signed-in user, their active company and role, and every company they belong to. */
 export async function buildMeView(userId: string, companyId: string): Promise<MeView> {
-  const found = await findUserWithCompanies(userId);
+  const found = await unsafeFindUserWithCompanies(userId);
   const active = found?.memberships.find((m) => m.id === companyId);
   if (!found || !active) throw new AppError('UNAUTHENTICATED', 'Sign in to continue');
   const companies = found.memberships
@@ -35,6 +35,6 @@ export async function buildMeView(userId: string, companyId: string): Promise<Me
 
 /** Checks that the user belongs to `companyId`; another company is simply not found. */
 export async function assertCanSwitchTo(userId: string, companyId: string): Promise<void> {
-  if (!(await findMembershipOfUser(userId, companyId)))
+  if (!(await unsafeFindMembershipOfUser(userId, companyId)))
     throw new AppError('NOT_FOUND', 'Company not found');
 }

@@ -1,5 +1,5 @@
 import type { Request, Response } from 'express';
-import { updateMemberInputSchema } from '@seamwright/shared';
+import { pageQuerySchema, updateMemberInputSchema } from '@seamwright/shared';
 import { contextOf } from '../../http/tenant-context.js';
 import { parseId, parseInput } from '../../http/validate.js';
 import type { createMembersService } from './members.service.js';
@@ -7,8 +7,8 @@ import type { createMembersService } from './members.service.js';
 export function createMembersHandlers(members: ReturnType<typeof createMembersService>) {
   return {
     list: async (req: Request, res: Response): Promise<void> => {
-      const data = await members.list(contextOf(req));
-      res.json({ data, meta: { page: 1, pageSize: data.length, total: data.length } });
+      const query = parseInput(pageQuerySchema, req.query);
+      res.json(await members.list(contextOf(req), query));
     },
     update: async (req: Request, res: Response): Promise<void> => {
       const id = parseId(req.params.id, 'Member');

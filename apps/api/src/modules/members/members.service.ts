@@ -1,4 +1,4 @@
-import type { MemberView, Role } from '@seamwright/shared';
+import type { ListResponse, MemberView, Role } from '@seamwright/shared';
 import type { Sequelize } from 'sequelize';
 import type { RequestContext } from '../../context.js';
 import { inTransaction } from '../../db/sequelize.js';
@@ -14,16 +14,25 @@ import {
 } from './members.repository.js';
 
 export function createMembersService(sequelize: Sequelize) {
-  async function list(ctx: RequestContext): Promise<MemberView[]> {
-    const rows = await listMembers(ctx);
-    return rows.map((m) => ({
-      id: m.id,
-      userId: m.userId,
-      name: m.name,
-      email: m.email,
-      role: m.role,
-      createdAt: m.createdAt.toISOString(),
-    }));
+  type MemberRow = Awaited<ReturnType<typeof listMembers>>['rows'][number];
+  const toView = (m: MemberRow): MemberView => ({
+    id: m.id,
+    userId: m.userId,
+    name: m.name,
+    email: m.email,
+    role: m.role,
+    createdAt: m.createdAt.toISOString(),
+  });
+
+  async function list(
+    ctx: RequestContext,
+    query: { page: number; pageSize: number },
+  ): Promise<ListResponse<MemberView>> {
+    const { rows, total } = await listMembers(ctx, {
+      limit: query.pageSize,
+      offset: (query.page - 1) * query.pageSize,
+    });
+    return { data: rows.map(toView), meta: { page: query.page, pageSize: query.pageSize, total } };
   }
 
   /** Refuses a change that would leave the company without an owner. */
@@ -55,9 +64,9 @@ export function createMembersService(sequelize: Sequelize) {
         tx,
       );
     });
-    const updated = (await list(ctx)).find((m) => m.id === id);
-    if (!updated) throw notFound('Member');
-    return updated;
+    const { rows } = await listMembers(ctx, { limit: 1, offset: 0 }, { id });
+    if (!rows[0]) throw notFound('Member');
+    return toView(rows[0]);
   }
 
   async function remove(ctx: RequestContext, id: string): Promise<void> {

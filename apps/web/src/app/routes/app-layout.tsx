@@ -20,6 +20,9 @@ export async function loader({ request }: LoaderFunctionArgs) {
         url.pathname === paths.today && !url.search ? undefined : `${url.pathname}${url.search}`;
       return redirect(paths.signIn(next));
     }
+    if (error instanceof ApiError && error.code === ErrorCode.CompanyAccessEnded) {
+      return redirect(paths.chooseCompany);
+    }
     throw error;
   }
 }

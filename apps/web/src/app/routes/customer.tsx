@@ -5,6 +5,7 @@ import { RegionErrorBoundary } from '../../components/ui/region-error';
 import { paths } from '../../config/paths';
 import { queryClient } from '../../lib/query-client';
 import { useCan, useSession } from '../../lib/session';
+import { customerKeys } from '../../features/customers/api/customer-keys';
 import { customerQueryOptions, useCustomer } from '../../features/customers/api/get-customer';
 import { CustomerDetails } from '../../features/customers/components/customer-details';
 import { sitesQueryOptions } from '../../features/sites/api/get-sites';
@@ -17,7 +18,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
   const id = params.customerId ?? '';
   await Promise.all([
     queryClient.ensureQueryData(customerQueryOptions(id)),
-    queryClient.ensureQueryData(sitesQueryOptions(id)),
+    queryClient.ensureInfiniteQueryData(sitesQueryOptions(id)),
   ]);
   return null;
 }
@@ -40,7 +41,12 @@ function CustomerPage({ customerId }: { customerId: string }) {
         onDeleted={() => void navigate(paths.customers, { replace: true })}
       />
       <RegionErrorBoundary>
-        <SitesPanel customerId={customerId} canWrite={canWriteSites} />
+        {/* Adding or deleting a site changes the customer's site count in every customer query. */}
+        <SitesPanel
+          customerId={customerId}
+          canWrite={canWriteSites}
+          onSitesChanged={() => queryClient.invalidateQueries({ queryKey: customerKeys.all })}
+        />
       </RegionErrorBoundary>
     </>
   );

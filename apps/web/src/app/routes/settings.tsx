@@ -5,6 +5,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { RegionErrorBoundary } from '../../components/ui/region-error';
 import { queryClient } from '../../lib/query-client';
 import { useCan, useSession } from '../../lib/session';
+import { companyQueryOptions } from '../../features/company-settings/api/get-company';
 import { CompanyForm } from '../../features/company-settings/components/company-form';
 import { meQueryOptions } from '../../features/session/api/get-me';
 import { MyProfile } from '../../features/session/components/my-profile';
@@ -17,9 +18,10 @@ import { RouteError } from './route-error';
 import { sessionCan } from './guard';
 
 export async function loader() {
+  if (await sessionCan('company.manage')) void queryClient.prefetchQuery(companyQueryOptions());
   if (await sessionCan('members.read')) {
     await Promise.all([
-      queryClient.ensureQueryData(membersQueryOptions()),
+      queryClient.ensureInfiniteQueryData(membersQueryOptions()),
       queryClient.ensureQueryData(invitationsQueryOptions()),
     ]);
   }
@@ -55,13 +57,12 @@ export function Component() {
         }
       />
       <Section id="profile" title="Your profile">
-        <MyProfile />
+        <MyProfile showEditLink />
       </Section>
       {canManageCompany ? (
         <Section id="company" title="Company details">
           <div className="rounded-lg border border-line bg-white p-6">
             <CompanyForm
-              company={company}
               onSaved={() => client.invalidateQueries({ queryKey: meQueryOptions().queryKey })}
             />
           </div>

@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes, Ref } from 'react';
 import { cn } from './cn';
 
 export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'quiet' | 'quietDanger';
@@ -24,6 +24,7 @@ export function buttonClasses(variant: ButtonVariant = 'primary', extra?: string
 interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: ButtonVariant;
   isBusy?: boolean;
+  ref?: Ref<HTMLButtonElement>;
 }
 
 export function Button({

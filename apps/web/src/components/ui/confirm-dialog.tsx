@@ -9,12 +9,28 @@ interface ConfirmDialogProps {
   isBusy?: boolean;
   onConfirm: () => void;
   onCancel: () => void;
+  /**
+   * Where focus goes when the button that opened the dialog is gone once it closes (the row it
+   * belonged to was deleted): the list's heading or the next item.
+   */
+  fallbackFocus?: () => HTMLElement | null;
 }
 
 /**
- * Asks once before something destructive. A native modal <dialog>: it traps focus, Escape
- * cancels, and focus returns to the button that opened it.
+ * Asks once before something destructive. A native modal <dialog>: it traps focus and Escape
+ * cancels. Focus goes back to the button that opened it, which the browser does not do on its
+ * own when React closes or removes the dialog; when that button is gone, to `fallbackFocus`.
  */
+function returnFocus(
+  opener: { current: HTMLElement | null },
+  fallbackFocus: (() => HTMLElement | null) | undefined,
+) {
+  const target = opener.current;
+  if (!target) return;
+  opener.current = null;
+  (target.isConnected ? target : fallbackFocus?.())?.focus();
+}
+
 export function ConfirmDialog({
   isOpen,
   title,
@@ -23,17 +39,33 @@ export function ConfirmDialog({
   isBusy,
   onConfirm,
   onCancel,
+  fallbackFocus,
 }: ConfirmDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
+  const opener = useRef<HTMLElement | null>(null);
+  const fallback = useRef(fallbackFocus);
+  useEffect(() => {
+    fallback.current = fallbackFocus;
+  });
 
   // Syncing with the browser's own dialog API is what effects are for (no data fetching).
   useEffect(() => {
     const dialog = ref.current;
     if (!dialog) return;
-    if (isOpen && !dialog.open) dialog.showModal?.();
-    if (!isOpen && dialog.open) dialog.close();
+    if (isOpen && !dialog.open) {
+      opener.current =
+        document.activeElement instanceof HTMLElement ? document.activeElement : null;
+      dialog.showModal?.();
+    }
+    if (!isOpen && dialog.open) {
+      dialog.close();
+      returnFocus(opener, fallback.current);
+    }
   }, [isOpen]);
+
+  // Unmounted while open (the item it asked about was deleted and its row went away).
+  useEffect(() => () => returnFocus(opener, fallback.current), []);
 
   return (
     <dialog

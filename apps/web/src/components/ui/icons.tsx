@@ -39,6 +39,15 @@ export function SettingsIcon({ className = 'h-6 w-6' }: { className?: string }) 
   );
 }
 
+export function ProfileIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <circle cx="12" cy="8" r="4" />
+      <path d="M4.5 21v-1.5A5.5 5.5 0 0 1 10 14h4a5.5 5.5 0 0 1 5.5 5.5V21" />
+    </svg>
+  );
+}
+
 export function TurfMark({ className = 'h-7 w-7' }: { className?: string }) {
   return (
     <svg aria-hidden="true" viewBox="0 0 32 32" className={className}>

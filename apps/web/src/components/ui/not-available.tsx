@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { roleLabels, type Role } from '@seamwright/shared';
+import { useDocumentTitle } from '../../lib/page-title';
 
 /** Shown instead of a section the role may not open; the server refuses it as well. */
 export function NotAvailable({
@@ -11,9 +12,12 @@ export function NotAvailable({
   role: Role;
   homePath: string;
 }) {
+  useDocumentTitle(`${section} not available`);
   return (
     <div role="alert" className="max-w-xl rounded-lg border border-line bg-white p-6">
-      <h1 className="text-2xl font-bold">{section} is not available for your role</h1>
+      <h1 tabIndex={-1} className="text-2xl font-bold">
+        {section} is not available for your role
+      </h1>
       <p className="mt-2 text-ink-muted">
         You are signed in as {roleLabels[role].toLowerCase()}. If your work needs this section, ask
         the company owner to change your role.

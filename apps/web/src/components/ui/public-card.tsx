@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { useDocumentTitle } from '../../lib/page-title';
 
 /** The frame of the signed-out pages: the name, one card, and a line under it. */
 export function PublicCard({
@@ -12,6 +13,7 @@ export function PublicCard({
   children: ReactNode;
   footer?: ReactNode;
 }) {
+  useDocumentTitle(title);
   return (
     <div className="flex min-h-dvh flex-col items-center bg-sand-100 px-4 py-10">
       <p className="mb-6 flex items-center gap-2 text-2xl font-bold text-moss-800">
@@ -28,7 +30,9 @@ export function PublicCard({
         Seamwright
       </p>
       <main className="w-full max-w-md rounded-xl border border-line bg-white p-6 shadow-sm sm:p-8">
-        <h1 className="text-2xl font-bold">{title}</h1>
+        <h1 tabIndex={-1} className="text-2xl font-bold">
+          {title}
+        </h1>
         {intro ? <div className="mt-2 text-ink-muted">{intro}</div> : null}
         <div className="mt-6">{children}</div>
       </main>

@@ -1,24 +1,17 @@
 import { createContext, use, useCallback, useMemo, useRef, useState, type ReactNode } from 'react';
-
-interface ToastAction {
-  label: string;
-  onClick: () => void;
-}
-
-interface Toast {
-  id: number;
-  message: string;
-  action?: ToastAction;
-}
+import { ToastItem, type Toast, type ToastAction } from './toast-item';
 
 interface ToastApi {
   show: (message: string, action?: ToastAction) => void;
 }
 
 const ToastContext = createContext<ToastApi | null>(null);
-const toastLifetimeMs = 8000;
 
-/** Short messages at the bottom of the screen; an Undo action makes an archive reversible. */
+/**
+ * Short messages at the bottom of the screen; an Undo action makes an archive reversible. Each
+ * toast waits while the pointer is on it or focus is in it (WCAG 2.2.1), and whatever a toast
+ * offers stays reachable on the page after it has gone (an archived customer shows Restore).
+ */
 export function ToastProvider({ children }: { children: ReactNode }) {
   const [toasts, setToasts] = useState<Toast[]>([]);
   const nextId = useRef(1);
@@ -27,14 +20,10 @@ export function ToastProvider({ children }: { children: ReactNode }) {
     (id: number) => setToasts((all) => all.filter((t) => t.id !== id)),
     [],
   );
-  const show = useCallback(
-    (message: string, action?: ToastAction) => {
-      const id = nextId.current++;
-      setToasts((all) => [...all.slice(-2), { id, message, action }]);
-      window.setTimeout(() => dismiss(id), toastLifetimeMs);
-    },
-    [dismiss],
-  );
+  const show = useCallback((message: string, action?: ToastAction) => {
+    const id = nextId.current++;
+    setToasts((all) => [...all.slice(-2), { id, message, action }]);
+  }, []);
   const api = useMemo(() => ({ show }), [show]);
 
   return (
@@ -42,36 +31,11 @@ export function ToastProvider({ children }: { children: ReactNode }) {
       {children}
       <div
         aria-live="polite"
+        data-surface="dark"
         className="pointer-events-none fixed inset-x-0 bottom-20 z-50 flex flex-col items-center gap-2 px-4 md:bottom-6 print:hidden"
       >
         {toasts.map((toast) => (
-          <div
-            key={toast.id}
-            role="status"
-            className="pointer-events-auto flex max-w-md items-center gap-4 rounded-md bg-moss-900 px-4 py-3 text-white shadow-lg"
-          >
-            <span>{toast.message}</span>
-            {toast.action ? (
-              <button
-                type="button"
-                className="min-h-11 rounded px-3 font-bold text-sand-200 underline"
-                onClick={() => {
-                  toast.action?.onClick();
-                  dismiss(toast.id);
-                }}
-              >
-                {toast.action.label}
-              </button>
-            ) : null}
-            <button
-              type="button"
-              aria-label="Dismiss"
-              className="min-h-11 min-w-11 rounded text-sand-200"
-              onClick={() => dismiss(toast.id)}
-            >
-              ×
-            </button>
-          </div>
+          <ToastItem key={toast.id} toast={toast} onDismiss={dismiss} />
         ))}
       </div>
     </ToastContext>

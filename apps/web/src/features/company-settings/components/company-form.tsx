@@ -1,22 +1,15 @@
 import { useMemo, useState } from 'react';
-import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
-import { optionalText, requiredText, timeZoneSchema, type CompanyView } from '@seamwright/shared';
-import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/form-fields';
-import { FormAlert, FormNotice } from '../../../components/ui/form-alert';
-import { useServerSubmit } from '../../../lib/form-errors';
+import { companyDetailsSchema } from '@seamwright/shared';
+import {
+  Form,
+  SelectField,
+  SubmitButton,
+  TextAreaField,
+  TextField,
+} from '../../../components/ui/form';
+import { FormNotice } from '../../../components/ui/form-alert';
+import { useCompanySettings } from '../api/get-company';
 import { useUpdateCompany } from '../api/update-company';
-
-// The shared update schema is all-optional (PATCH); this form always sends every field.
-const companyFormSchema = z.object({
-  name: requiredText('Company name', 120),
-  timeZone: timeZoneSchema,
-  region: optionalText(8),
-  measurementSystem: z.enum(['imperial', 'metric']),
-});
-const fields = ['name', 'timeZone', 'region', 'measurementSystem'] as const;
 
 function timeZones(current: string): string[] {
   const all =
@@ -24,53 +17,43 @@ function timeZones(current: string): string[] {
   return all.includes(current) ? all : [current, ...all];
 }
 
-export function CompanyForm({
-  company,
-  onSaved,
-}: {
-  company: CompanyView;
-  onSaved: () => Promise<void> | void;
-}) {
+/** The company's name, address, time zone, region and measurements (owner only). */
+export function CompanyForm({ onSaved }: { onSaved: () => Promise<void> | void }) {
+  const company = useCompanySettings();
   const [saved, setSaved] = useState(false);
   const update = useUpdateCompany(onSaved);
   const zones = useMemo(() => timeZones(company.timeZone), [company.timeZone]);
-  const { register, handleSubmit, setError, formState } = useForm({
-    resolver: zodResolver(companyFormSchema),
-    mode: 'onChange',
-    defaultValues: {
-      name: company.name,
-      timeZone: company.timeZone,
-      region: company.region ?? '',
-      measurementSystem: company.measurementSystem,
-    },
-  });
-  const { errors } = formState;
-
-  const { submit, formError } = useServerSubmit(
-    { handleSubmit, setError },
-    fields,
-    async (values) => {
-      setSaved(false);
-      await update.mutateAsync(values);
-      setSaved(true);
-    },
-  );
-
   return (
-    <form
-      onSubmit={submit}
-      noValidate
-      className="flex max-w-xl flex-col gap-4"
+    <Form
+      schema={companyDetailsSchema}
+      defaultValues={{
+        name: company.name,
+        address: company.address ?? '',
+        timeZone: company.timeZone,
+        region: company.region ?? '',
+        measurementSystem: company.measurementSystem,
+      }}
+      onSubmit={async (values) => {
+        setSaved(false);
+        await update.mutateAsync(values);
+        setSaved(true);
+      }}
+      className="max-w-xl"
       aria-label="Company details"
     >
-      <FormAlert>{formError}</FormAlert>
       {saved ? <FormNotice>Company details saved.</FormNotice> : null}
-      <TextField label="Company name" error={errors.name?.message} {...register('name')} />
+      <TextField name="name" label="Company name" autoComplete="organization" />
+      <TextAreaField
+        name="address"
+        label="Address"
+        hint="Street, town, state and postal code, as it should print on estimates and invoices."
+        autoComplete="street-address"
+        rows={4}
+      />
       <SelectField
+        name="timeZone"
         label="Time zone"
         hint="Dates across Seamwright show in this time zone."
-        error={errors.timeZone?.message}
-        {...register('timeZone')}
       >
         {zones.map((zone) => (
           <option key={zone} value={zone}>
@@ -79,25 +62,22 @@ export function CompanyForm({
         ))}
       </SelectField>
       <TextField
+        name="region"
         label="State or region code"
         hint="For example CO or ON. It decides public holidays and the utility-locate waiting period."
         className="max-w-40 uppercase"
-        error={errors.region?.message}
-        {...register('region')}
       />
       <SelectField
+        name="measurementSystem"
         label="Measurements"
-        error={errors.measurementSystem?.message}
-        {...register('measurementSystem')}
+        hint="How lengths and areas are typed and shown: feet and inches, or metres."
       >
         <option value="imperial">Feet and inches (sq ft, cu yd, lb)</option>
         <option value="metric">Metric (m, m², m³, kg)</option>
       </SelectField>
       <div>
-        <Button type="submit" isBusy={formState.isSubmitting}>
-          Save company details
-        </Button>
+        <SubmitButton>Save company details</SubmitButton>
       </div>
-    </form>
+    </Form>
   );
 }

@@ -4,6 +4,7 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { useToast } from '../../../components/ui/toast';
 import { describeError } from '../../../components/ui/region-error';
 import { formatDate } from '../../../lib/format';
+import { useFocusWhenShown } from '../../../lib/focus-when-shown';
 import { useCan, useSession } from '../../../lib/session';
 import { useCustomer } from '../api/get-customer';
 import { useUpdateCustomer } from '../api/update-customer';
@@ -38,6 +39,18 @@ export function CustomerDetails({
   const toast = useToast();
   const [isEditing, setIsEditing] = useState(false);
   const [isConfirmingDelete, setIsConfirmingDelete] = useState(false);
+  const { target: editButtonRef, request: focusEditButton } =
+    useFocusWhenShown<HTMLButtonElement>();
+  const { target: formHeadingRef, request: focusFormHeading } =
+    useFocusWhenShown<HTMLHeadingElement>();
+  const startEditing = () => {
+    focusFormHeading();
+    setIsEditing(true);
+  };
+  const stopEditing = () => {
+    focusEditButton();
+    setIsEditing(false);
+  };
 
   const archive = async () => {
     try {
@@ -58,16 +71,21 @@ export function CustomerDetails({
         aria-labelledby="customer-edit-heading"
         className="rounded-lg border border-line bg-white p-6"
       >
-        <h2 id="customer-edit-heading" className="mb-4 text-xl font-bold">
+        <h2
+          id="customer-edit-heading"
+          ref={formHeadingRef}
+          tabIndex={-1}
+          className="mb-4 text-xl font-bold"
+        >
           Edit customer
         </h2>
         <CustomerForm
           customer={customer}
           submitLabel="Save changes"
-          onCancel={() => setIsEditing(false)}
+          onCancel={stopEditing}
           onSubmit={async (values) => {
             await update.mutateAsync(values);
-            setIsEditing(false);
+            stopEditing();
             toast.show('Changes saved.');
           }}
         />
@@ -86,7 +104,7 @@ export function CustomerDetails({
         </h2>
         {canWrite ? (
           <div className="flex flex-wrap gap-2 print:hidden">
-            <Button variant="secondary" onClick={() => setIsEditing(true)}>
+            <Button variant="secondary" ref={editButtonRef} onClick={startEditing}>
               Edit
             </Button>
             {customer.archivedAt ? (

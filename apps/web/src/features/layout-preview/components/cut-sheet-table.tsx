@@ -1,9 +1,7 @@
-import { formatNumber } from '@seamwright/takeoff';
-import type { CutSheetEntry } from '@seamwright/takeoff';
+import type { CutSheetCut, CutSheetEntry } from '@seamwright/takeoff';
 import { cn } from '../../../components/ui/cn';
+import { useUnits, type Units } from '../../../lib/units';
 import { pieceTint } from '../utils/piece-tints';
-
-const range = (from: number, to: number) => `${formatNumber(from, 1)}–${formatNumber(to, 1)} ft`;
 
 /** An arrow turned to the grain (degrees CCW from east), for the crew reading the sheet. */
 function GrainGlyph({ angleDeg }: { angleDeg: number }) {
@@ -23,8 +21,19 @@ function GrainGlyph({ angleDeg }: { angleDeg: number }) {
   );
 }
 
-/** The cut sheet: each piece to cut off the roll, where its cuts go, and the way the grain runs. */
+/** Where a cut goes, with its distance from the edge in the company's units. */
+function whereItGoes(cut: CutSheetCut, units: Units): string {
+  const span = units.lengthRange(cut.fromEdgeStartFt, cut.fromEdgeEndFt);
+  return `${cut.position}, ${span} from the ${cut.fromEdge} edge`;
+}
+
+/**
+ * The cut sheet: each piece to cut off the roll, where its cuts go, and the way the grain runs.
+ * Lengths read as the crew measures them: feet and inches (`20' 6"`), or metres when the
+ * company works in metric.
+ */
 export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }) {
+  const units = useUnits();
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-left">
@@ -62,20 +71,21 @@ export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }
                 {entry.piece + 1}
               </th>
               <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">
-                {formatNumber(entry.lengthFt, 2)} ft
+                {units.length(entry.lengthFt)}
               </td>
               <td className="py-2 pr-3 text-right tabular-nums whitespace-nowrap">
-                {formatNumber(entry.widthFt, 2)} ft
+                {units.length(entry.widthFt)}
               </td>
               <td className="py-2 pr-3 tabular-nums">
-                {entry.cuts.length === 1 ? (
-                  entry.cuts[0]?.goes
+                {entry.cuts.length === 1 && entry.cuts[0] ? (
+                  whereItGoes(entry.cuts[0], units)
                 ) : (
                   <ul className="space-y-1">
                     {entry.cuts.map((cut) => (
                       <li key={cut.cut}>
-                        {range(cut.acrossFromFt, cut.acrossToFt)} across ×{' '}
-                        {range(cut.alongFromFt, cut.alongToFt)} along: {cut.goes}
+                        {units.lengthRange(cut.acrossFromFt, cut.acrossToFt)} across ×{' '}
+                        {units.lengthRange(cut.alongFromFt, cut.alongToFt)} along:{' '}
+                        {whereItGoes(cut, units)}
                       </li>
                     ))}
                   </ul>

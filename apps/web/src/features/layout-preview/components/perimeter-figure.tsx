@@ -1,5 +1,5 @@
-import { formatNumber } from '@seamwright/takeoff';
 import type { EdgeTag, LayoutPlan } from '@seamwright/takeoff';
+import { useUnits } from '../../../lib/units';
 import { Figure } from './figure';
 
 const tagWords: Record<EdgeTag | 'unknown', string> = {
@@ -13,6 +13,7 @@ const tagWords: Record<EdgeTag | 'unknown', string> = {
 
 /** Total perimeter, and its feet by what each edge meets (chosen under “What does each edge meet?”). */
 export function PerimeterFigure({ plan }: { plan: LayoutPlan }) {
+  const { length } = useUnits();
   // In tagWords' order, so tagged feet come first and the untagged rest last.
   const byTag = Object.entries(tagWords)
     .map(([tag, words]) => ({
@@ -24,9 +25,9 @@ export function PerimeterFigure({ plan }: { plan: LayoutPlan }) {
   return (
     <Figure
       term="Perimeter"
-      note={byTag.map(({ words, feet }) => `${formatNumber(feet, 1)} ft ${words}`).join(' · ')}
+      note={byTag.map(({ words, feet }) => `${length(feet)} ${words}`).join(' · ')}
     >
-      {formatNumber(plan.perimeterFt, 1)} ft
+      {length(plan.perimeterFt)}
     </Figure>
   );
 }

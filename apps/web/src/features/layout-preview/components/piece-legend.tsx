@@ -1,6 +1,6 @@
-import { formatNumber } from '@seamwright/takeoff';
 import type { LayoutPlan } from '@seamwright/takeoff';
 import { cn } from '../../../components/ui/cn';
+import { useUnits } from '../../../lib/units';
 import { pieceTint } from '../utils/piece-tints';
 import { seamDash } from './seam-paths';
 
@@ -23,6 +23,7 @@ function LineSample({ dash }: { dash: string }) {
 
 /** What the tints and lines of the drawing mean: one line per piece, then the line styles. */
 export function PieceLegend({ plan, hasWalkway }: { plan: LayoutPlan; hasWalkway: boolean }) {
+  const { length } = useUnits();
   return (
     <div className="text-sm">
       <h3 className="sr-only">Key to the drawing</h3>
@@ -36,7 +37,7 @@ export function PieceLegend({ plan, hasWalkway }: { plan: LayoutPlan; hasWalkway
                 pieceTint(index).swatch,
               )}
             />
-            Piece {index + 1} — {formatNumber(piece.widthFt)} × {formatNumber(piece.lengthFt)} ft
+            Piece {index + 1} — {length(piece.widthFt)} × {length(piece.lengthFt)}
           </li>
         ))}
       </ul>

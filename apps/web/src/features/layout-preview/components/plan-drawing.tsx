@@ -1,6 +1,7 @@
 import { useId } from 'react';
-import { DEFAULT_WALKWAY_WIDTH_FT, formatNumber } from '@seamwright/takeoff';
+import { DEFAULT_WALKWAY_WIDTH_FT } from '@seamwright/takeoff';
 import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
+import { unitsFor, useUnits, type Units } from '../../../lib/units';
 import { drawingFrame, ringsPath } from '../utils/drawing-frame';
 import { grainWords } from '../utils/plan-words';
 import { CutShapes } from './cut-shapes';
@@ -16,12 +17,12 @@ interface PlanDrawingProps {
 }
 
 /** One sentence a screen reader gives for the drawing; the figures beside it carry the numbers too. */
-export function planSummary(plan: LayoutPlan): string {
+export function planSummary(plan: LayoutPlan, units: Units = unitsFor('imperial')): string {
   const pieces = plan.pieces.length === 1 ? '1 piece' : `${plan.pieces.length} pieces`;
   const seams = plan.seams.count === 1 ? '1 seam' : `${plan.seams.count} seams`;
   return (
-    `Layout plan: ${formatNumber(plan.areaSqFt, 0)} sq ft area covered by ${plan.cuts.length} cuts from ${pieces} ` +
-    `of turf (${formatNumber(plan.orderedSqFt, 0)} sq ft ordered), ${seams}, grain running ${grainWords(plan.grainAngleDeg)}.`
+    `Layout plan: ${units.area(plan.areaSqFt)} area covered by ${plan.cuts.length} cuts from ${pieces} ` +
+    `of turf (${units.area(plan.orderedSqFt)} ordered), ${seams}, grain running ${grainWords(plan.grainAngleDeg)}.`
   );
 }
 
@@ -32,6 +33,7 @@ export function planSummary(plan: LayoutPlan): string {
 export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
   // useId's punctuation is not safe inside url(#…) references, so keep letters and digits only.
   const id = `plan${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
+  const units = useUnits();
   const frame = drawingFrame(plan, rings, walkway ?? []);
   const area = ringsPath(rings, frame.toSvg);
   return (
@@ -43,7 +45,7 @@ export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
       data-testid="plan-drawing"
     >
       <title id={`${id}-title`}>Layout plan</title>
-      <desc id={`${id}-desc`}>{planSummary(plan)}</desc>
+      <desc id={`${id}-desc`}>{planSummary(plan, units)}</desc>
       <defs>
         <clipPath id={`${id}-area`}>
           <path d={area} clipRule="evenodd" />
@@ -69,7 +71,7 @@ export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
         strokeLinejoin="round"
         vectorEffect="non-scaling-stroke"
       />
-      <ScaleAndNorth frame={frame} />
+      <ScaleAndNorth frame={frame} units={units} />
     </svg>
   );
 }

@@ -1,4 +1,5 @@
 import { SelectField } from '../../../components/ui/form-fields';
+import { useUnits } from '../../../lib/units';
 import type { FieldErrors } from '../utils/shape-builders';
 import {
   grainChoices,
@@ -33,17 +34,18 @@ const usageLabels: Record<Usage, string> = {
 
 /** The roll (width, longest piece), the grain and what the turf is for. */
 export function RollFields({ params, errors, update }: RollFieldsProps) {
+  const units = useUnits();
   return (
     <div className="flex flex-col gap-4">
       <ChoiceGroup
         legend="Roll width"
         value={params.roll}
-        options={rollWidthsFt.map((width) => ({ value: width, label: `${width} ft` }))}
+        options={rollWidthsFt.map((width) => ({ value: width, label: units.length(width) }))}
         onChange={(roll) => update({ roll })}
       />
       <LengthField
         label="Longest piece off the roll"
-        hint="Feet; longer runs are joined with butt seams"
+        hint={`A bare number is ${units.lengthWord}; longer runs are joined with butt seams`}
         value={params.max}
         error={errors.max}
         onValue={(max) => update({ max })}

@@ -1,10 +1,16 @@
+import type { Units } from '../../../lib/units';
 import type { DrawingFrame } from '../utils/drawing-frame';
-import { scaleBarFeet } from '../utils/drawing-frame';
+import { scaleBarFeet, scaleBarMetres } from '../utils/drawing-frame';
 
-/** The footer of the drawing: a scale bar in feet on the left, the north arrow on the right. */
-export function ScaleAndNorth({ frame }: { frame: DrawingFrame }) {
+/**
+ * The footer of the drawing: a scale bar on the left (in feet, or metres for a metric company),
+ * the north arrow on the right.
+ */
+export function ScaleAndNorth({ frame, units }: { frame: DrawingFrame; units: Units }) {
   const { unit, margin, width, height, footer } = frame;
-  const feet = scaleBarFeet(frame.planWidth);
+  const metric = units.system === 'metric' ? scaleBarMetres(frame.planWidth) : null;
+  const feet = metric ? metric.feet : scaleBarFeet(frame.planWidth);
+  const label = metric ? `${metric.metres} m` : units.length(feet);
   const baseY = height - footer * 0.35;
   const tick = unit;
   const fontSize = unit * 1.9;
@@ -29,7 +35,7 @@ export function ScaleAndNorth({ frame }: { frame: DrawingFrame }) {
         textAnchor="end"
         stroke="none"
       >
-        {feet} ft
+        {label}
       </text>
       <path
         d={`M${northX} ${northBottom}V${northTop + unit * 2.2}M${northX - unit * 0.8} ${northTop + unit * 2.2}L${northX} ${northTop + unit * 0.6}L${northX + unit * 0.8} ${northTop + unit * 2.2}Z`}

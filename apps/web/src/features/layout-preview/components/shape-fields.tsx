@@ -1,6 +1,7 @@
 import { beanYard } from '@seamwright/takeoff';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField } from '../../../components/ui/form-fields';
+import { useUnits } from '../../../lib/units';
 import type { FieldErrors } from '../utils/shape-builders';
 import { pointsToText } from '../utils/shape-builders';
 import type { LayoutParams, ShapeKind } from '../utils/layout-params';
@@ -19,10 +20,9 @@ const shapeOptions: ReadonlyArray<{ value: ShapeKind; label: string }> = [
   { value: 'points', label: 'Points' },
 ];
 
-const lengthHint = `Such as 27' 6", 27 ft 6 in or 27.5`;
-
 /** The yard's outline: a rectangle, an L, or points typed one per line. */
 export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
+  const units = useUnits();
   const isL = params.shape === 'l-shape';
   return (
     <div className="flex flex-col gap-4">
@@ -35,7 +35,7 @@ export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
       {params.shape === 'points' ? (
         <>
           <TextAreaField
-            label="Outline points (feet)"
+            label={`Outline points (${units.lengthWord})`}
             hint="One x, y pair per line; x runs east, y runs north. A line reading hole starts a hole, such as a planter."
             value={params.pts}
             error={errors.pts}
@@ -44,7 +44,10 @@ export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
             className="font-mono text-sm tabular-nums"
             onChange={(event) => update({ pts: event.target.value })}
           />
-          <Button variant="secondary" onClick={() => update({ pts: pointsToText(beanYard()) })}>
+          <Button
+            variant="secondary"
+            onClick={() => update({ pts: pointsToText(beanYard(), units) })}
+          >
             Try a bean-shaped bed
           </Button>
         </>
@@ -79,7 +82,7 @@ export function ShapeFields({ params, errors, update }: ShapeFieldsProps) {
             </>
           ) : null}
           <p className="col-span-2 text-sm text-ink-muted">
-            {lengthHint}.
+            {units.lengthExamples}.
             {isL
               ? ' Lengths run north–south (N–S), widths east–west (E–W); the notch comes out of the north-east corner.'
               : ''}

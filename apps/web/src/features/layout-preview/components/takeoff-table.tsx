@@ -1,11 +1,12 @@
-import { formatQuantity } from '@seamwright/takeoff';
 import type { TakeoffLine } from '@seamwright/takeoff';
+import { useUnits } from '../../../lib/units';
 
 /**
  * The material takeoff: each line's quantity with its unit, and the rule in words with the
  * numbers put in, so every figure can be checked by hand.
  */
 export function TakeoffTable({ lines }: { lines: readonly TakeoffLine[] }) {
+  const units = useUnits();
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-left">
@@ -36,7 +37,7 @@ export function TakeoffTable({ lines }: { lines: readonly TakeoffLine[] }) {
                 ))}
               </th>
               <td className="py-2 text-right font-semibold tabular-nums whitespace-nowrap">
-                {formatQuantity(line.quantity, line.unit)}
+                {units.quantity(line.quantity, line.unit)}
               </td>
             </tr>
           ))}

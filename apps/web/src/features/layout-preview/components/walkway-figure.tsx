@@ -1,9 +1,10 @@
-import { formatNumber } from '@seamwright/takeoff';
 import type { LayoutPlan } from '@seamwright/takeoff';
+import { useUnits } from '../../../lib/units';
 import { Figure } from './figure';
 
 /** Seams still inside the walkway: a warning, since seams there wear and lift first. */
 export function WalkwayFigure({ plan }: { plan: LayoutPlan }) {
+  const { length } = useUnits();
   const crossings = plan.trafficSeamCrossings;
   if (crossings.length === 0)
     return (
@@ -16,8 +17,8 @@ export function WalkwayFigure({ plan }: { plan: LayoutPlan }) {
     <div className="col-span-2 my-2 rounded-md xl:col-span-1 border-2 border-caution-500 bg-caution-50 px-3 py-2 text-caution-800">
       <dt className="text-sm font-semibold">Seams in the walkway</dt>
       <dd className="font-semibold tabular-nums">
-        {crossings.length} {crossings.length === 1 ? 'seam runs' : 'seams run'}{' '}
-        {formatNumber(feet, 1)} ft inside the walkway
+        {crossings.length} {crossings.length === 1 ? 'seam runs' : 'seams run'} {length(feet)}{' '}
+        inside the walkway
       </dd>
       <dd className="text-sm">
         Seams under foot traffic wear and lift first; try another grain or move the path.

@@ -1,5 +1,6 @@
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { useUnits } from '../../../lib/units';
 import { buildLayoutRequest } from '../utils/build-request';
 import { computePlanState, emptyPlanState, type PlanState } from '../utils/compute-plan';
 import { parseLayoutParams, toLayoutSearchParams, type LayoutParams } from '../utils/layout-params';
@@ -14,28 +15,33 @@ export const PLAN_DEBOUNCE_MS = 150;
  * keystroke; the plan follows after the pause.
  */
 export function useLayoutState() {
+  const units = useUnits();
   const [searchParams, setSearchParams] = useSearchParams();
-  const [params, setParams] = useState<LayoutParams>(() => parseLayoutParams(searchParams));
-  const [planState, setPlanState] = useState<PlanState>(() =>
-    computePlanState(params, emptyPlanState),
+  const [params, setParams] = useState<LayoutParams>(() =>
+    parseLayoutParams(searchParams, units.system),
   );
-  const fieldErrors = useMemo(() => buildLayoutRequest(params).errors, [params]);
+  const [planState, setPlanState] = useState<PlanState>(() =>
+    computePlanState(params, emptyPlanState, units),
+  );
+  const fieldErrors = useMemo(() => buildLayoutRequest(params, units).errors, [params, units]);
 
   useEffect(() => {
     const timer = window.setTimeout(() => {
       setPlanState((previous) =>
-        previous.good?.params === params ? previous : computePlanState(params, previous),
+        previous.good?.params === params && previous.good.units === units
+          ? previous
+          : computePlanState(params, previous, units),
       );
-      const next = toLayoutSearchParams(params);
+      const next = toLayoutSearchParams(params, units.system);
       if (next.toString() !== new URLSearchParams(window.location.search).toString())
         setSearchParams(next, { replace: true });
     }, PLAN_DEBOUNCE_MS);
     return () => window.clearTimeout(timer);
-  }, [params, setSearchParams]);
+  }, [params, units, setSearchParams]);
 
   const update = useCallback(
     (change: Partial<LayoutParams>) => setParams((current) => ({ ...current, ...change })),
     [],
   );
-  return { params, update, fieldErrors, planState };
+  return { params, update, fieldErrors, planState, units };
 }

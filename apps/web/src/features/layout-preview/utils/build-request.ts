@@ -1,6 +1,7 @@
 import type { EdgeTag, LayoutPoint, LayoutRequestInput } from '@seamwright/takeoff';
 import { sameTagForAll, tagsInRingOrder } from './edge-tags';
 import type { LayoutParams } from './layout-params';
+import { unitsFor, type Units } from '../../../lib/units';
 import { readAngle, readLength, readPoint } from './read-input';
 import {
   buildFromPoints,
@@ -15,11 +16,11 @@ import {
 /** Grain angles (degrees CCW from east, the direction the roll's length runs) for the compass choices. */
 export const grainAngles = { 'east-west': 0, 'north-south': 90 } as const;
 
-function shapeOf(params: LayoutParams): ShapeResult {
-  if (params.shape === 'rectangle') return buildRectangle(params.len, params.wid);
+function shapeOf(params: LayoutParams, units: Units): ShapeResult {
+  if (params.shape === 'rectangle') return buildRectangle(params.len, params.wid, units);
   if (params.shape === 'l-shape')
-    return buildLShape(params.len, params.wid, params.nlen, params.nwid);
-  return buildFromPoints(params.pts);
+    return buildLShape(params.len, params.wid, params.nlen, params.nwid, units);
+  return buildFromPoints(params.pts, units);
 }
 
 /** The outer ring's edge tags in ring order, as the planner's `edges` expects; undefined when none. */
@@ -30,10 +31,14 @@ function edgesOf(params: LayoutParams, ringLength: number): (EdgeTag | null)[] |
   return sameTagForAll(params.pedge, ringLength);
 }
 
-function trafficPathOf(params: LayoutParams, errors: FieldErrors): LayoutPoint[] | undefined {
+function trafficPathOf(
+  params: LayoutParams,
+  errors: FieldErrors,
+  units: Units,
+): LayoutPoint[] | undefined {
   if (params.from.trim() === '' && params.to.trim() === '') return undefined;
-  const from = readPoint(params.from);
-  const to = readPoint(params.to);
+  const from = readPoint(params.from, units);
+  const to = readPoint(params.to, units);
   if (!from.ok)
     errors.from =
       params.from.trim() === '' ? 'Give where the path starts, or clear both ends' : from.message;
@@ -50,13 +55,20 @@ export interface BuiltRequest {
   errors: FieldErrors;
 }
 
-/** Turns the screen's fields into a layout request for `planLayout`. */
-export function buildLayoutRequest(params: LayoutParams): BuiltRequest {
-  const shape = shapeOf(params);
+/**
+ * Turns the screen's fields into a layout request for `planLayout`. The fields are read in the
+ * company's units; the request is always in feet.
+ */
+export function buildLayoutRequest(
+  params: LayoutParams,
+  units: Units = unitsFor('imperial'),
+): BuiltRequest {
+  const shape = shapeOf(params, units);
   const errors: FieldErrors = shape.ok ? {} : { ...shape.errors };
-  const maxLength = readLength(params.max);
+  const maxLength = readLength(params.max, units);
   if (!maxLength.ok) errors.max = maxLength.message;
-  else if (maxLength.value < 1) errors.max = 'The longest piece must be at least 1 ft';
+  else if (maxLength.value < 1)
+    errors.max = `The longest piece must be at least ${units.length(1)}`;
   let angleDeg: number | undefined;
   if (params.grain === 'angle') {
     const angle = readAngle(params.angle);
@@ -65,7 +77,7 @@ export function buildLayoutRequest(params: LayoutParams): BuiltRequest {
   } else if (params.grain !== 'auto') {
     angleDeg = grainAngles[params.grain];
   }
-  const path = trafficPathOf(params, errors);
+  const path = trafficPathOf(params, errors, units);
   if (!shape.ok || Object.keys(errors).length > 0 || !maxLength.ok)
     return { request: null, errors };
   const edges = edgesOf(params, shape.outer.length);

@@ -1,5 +1,6 @@
 import { planLayout } from '@seamwright/takeoff';
 import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
+import { unitsFor, type Units } from '../../../lib/units';
 import type { LayoutParams } from './layout-params';
 import { buildLayoutRequest } from './build-request';
 import { plannerMessage } from './plan-words';
@@ -10,6 +11,8 @@ export interface GoodPlan {
   plan: LayoutPlan;
   takeoff: PlanTakeoff | null;
   params: LayoutParams;
+  /** The units the params were read in; a change of units plans again. */
+  units: Units;
   /** The outline it was planned for: outer ring, then holes. */
   rings: LayoutPoint[][];
   walkway: LayoutPoint[] | null;
@@ -31,8 +34,12 @@ export const emptyPlanState: PlanState = { good: null, plannerError: null, isFie
  * planner refuses the shape. planLayout is synchronous and fast (well under 50 ms for 60
  * vertices), so it runs on the main thread.
  */
-export function computePlanState(params: LayoutParams, previous: PlanState): PlanState {
-  const { request } = buildLayoutRequest(params);
+export function computePlanState(
+  params: LayoutParams,
+  previous: PlanState,
+  units: Units = unitsFor('imperial'),
+): PlanState {
+  const { request } = buildLayoutRequest(params, units);
   if (!request) return { good: previous.good, plannerError: null, isFieldInvalid: true };
   try {
     const plan = planLayout(request);
@@ -46,7 +53,7 @@ export function computePlanState(params: LayoutParams, previous: PlanState): Pla
     const walkway = request.trafficPaths?.[0];
     const walkwayPoints = walkway ? [...('points' in walkway ? walkway.points : walkway)] : null;
     return {
-      good: { plan, takeoff, params, rings, walkway: walkwayPoints },
+      good: { plan, takeoff, params, units, rings, walkway: walkwayPoints },
       plannerError: null,
       isFieldInvalid: false,
     };

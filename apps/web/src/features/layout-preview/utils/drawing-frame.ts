@@ -1,3 +1,4 @@
+import { feetToMetres, metresToFeet } from '@seamwright/takeoff';
 import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
 
 /** Maps plan feet (x east, y north) onto SVG units (y down): one SVG unit is one foot. */
@@ -65,9 +66,17 @@ export function ringsPath(
 }
 
 const niceLengths = [1, 2, 5, 10, 20, 25, 50, 100, 200, 250, 500, 1000];
+const niceMetres = [0.5, 1, 2, 5, 10, 20, 25, 50, 100, 200, 250, 500];
 
 /** A round scale-bar length no longer than about a third of the plan's width. */
 export function scaleBarFeet(planWidth: number): number {
   const target = planWidth / 3;
   return niceLengths.filter((length) => length <= target).at(-1) ?? niceLengths[0] ?? 1;
+}
+
+/** The scale bar for a metric company: a round number of metres, and its length in plan feet. */
+export function scaleBarMetres(planWidth: number): { metres: number; feet: number } {
+  const target = feetToMetres(planWidth) / 3;
+  const metres = niceMetres.filter((length) => length <= target).at(-1) ?? niceMetres[0] ?? 1;
+  return { metres, feet: metresToFeet(metres) };
 }

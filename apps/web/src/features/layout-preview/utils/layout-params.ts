@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { MeasurementSystem } from '@seamwright/takeoff';
 import { edgeChoices, type EdgeChoice } from './edge-tags';
 
 export const shapeKinds = ['rectangle', 'l-shape', 'points'] as const;
@@ -37,6 +38,28 @@ export const layoutParamDefaults = {
   pedge: 'unknown',
 } as const satisfies Record<string, string | number | readonly EdgeChoice[]>;
 
+/**
+ * The same yard for a metric company, typed in metres: about 10 × 5.5 m, the L in whole metres,
+ * a 30 m longest piece (a 100 ft roll is 30.48 m).
+ */
+const metricSamplePoints = ['0, 0', '12, 0', '12, 4.5', '6, 4.5', '6, 9', '0, 9'].join('\n');
+export const metricLayoutParamDefaults = {
+  ...layoutParamDefaults,
+  len: '10 m',
+  wid: '5.5 m',
+  nlen: '3.5 m',
+  nwid: '2.5 m',
+  pts: metricSamplePoints,
+  max: '30 m',
+} as const satisfies Record<keyof typeof layoutParamDefaults, unknown>;
+
+type LayoutDefaults = typeof layoutParamDefaults | typeof metricLayoutParamDefaults;
+
+/** The defaults in the company's units, so a metric company's form opens in metres. */
+export function layoutParamDefaultsFor(system: MeasurementSystem): LayoutDefaults {
+  return system === 'metric' ? metricLayoutParamDefaults : layoutParamDefaults;
+}
+
 /** Typed text is kept as typed (even when it does not parse) so a reload shows the same form. */
 const typed = (fallback: string, maxLength = 40) => z.string().max(maxLength).catch(fallback);
 
@@ -57,34 +80,49 @@ const edgeList = (fallback: readonly EdgeChoice[]) =>
  * The layout screen's state as it lives in the URL. Anything unreadable falls back to its
  * default field by field, so an old or hand-edited link still opens a plan.
  */
-export const layoutParamsSchema = z.object({
-  shape: z.enum(shapeKinds).catch(layoutParamDefaults.shape),
-  len: typed(layoutParamDefaults.len),
-  wid: typed(layoutParamDefaults.wid),
-  nlen: typed(layoutParamDefaults.nlen),
-  nwid: typed(layoutParamDefaults.nwid),
-  // Room for a few hundred vertices typed as "x, y" lines.
-  pts: typed(layoutParamDefaults.pts, 12_000),
-  roll: z.coerce.number().pipe(z.literal(rollWidthsFt)).catch(layoutParamDefaults.roll),
-  max: typed(layoutParamDefaults.max),
-  grain: z.enum(grainChoices).catch(layoutParamDefaults.grain),
-  angle: typed(layoutParamDefaults.angle),
-  use: z.enum(usages).catch(layoutParamDefaults.use),
-  from: typed(layoutParamDefaults.from),
-  to: typed(layoutParamDefaults.to),
-  redges: edgeList(layoutParamDefaults.redges),
-  ledges: edgeList(layoutParamDefaults.ledges),
-  pedge: edgeChoice,
-});
+function buildParamsSchema(defaults: LayoutDefaults) {
+  return z.object({
+    shape: z.enum(shapeKinds).catch(defaults.shape),
+    len: typed(defaults.len),
+    wid: typed(defaults.wid),
+    nlen: typed(defaults.nlen),
+    nwid: typed(defaults.nwid),
+    // Room for a few hundred vertices typed as "x, y" lines.
+    pts: typed(defaults.pts, 12_000),
+    roll: z.coerce.number().pipe(z.literal(rollWidthsFt)).catch(defaults.roll),
+    max: typed(defaults.max),
+    grain: z.enum(grainChoices).catch(defaults.grain),
+    angle: typed(defaults.angle),
+    use: z.enum(usages).catch(defaults.use),
+    from: typed(defaults.from),
+    to: typed(defaults.to),
+    redges: edgeList(defaults.redges),
+    ledges: edgeList(defaults.ledges),
+    pedge: edgeChoice,
+  });
+}
+
+const schemas = {
+  imperial: buildParamsSchema(layoutParamDefaults),
+  metric: buildParamsSchema(metricLayoutParamDefaults),
+};
+export const layoutParamsSchema = schemas.imperial;
 export type LayoutParams = z.output<typeof layoutParamsSchema>;
 
 /** Reads the screen's state from the URL's search params. */
-export function parseLayoutParams(search: URLSearchParams): LayoutParams {
-  return layoutParamsSchema.parse(Object.fromEntries(search));
+export function parseLayoutParams(
+  search: URLSearchParams,
+  system: MeasurementSystem = 'imperial',
+): LayoutParams {
+  return schemas[system].parse(Object.fromEntries(search));
 }
 
 /** Writes the state back, leaving out defaults (and fields the chosen shape does not use). */
-export function toLayoutSearchParams(params: LayoutParams): URLSearchParams {
+export function toLayoutSearchParams(
+  params: LayoutParams,
+  system: MeasurementSystem = 'imperial',
+): URLSearchParams {
+  const defaults = layoutParamDefaultsFor(system);
   const usedByShape: Record<ShapeKind, ReadonlySet<string>> = {
     rectangle: new Set(['len', 'wid', 'redges']),
     'l-shape': new Set(['len', 'wid', 'nlen', 'nwid', 'ledges']),
@@ -98,7 +136,7 @@ export function toLayoutSearchParams(params: LayoutParams): URLSearchParams {
     if (shapeFields.has(key) && !usedByShape[params.shape].has(key)) continue;
     if (key === 'angle' && params.grain !== 'angle') continue;
     // String() writes a list comma-separated, as edgeList reads it back.
-    if (String(value) === String(layoutParamDefaults[key])) continue;
+    if (String(value) === String(defaults[key])) continue;
     search.set(key, String(value));
   }
   return search;

@@ -1,6 +1,10 @@
 import type { LayoutPoint } from '@seamwright/takeoff';
 import type { NamedEdge } from './edge-tags';
+import { feetToMetres } from '@seamwright/takeoff';
+import { unitsFor, type Units } from '../../../lib/units';
 import { readLength, readPoint, type Read } from './read-input';
+
+const imperial = unitsFor('imperial');
 
 /** Messages per field name, for the fields that could not be read. */
 export type FieldErrors = Partial<Record<string, string>>;
@@ -27,8 +31,15 @@ function collect(fields: Record<string, Read<number>>): {
  * corner at 0, 0. The ring runs counter-clockwise from there: edge 0 is the south side,
  * 1 the east, 2 the north, 3 the west.
  */
-export function buildRectangle(lengthText: string, widthText: string): ShapeResult {
-  const { values, errors } = collect({ len: readLength(lengthText), wid: readLength(widthText) });
+export function buildRectangle(
+  lengthText: string,
+  widthText: string,
+  units: Units = imperial,
+): ShapeResult {
+  const { values, errors } = collect({
+    len: readLength(lengthText, units),
+    wid: readLength(widthText, units),
+  });
   const { len, wid } = values;
   if (len === undefined || wid === undefined) return { ok: false, errors };
   return {
@@ -63,12 +74,13 @@ export function buildLShape(
   widthText: string,
   notchLengthText: string,
   notchWidthText: string,
+  units: Units = imperial,
 ): ShapeResult {
   const { values, errors } = collect({
-    len: readLength(lengthText),
-    wid: readLength(widthText),
-    nlen: readLength(notchLengthText),
-    nwid: readLength(notchWidthText),
+    len: readLength(lengthText, units),
+    wid: readLength(widthText, units),
+    nlen: readLength(notchLengthText, units),
+    nwid: readLength(notchWidthText, units),
   });
   const { len, wid, nlen, nwid } = values;
   if (len !== undefined && nlen !== undefined && nlen >= len)
@@ -125,10 +137,10 @@ function dropRepeatedPoints(ring: readonly LayoutPoint[]): LayoutPoint[] {
 }
 
 /**
- * Points typed one per line as `x, y` in feet; blank lines are skipped. A line reading `hole`
+ * Points typed one per line as `x, y` in the company's unit; blank lines are skipped. A line reading `hole`
  * starts a hole (a planter, a tree ring) whose points follow.
  */
-export function buildFromPoints(text: string): ShapeResult {
+export function buildFromPoints(text: string, units: Units = imperial): ShapeResult {
   const rings: LayoutPoint[][] = [[]];
   for (const [index, line] of text.split(/\r?\n/).entries()) {
     if (line.trim() === '') continue;
@@ -136,7 +148,7 @@ export function buildFromPoints(text: string): ShapeResult {
       rings.push([]);
       continue;
     }
-    const point = readPoint(line);
+    const point = readPoint(line, units);
     if (!point.ok) return { ok: false, errors: { pts: `Line ${index + 1}: ${point.message}` } };
     rings[rings.length - 1]?.push(point.value);
   }
@@ -154,8 +166,12 @@ export function buildFromPoints(text: string): ShapeResult {
   return { ok: true, outer, holes };
 }
 
-/** Points as the textarea shows them, rounded to hundredths of a foot. */
-export function pointsToText(points: readonly LayoutPoint[]): string {
-  const round = (value: number) => String(Math.round(value * 100) / 100);
+/**
+ * Points (in feet) as the textarea shows them in the company's unit, rounded to hundredths
+ * (of a foot, or of a metre: whole centimetres).
+ */
+export function pointsToText(points: readonly LayoutPoint[], units: Units = imperial): string {
+  const inUnit = (feet: number) => (units.system === 'metric' ? feetToMetres(feet) : feet);
+  const round = (value: number) => String(Math.round(inUnit(value) * 100) / 100);
   return points.map(([x, y]) => `${round(x)}, ${round(y)}`).join('\n');
 }

@@ -4,4 +4,5 @@ import { sessionMeKey } from '../../../lib/query-client';
 export const sessionKeys = {
   all: ['session'] as const,
   me: () => sessionMeKey,
+  companies: () => ['session', 'companies'] as const,
 };

@@ -28,7 +28,10 @@ export function AppShell({ children }: { children: ReactNode }) {
         Skip to content
       </a>
 
-      <aside className="sticky top-0 hidden h-dvh w-60 shrink-0 flex-col gap-6 bg-moss-900 p-4 text-sand-100 md:flex print:hidden">
+      <aside
+        data-surface="dark"
+        className="sticky top-0 hidden h-dvh w-60 shrink-0 flex-col gap-6 bg-moss-900 p-4 text-sand-100 md:flex print:hidden"
+      >
         <NavLink
           to={paths.today}
           className="flex items-center gap-2 text-lg font-bold text-sand-100 no-underline"

@@ -1,4 +1,4 @@
-import { useNavigate } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { useSession } from '../../../lib/session';
 import { useSignOut } from '../api/sign-out';
@@ -27,6 +27,14 @@ export function UserMenu({ tone = 'dark' }: { tone?: 'dark' | 'light' }) {
         >
           {user.email}
         </p>
+        <Link
+          to={paths.profile}
+          // The menu is a <details>; close it so it is not still open on the profile page.
+          onClick={(event) => event.currentTarget.closest('details')?.removeAttribute('open')}
+          className={`mt-1 flex min-h-11 w-full items-center rounded px-2 font-semibold no-underline ${tone === 'dark' ? 'text-white hover:bg-moss-700' : 'text-ink hover:bg-sand-100'}`}
+        >
+          Your profile
+        </Link>
         <button
           type="button"
           onClick={() => signOut.mutate()}

@@ -1,17 +1,21 @@
 import type { ComponentType } from 'react';
 import { can, type Action, type Role } from '@seamwright/shared';
-import { CustomersIcon, SettingsIcon, TodayIcon } from '../../../components/ui/icons';
+import { CustomersIcon, ProfileIcon, SettingsIcon, TodayIcon } from '../../../components/ui/icons';
 import { LayoutIcon } from '../../../components/ui/layout-icon';
 import { paths } from '../../../config/paths';
+
+type Icon = ComponentType<{ className?: string }>;
 
 export interface Section {
   to: string;
   label: string;
-  Icon: ComponentType<{ className?: string }>;
+  Icon: Icon;
   /** The section is shown only to roles that may do this. */
   needs?: Action;
   /** Roles whose phone bottom bar carries this section. */
   phoneRoles: readonly Role[];
+  /** A role that knows this section by another name on the phone (what it holds for them). */
+  phoneNames?: Partial<Record<Role, { label: string; Icon: Icon }>>;
 }
 
 /** Only sections that exist are listed; later work adds Jobs, Calendar, Inventory, Invoices, Reports. */
@@ -29,18 +33,20 @@ const sections: Section[] = [
     needs: 'customers.read',
     phoneRoles: ['owner', 'office', 'bookkeeper'],
   },
-  // Shows no prices, so every role sees it in the rail; the crew lead's phone bar stays for site work.
+  // Shows no prices, so every role sees it; crew leads check cuts and seams with it on site.
   {
     to: paths.layout,
     label: 'Layout',
     Icon: LayoutIcon,
-    phoneRoles: ['owner', 'office', 'bookkeeper'],
+    phoneRoles: ['owner', 'office', 'bookkeeper', 'crew_lead'],
   },
+  // For a crew lead the settings page holds only their own profile, so the phone bar says so.
   {
     to: paths.settings,
     label: 'Settings',
     Icon: SettingsIcon,
-    phoneRoles: ['owner', 'office', 'bookkeeper'],
+    phoneRoles: ['owner', 'office', 'bookkeeper', 'crew_lead'],
+    phoneNames: { crew_lead: { label: 'Profile', Icon: ProfileIcon } },
   },
 ];
 
@@ -48,6 +54,12 @@ export function sectionsFor(role: Role): Section[] {
   return sections.filter((section) => !section.needs || can(role, section.needs));
 }
 
+/**
+ * The phone bottom bar. Until crews have their scheduled jobs (and with them the gate and
+ * hazard notes of the sites they work on), a crew lead's bar reaches Today, Layout and Profile.
+ */
 export function phoneSectionsFor(role: Role): Section[] {
-  return sectionsFor(role).filter((section) => section.phoneRoles.includes(role));
+  return sectionsFor(role)
+    .filter((section) => section.phoneRoles.includes(role))
+    .map((section) => ({ ...section, ...section.phoneNames?.[role] }));
 }

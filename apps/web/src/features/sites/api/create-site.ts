@@ -12,15 +12,17 @@ export async function createSite(customerId: string, input: CreateSiteInput): Pr
   return body.data;
 }
 
-/** The customer's site count changes too, so every customer query is refreshed. */
-export function useCreateSite(customerId: string) {
+/**
+ * `onCreated` lets the route refresh what else shows the customer's sites (their count on the
+ * customer pages) without this feature knowing the customers feature.
+ */
+export function useCreateSite(customerId: string, onCreated: () => Promise<unknown>) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CreateSiteInput) => createSite(customerId, input),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: siteKeys.list(customerId) });
-      // The customers feature's key root, named rather than imported: features stay independent.
-      await queryClient.invalidateQueries({ queryKey: ['customers'] });
+      await onCreated();
     },
   });
 }

@@ -7,14 +7,18 @@ export async function deleteSite(siteId: string): Promise<void> {
   await api.delete(`/sites/${encodeURIComponent(siteId)}`);
 }
 
-export function useDeleteSite(customerId: string, siteId: string) {
+/** `onDeleted` refreshes what else shows the customer's sites; see `useCreateSite`. */
+export function useDeleteSite(
+  customerId: string,
+  siteId: string,
+  onDeleted: () => Promise<unknown>,
+) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => deleteSite(siteId),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: siteKeys.list(customerId) });
-      // The customers feature's key root (its site count changes), named rather than imported.
-      await queryClient.invalidateQueries({ queryKey: ['customers'] });
+      await onDeleted();
     },
   });
 }

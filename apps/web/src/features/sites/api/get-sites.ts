@@ -1,27 +1,31 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, useSuspenseInfiniteQuery } from '@tanstack/react-query';
 import type { ListResponse, SiteView } from '@seamwright/shared';
 import { api } from '../../../lib/api-client';
+import { largestPageSize, nextPageOf, toPagedList, type PagedList } from '../../../lib/paged-list';
 import { siteKeys } from './site-keys';
 
-/** `GET /api/customers/:id/sites`: every site of one customer. */
-export async function getSites(customerId: string, signal?: AbortSignal): Promise<SiteView[]> {
-  const body = await api.get<ListResponse<SiteView> | { data: SiteView[] }>(
-    `/customers/${encodeURIComponent(customerId)}/sites`,
-    {
-      query: { pageSize: 100 },
-      signal,
-    },
-  );
-  return body.data;
-}
-
-export function sitesQueryOptions(customerId: string) {
-  return queryOptions({
-    queryKey: siteKeys.list(customerId),
-    queryFn: ({ signal }) => getSites(customerId, signal),
+/** `GET /api/customers/:id/sites`: one page of a customer's sites, oldest first. */
+export function getSitesPage(
+  customerId: string,
+  page: number,
+  signal?: AbortSignal,
+): Promise<ListResponse<SiteView>> {
+  return api.get<ListResponse<SiteView>>(`/customers/${encodeURIComponent(customerId)}/sites`, {
+    query: { page, pageSize: largestPageSize },
+    signal,
   });
 }
 
-export function useSites(customerId: string): SiteView[] {
-  return useSuspenseQuery(sitesQueryOptions(customerId)).data;
+/** Pages are added on request ("Show more"), so a customer with many sites never loses any. */
+export function sitesQueryOptions(customerId: string) {
+  return infiniteQueryOptions({
+    queryKey: siteKeys.list(customerId),
+    queryFn: ({ pageParam, signal }) => getSitesPage(customerId, pageParam, signal),
+    initialPageParam: 1,
+    getNextPageParam: nextPageOf,
+  });
+}
+
+export function useSites(customerId: string): PagedList<SiteView> {
+  return toPagedList(useSuspenseInfiniteQuery(sitesQueryOptions(customerId)));
 }

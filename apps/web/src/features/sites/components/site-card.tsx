@@ -4,6 +4,7 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { describeError } from '../../../components/ui/region-error';
 import { useToast } from '../../../components/ui/toast';
+import { useFocusWhenShown } from '../../../lib/focus-when-shown';
 import { useUpdateSite } from '../api/update-site';
 import { useDeleteSite } from '../api/delete-site';
 import { SiteForm } from './site-form';
@@ -19,25 +20,48 @@ function Line({ label, value }: { label: string; value: string | null }) {
 }
 
 /** One site: where it is, what the crew must know, and edit/delete for those who may. */
-export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean }) {
+export function siteHeadingId(siteId: string): string {
+  return `site-${siteId}-heading`;
+}
+
+interface SiteCardProps {
+  site: SiteView;
+  canWrite: boolean;
+  /** Where focus goes after this site is deleted: the next site or the list's heading. */
+  focusAfterDelete: () => HTMLElement | null;
+  /** Called after the site is deleted (see `SitesPanel`'s `onSitesChanged`). */
+  onDeleted: () => Promise<unknown>;
+}
+
+export function SiteCard({ site, canWrite, focusAfterDelete, onDeleted }: SiteCardProps) {
   const [isEditing, setIsEditing] = useState(false);
   const [isConfirming, setIsConfirming] = useState(false);
   const update = useUpdateSite(site.customerId, site.id);
-  const remove = useDeleteSite(site.customerId, site.id);
+  const remove = useDeleteSite(site.customerId, site.id, onDeleted);
   const toast = useToast();
   const title = site.label ?? site.addressLine1;
+  const { target: editButtonRef, request: focusEditButton } =
+    useFocusWhenShown<HTMLButtonElement>();
+  const { target: formHeadingRef, request: focusFormHeading } =
+    useFocusWhenShown<HTMLHeadingElement>();
+  const stopEditing = () => {
+    focusEditButton();
+    setIsEditing(false);
+  };
 
   if (isEditing) {
     return (
       <li className="rounded-lg border border-line bg-white p-5">
-        <h3 className="mb-4 text-lg font-bold">Edit site</h3>
+        <h3 ref={formHeadingRef} tabIndex={-1} className="mb-4 text-lg font-bold">
+          Edit site
+        </h3>
         <SiteForm
           site={site}
           submitLabel="Save site"
-          onCancel={() => setIsEditing(false)}
+          onCancel={stopEditing}
           onSubmit={async (values) => {
             await update.mutateAsync(values);
-            setIsEditing(false);
+            stopEditing();
             toast.show('Site saved.');
           }}
         />
@@ -50,7 +74,9 @@ export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean
     <li className="rounded-lg border border-line bg-white p-5">
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
-          <h3 className="text-lg font-bold">{title}</h3>
+          <h3 id={siteHeadingId(site.id)} tabIndex={-1} className="text-lg font-bold">
+            {title}
+          </h3>
           <address className="not-italic text-ink-muted">
             {site.addressLine1}
             {site.addressLine2 ? `, ${site.addressLine2}` : ''}
@@ -62,7 +88,11 @@ export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean
           <div className="flex gap-2 print:hidden">
             <Button
               variant="secondary"
-              onClick={() => setIsEditing(true)}
+              ref={editButtonRef}
+              onClick={() => {
+                focusFormHeading();
+                setIsEditing(true);
+              }}
               aria-label={`Edit site ${title}`}
             >
               Edit
@@ -95,6 +125,7 @@ export function SiteCard({ site, canWrite }: { site: SiteView; canWrite: boolean
         title={`Delete the site ${title}?`}
         confirmLabel="Delete site"
         isBusy={remove.isPending}
+        fallbackFocus={focusAfterDelete}
         onCancel={() => setIsConfirming(false)}
         onConfirm={() =>
           void remove.mutateAsync().then(

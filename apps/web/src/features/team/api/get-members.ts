@@ -1,24 +1,29 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
-import type { MemberView } from '@seamwright/shared';
+import { infiniteQueryOptions, useSuspenseInfiniteQuery } from '@tanstack/react-query';
+import type { ListResponse, MemberView } from '@seamwright/shared';
 import { api } from '../../../lib/api-client';
+import { largestPageSize, nextPageOf, toPagedList, type PagedList } from '../../../lib/paged-list';
 import { teamKeys } from './team-keys';
 
-/** `GET /api/members`: everyone in the active company (owner only). */
-export async function getMembers(signal?: AbortSignal): Promise<MemberView[]> {
-  const body = await api.get<{ data: MemberView[] }>('/members', {
-    query: { pageSize: 100 },
+/** `GET /api/members`: one page of the people in the active company (owner only). */
+export function getMembersPage(
+  page: number,
+  signal?: AbortSignal,
+): Promise<ListResponse<MemberView>> {
+  return api.get<ListResponse<MemberView>>('/members', {
+    query: { page, pageSize: largestPageSize },
     signal,
   });
-  return body.data;
 }
 
 export function membersQueryOptions() {
-  return queryOptions({
+  return infiniteQueryOptions({
     queryKey: teamKeys.members(),
-    queryFn: ({ signal }) => getMembers(signal),
+    queryFn: ({ pageParam, signal }) => getMembersPage(pageParam, signal),
+    initialPageParam: 1,
+    getNextPageParam: nextPageOf,
   });
 }
 
-export function useMembers(): MemberView[] {
-  return useSuspenseQuery(membersQueryOptions()).data;
+export function useMembers(): PagedList<MemberView> {
+  return toPagedList(useSuspenseInfiniteQuery(membersQueryOptions()));
 }

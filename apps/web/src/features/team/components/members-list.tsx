@@ -1,14 +1,17 @@
 import { useState } from 'react';
-import { roleLabels, roles, type MemberView, type Role } from '@seamwright/shared';
+import { roleLabels, type MemberView, type Role } from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { describeError } from '../../../components/ui/region-error';
+import { ShowMore } from '../../../components/ui/show-more';
 import { useToast } from '../../../components/ui/toast';
 import { formatDate } from '../../../lib/format';
+import { largestPageSize } from '../../../lib/paged-list';
 import { useSession } from '../../../lib/session';
 import { useMembers } from '../api/get-members';
 import { useUpdateMember } from '../api/update-member';
 import { useRemoveMember } from '../api/remove-member';
+import { MemberRole } from './member-role';
 
 /** The company's people, their roles, and removal; the owner cannot demote or remove themself here. */
 export function MembersList() {
@@ -27,8 +30,13 @@ export function MembersList() {
 
   return (
     <>
-      <ul className="divide-y divide-line rounded-lg border border-line bg-white">
-        {members.map((member) => {
+      <ul
+        id="team-members"
+        tabIndex={-1}
+        aria-label="Team members"
+        className="divide-y divide-line rounded-lg border border-line bg-white"
+      >
+        {members.items.map((member) => {
           const isSelf = member.userId === user.id;
           return (
             <li key={member.id} className="flex flex-wrap items-center justify-between gap-3 p-4">
@@ -43,27 +51,12 @@ export function MembersList() {
                 </p>
               </div>
               <div className="flex flex-wrap items-center gap-2">
-                <label className="sr-only" htmlFor={`role-${member.id}`}>
-                  Role of {member.name}
-                </label>
-                <select
-                  id={`role-${member.id}`}
-                  value={member.role}
-                  disabled={isSelf || update.isPending}
-                  onChange={(event) =>
-                    void changeRole(
-                      member,
-                      roles.find((r) => r === event.target.value) ?? member.role,
-                    )
-                  }
-                  className="min-h-11 rounded-md border border-line-strong bg-white px-2"
-                >
-                  {roles.map((r) => (
-                    <option key={r} value={r}>
-                      {roleLabels[r]}
-                    </option>
-                  ))}
-                </select>
+                <MemberRole
+                  member={member}
+                  isSelf={isSelf}
+                  isSaving={update.isPending}
+                  onSave={(role) => changeRole(member, role)}
+                />
                 {isSelf ? null : (
                   <Button
                     variant="quietDanger"
@@ -78,11 +71,21 @@ export function MembersList() {
           );
         })}
       </ul>
+      <ShowMore
+        shown={members.items.length}
+        total={members.total}
+        noun="people"
+        pageSize={largestPageSize}
+        hasMore={members.hasMore}
+        isLoading={members.isLoadingMore}
+        onShowMore={members.loadMore}
+      />
       <ConfirmDialog
         isOpen={leaving !== null}
         title={`Remove ${leaving?.name ?? ''} from ${company.name}?`}
         confirmLabel="Remove from company"
         isBusy={remove.isPending}
+        fallbackFocus={() => document.getElementById('team-members')}
         onCancel={() => setLeaving(null)}
         onConfirm={() => {
           if (!leaving) return;

@@ -3,6 +3,7 @@ import { can, type Role } from '@seamwright/shared';
 import { CautionPanel } from '../../../components/ui/caution-panel';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { hourIn } from '../../../lib/format';
+import { useDocumentTitle } from '../../../lib/page-title';
 import { useSession } from '../../../lib/session';
 import { paths } from '../../../config/paths';
 import { NextStep } from './next-step';
@@ -53,11 +54,12 @@ function officeSteps(role: Role) {
 export function TodayOverview() {
   const { user, company, role } = useSession();
   const firstName = user.name.split(' ')[0] ?? user.name;
+  useDocumentTitle('Today');
 
   return (
     <div className="flex max-w-4xl flex-col gap-6">
       <div>
-        <h1 className="text-2xl font-bold sm:text-3xl">
+        <h1 tabIndex={-1} className="text-2xl font-bold sm:text-3xl">
           {greeting(hourIn(company.timeZone))}, {firstName}
         </h1>
         <p className="mt-1 text-ink-muted">

@@ -1,0 +1,20 @@
+// Runs inside a piscina worker thread: validates and plans one layout or job request. Everything
+// slow (the ring checks, the direction search, the packing) happens here, off the API's
+// event loop; the pool ends this thread when a task outlives its budget.
+import { LayoutInputError, parseJobRequest, planJob, planLayout } from '@seamwright/takeoff';
+import type { LayoutRequestInput } from '@seamwright/takeoff';
+import type { PlanOutcome, PlanTask } from './planner-task.js';
+
+export default function planInWorker(task: PlanTask): PlanOutcome {
+  task.startedPort.postMessage('started');
+  task.startedPort.close();
+  try {
+    if (task.kind === 'job') return { ok: true, plan: planJob(parseJobRequest(task.body)) };
+    // planLayout validates its input with parseLayoutRequest first (and only once).
+    return { ok: true, plan: planLayout(task.body as LayoutRequestInput) };
+  } catch (error) {
+    if (error instanceof LayoutInputError)
+      return { ok: false, inputError: { path: error.path, detail: error.detail } };
+    throw error;
+  }
+}

@@ -1,0 +1,4 @@
+export const companyKeys = {
+  all: ['company'] as const,
+  settings: () => [...companyKeys.all, 'settings'] as const,
+};
