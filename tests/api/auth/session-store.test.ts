@@ -77,6 +77,26 @@ describe('session store', () => {
     await request(otherProcess).get('/api/customers').set('Cookie', cookie).expect(401);
   });
 
+  it('answers COMPANY_ACCESS_ENDED on another process when a member with another company is removed', async () => {
+    const { cookie, userId, companyId } = await signUp();
+    const other = await signUp();
+    await executeSql(
+      testApp().sequelize,
+      `INSERT INTO memberships (id, company_id, user_id, role, created_at, updated_at)
+       VALUES (UUID(), ?, ?, 'office', NOW(3), NOW(3))`,
+      [other.companyId, userId],
+    );
+    await request(otherProcess).get('/api/customers').set('Cookie', cookie).expect(200);
+    await executeSql(
+      testApp().sequelize,
+      'DELETE FROM memberships WHERE user_id = ? AND company_id = ?',
+      [userId, companyId],
+    );
+    const res = await request(otherProcess).get('/api/customers').set('Cookie', cookie);
+    expect(res.status).toBe(403);
+    expect(res.body.code).toBe('COMPANY_ACCESS_ENDED');
+  });
+
   it('rewrites nothing on a plain read, and slides the expiry once the refresh interval has passed', async () => {
     const { client, userId } = await signUp();
     const before = await sessionRow(userId);

@@ -1,15 +1,22 @@
-// The express-session store on MariaDB's `sessions` table, written for the request path: every
-// signed-in request costs one indexed statement here, which also reads the member's role in the
-// session's company (so a removed member loses access on their next request, on every process,
-// without a second query). Writes are single statements; nothing is rewritten per request (see
-// the refresh throttle in session.ts). Replaces connect-session-sequelize, whose read built
-// model instances and whose per-request touch made every request also an UPDATE of one hot row.
+// The express-session store: connect-session-sequelize (the mandated store, on its `Session`
+// model and `sessions` table), with the two methods the request-path profile showed as hot
+// replaced (docs/PERFORMANCE.md):
+// - `get` reads the session and, in the same indexed statement, the member's role in the
+//   session's company, so a removed member loses access on their next request, on every process,
+//   without a second query; a row past its expiry is refused even before the sweep deletes it.
+// - `touch` writes nothing: the package would UPDATE the row on every request, serialising a
+//   user's concurrent requests on its row lock; session.ts refreshes the expiry now and then.
+// `set` keeps the package's insert for a new session; for one read from the table it only
+// updates, so a save racing a sign-out or password reset cannot bring the row back. `destroy`,
+// the expiry sweep and the user_id column (`extendDefaultFields`) are the package's own.
 import type { Request } from 'express';
 import session from 'express-session';
 import type { SessionData } from 'express-session';
+import connectSessionSequelize from 'connect-session-sequelize';
 import { QueryTypes } from 'sequelize';
-import type { Sequelize } from 'sequelize';
+import type { ModelStatic, Sequelize } from 'sequelize';
 import type { Role } from '@seamwright/shared';
+import type { SessionModel } from '../db/models/session.model.js';
 
 /** The membership read together with the session, for the session's user and company. */
 export interface SessionMembership {
@@ -54,28 +61,48 @@ function run<T>(work: Promise<T>, callback: Callback<T> | undefined): void {
   );
 }
 
-export class MariaDbSessionStore extends session.Store {
+interface SessionColumns {
+  data: string;
+  expires: Date;
+  userId: string | null;
+}
+
+/** The package's columns plus the user id, so a password reset can end that user's sessions. */
+function withUserId(defaults: { data: string; expires: Date }, data: SessionData): SessionColumns {
+  return { ...defaults, userId: data.userId ?? null };
+}
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+
+export class LeanSessionStore extends SequelizeStore {
+  // Set by the package's constructor from `table: 'Session'`; not in its type declarations.
+  declare readonly sessionModel: ModelStatic<SessionModel>;
+  declare readonly expiration: (data: SessionData) => Date;
+
   /** Sessions read from the table in this process; saving one never re-creates its row. */
   private readonly loaded = new WeakSet<object>();
-  private sweep: NodeJS.Timeout | undefined;
 
   constructor(
     private readonly sequelize: Sequelize,
-    private readonly maxAgeMs: number,
+    maxAgeMs: number,
     sweepIntervalMs: number,
   ) {
-    super();
-    if (sweepIntervalMs > 0) {
-      this.sweep = setInterval(() => void this.clearExpiredSessions(), sweepIntervalMs);
-      this.sweep.unref();
-    }
+    super({
+      db: sequelize,
+      table: 'Session',
+      checkExpirationInterval: sweepIntervalMs,
+      expiration: maxAgeMs,
+      extendDefaultFields: withUserId,
+    });
   }
 
   override get(sid: string, callback: Callback<SessionData | null>): void {
-    run(this.read(sid), callback);
+    run(this.unsafeReadSessionWithMembership(sid), callback);
   }
 
-  private async read(sid: string): Promise<LoadedData | null> {
+  // Unscoped: the membership join builds the tenant context itself, for the user and company
+  // stored in the session row (one statement on the primary key and the unique membership key).
+  private async unsafeReadSessionWithMembership(sid: string): Promise<LoadedData | null> {
     const [row] = await this.sequelize.query<SessionRow>(selectSession, {
       replacements: [sid, new Date()],
       type: QueryTypes.SELECT,
@@ -98,56 +125,24 @@ export class MariaDbSessionStore extends session.Store {
   }
 
   override set(sid: string, data: SessionData, callback?: Callback): void {
-    run(this.write(sid, data), callback);
-  }
-
-  private async write(sid: string, data: SessionData): Promise<void> {
-    const expires = data.cookie.expires ?? new Date(Date.now() + this.maxAgeMs);
-    const values = [JSON.stringify(data), expires, data.userId ?? null, new Date()];
-    if (this.loaded.has(data)) {
-      // An existing session: update only. If a sign-out or password reset deleted the row while
-      // this request ran, it stays deleted.
-      await this.sequelize.query(
-        'UPDATE sessions SET data = ?, expires = ?, user_id = ?, updated_at = ? WHERE sid = ?',
-        { replacements: [...values, sid], type: QueryTypes.UPDATE },
-      );
+    if (!this.loaded.has(data)) {
+      super.set(sid, data, callback);
       return;
     }
-    await this.sequelize.query(
-      `INSERT INTO sessions (data, expires, user_id, updated_at, sid, created_at)
-       VALUES (?, ?, ?, ?, ?, ?)
-       ON DUPLICATE KEY UPDATE data = VALUES(data), expires = VALUES(expires),
-         user_id = VALUES(user_id), updated_at = VALUES(updated_at)`,
-      { replacements: [...values, sid, new Date()], type: QueryTypes.INSERT },
+    // An existing session: update only. If a sign-out or password reset deleted the row while
+    // this request ran, it stays deleted (the package's find-or-create would insert it again).
+    const columns = withUserId(
+      { data: JSON.stringify(data), expires: this.expiration(data) },
+      data,
     );
-  }
-
-  override destroy(sid: string, callback?: Callback): void {
     run(
-      this.sequelize
-        .query('DELETE FROM sessions WHERE sid = ?', {
-          replacements: [sid],
-          type: QueryTypes.DELETE,
-        })
-        .then(() => undefined),
+      this.sessionModel.update(columns, { where: { sid } }).then(() => undefined),
       callback,
     );
   }
 
-  /** Deletes expired rows (the `sessions_expires` index serves it). */
-  async clearExpiredSessions(): Promise<void> {
-    try {
-      await this.sequelize.query('DELETE FROM sessions WHERE expires < ?', {
-        replacements: [new Date()],
-        type: QueryTypes.DELETE,
-      });
-    } catch {
-      // A failed sweep is retried at the next interval; expired rows are never read (see get).
-    }
-  }
-
-  stopExpiringSessions(): void {
-    clearInterval(this.sweep);
-    this.sweep = undefined;
-  }
+  /** No write: the expiry moves forward through session.ts's periodic refresh instead. */
+  override touch = (_sid: string, _data: unknown, callback?: (err?: unknown) => void): void => {
+    callback?.();
+  };
 }

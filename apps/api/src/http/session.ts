@@ -1,11 +1,11 @@
-// Sessions live in MariaDB (our own store, http/session-store.ts), so any number of API
-// processes can serve the same users. The cookie holds only the session id; its name comes
-// from the environment (`__Host-sw.sid` on https, see config/env.ts).
+// Sessions live in MariaDB (connect-session-sequelize, with a leaner read: http/session-store.ts),
+// so any number of API processes can serve the same users. The cookie holds only the session id;
+// its name comes from the environment (`__Host-sw.sid` on https, see config/env.ts).
 import type { Request, RequestHandler, Response } from 'express';
 import session from 'express-session';
 import type { Sequelize } from 'sequelize';
 import type { Env } from '../config/env.js';
-import { MariaDbSessionStore } from './session-store.js';
+import { LeanSessionStore } from './session-store.js';
 
 declare module 'express-session' {
   interface SessionData {
@@ -26,7 +26,7 @@ export const sessionRefreshIntervalMs = 10 * 60 * 1000;
 /** Routes that never read the session, so a request to them does not look it up. */
 const sessionlessPaths = new Set(['/health', '/auth/csrf']);
 
-export type SessionStore = MariaDbSessionStore;
+export type SessionStore = LeanSessionStore;
 
 /**
  * The store. `checkExpirationInterval` 0 disables the background sweep (tests); the server
@@ -36,7 +36,7 @@ export function createSessionStore(
   sequelize: Sequelize,
   checkExpirationIntervalMs: number,
 ): SessionStore {
-  return new MariaDbSessionStore(sequelize, sessionMaxAgeMs, checkExpirationIntervalMs);
+  return new LeanSessionStore(sequelize, sessionMaxAgeMs, checkExpirationIntervalMs);
 }
 
 /** Marks the session changed once per interval, so express-session saves it and re-sends the cookie. */
