@@ -19,7 +19,12 @@ import { cpus } from 'node:os';
 import { join } from 'node:path';
 import { createSequelize, hashPassword, migrateDatabase, selectRows } from '@seamwright/api';
 import { createConnection } from 'mariadb';
-import { measureRoute, sampleResidentMemory, signInOverHttp } from './lib/bench-load.js';
+import {
+  behindTlsProxy,
+  measureRoute,
+  sampleResidentMemory,
+  signInOverHttp,
+} from './lib/bench-load.js';
 import type { RouteResult } from './lib/bench-load.js';
 import { benchPassword, seedBenchCompany } from './lib/bench-seed.js';
 import { instances } from './lib/instances.js';
@@ -104,8 +109,10 @@ const api = startNode(
   {
     NODE_ENV: 'production',
     SESSION_SECRET: 'bench-session-secret-0123456789abcdef',
-    APP_URL: `http://127.0.0.1:${benchApiPort}`,
-    COOKIE_SECURE: 'false',
+    // Production settings as behind a TLS proxy (they refuse COOKIE_SECURE=false): the bench
+    // speaks plain HTTP and says `x-forwarded-proto: https`, as the proxy would.
+    APP_URL: `https://127.0.0.1:${benchApiPort}`,
+    TRUST_PROXY: '1',
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
   },
   cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],
@@ -179,7 +186,10 @@ try {
     if (only.length && !only.includes(route.name)) continue;
     const server = route.url.startsWith(baselineUrl) ? baseline : api;
     const probe = { questions, apiPid: server.pid ?? 0, dbPid };
-    const headers: Record<string, string> = route.cookie ? { cookie: route.cookie } : {};
+    const headers: Record<string, string> = {
+      ...behindTlsProxy,
+      ...(route.cookie ? { cookie: route.cookie } : {}),
+    };
     const result = await measureRoute(route.name, route.url, headers, load, probe);
     say('bench', `${route.name}: ${result.requestsPerSecond.toFixed(0)} req/s`);
     results.push(result);

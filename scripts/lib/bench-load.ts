@@ -33,22 +33,33 @@ function cookieValue(setCookie: string[], name: string): string {
   throw new Error(`no ${name} cookie in the answer`);
 }
 
+/** What the TLS proxy in front of a production API adds to every request. */
+export const behindTlsProxy = { 'x-forwarded-proto': 'https' };
+/** The cookie names of an API whose APP_URL is https (config/env.ts). */
+const sessionCookie = '__Host-sw.sid';
+const csrfCookieName = '__Host-sw.csrf';
+
 /** Signs in through the API as a browser would; returns the Cookie header for later requests. */
 export async function signInOverHttp(
   baseUrl: string,
   email: string,
   password: string,
 ): Promise<string> {
-  const csrf = await fetch(`${baseUrl}/api/auth/csrf`);
-  const csrfCookie = `sw.csrf=${cookieValue(csrf.headers.getSetCookie(), 'sw.csrf')}`;
+  const csrf = await fetch(`${baseUrl}/api/auth/csrf`, { headers: behindTlsProxy });
+  const csrfCookie = `${csrfCookieName}=${cookieValue(csrf.headers.getSetCookie(), csrfCookieName)}`;
   const { data } = (await csrf.json()) as { data: { token: string } };
   const login = await fetch(`${baseUrl}/api/auth/login`, {
     method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: csrfCookie, 'x-csrf-token': data.token },
+    headers: {
+      ...behindTlsProxy,
+      'content-type': 'application/json',
+      cookie: csrfCookie,
+      'x-csrf-token': data.token,
+    },
     body: JSON.stringify({ email, password }),
   });
   if (login.status !== 200) throw new Error(`sign-in as ${email} answered ${login.status}`);
-  return `${csrfCookie}; sw.sid=${cookieValue(login.headers.getSetCookie(), 'sw.sid')}`;
+  return `${csrfCookie}; ${sessionCookie}=${cookieValue(login.headers.getSetCookie(), sessionCookie)}`;
 }
 
 export interface LoadOptions {
