@@ -42,6 +42,9 @@ export const instances = {
     /** The API suite's own maildev, apart from the e2e run's. */
     apiSuiteSmtpPort: 1036 + offset,
     apiSuiteMailWebPort: 1091 + offset,
+    /** `pnpm bench:api`: the API under test and the bare-Express yardsticks beside it. */
+    benchApiPort: 5178 + offset,
+    benchBaselinePort: 5179 + offset,
   },
 } as const;
 

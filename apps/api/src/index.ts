@@ -26,5 +26,6 @@ export type { RouteEntry } from './http/route-table.js';
 export { csrfHeaderName } from './http/csrf.js';
 export { createLogger } from './http/logging.js';
 export { answerMalformedRequests } from './http/malformed-requests.js';
+export { createSessionStore } from './http/session.js';
 export { executeSql, selectRows } from './db/sql.js';
-export { decoyPasswordFor } from './passwords.js';
+export { decoyPasswordFor, hashPassword } from './passwords.js';

@@ -1,4 +1,5 @@
-// Plain SQL for scripts and tests that check the database directly (the app uses models).
+// Plain SQL for scripts and tests that check the database directly (the app uses models, and
+// scopedSql in tenant-scope.ts on measured hot paths).
 // Typed queries only: Sequelize 6's raw-query path trips over the mariadb driver's metadata.
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize';

@@ -10,6 +10,8 @@ import type {
   Order,
   WhereOptions,
 } from 'sequelize';
+import { QueryTypes } from 'sequelize';
+import type { Sequelize } from 'sequelize';
 import type { RequestContext } from '../context.js';
 import type { Tx } from './sequelize.js';
 
@@ -78,6 +80,35 @@ export function scoped<M extends TenantModel>(ctx: RequestContext, model: ModelS
     },
     destroy(where: WhereOptions<Attributes<M>>, tx: Tx): Promise<number> {
       return model.destroy({ where: withCompany(where), transaction: tx });
+    },
+  };
+}
+
+/**
+ * Hand-written SQL for a measured hot path (docs/PERFORMANCE.md), where one statement does what
+ * several model calls would. `:companyId` is bound to the context's company and must restrict
+ * every tenant table the SQL reads or writes; SQL without it is refused. Other values go in as
+ * named replacements (`:name`), never into the text.
+ */
+export function scopedSql(ctx: RequestContext, sequelize: Sequelize) {
+  const bind = (sql: string, replacements: Record<string, unknown>) => {
+    if (!sql.includes(':companyId')) throw new Error('scoped SQL must filter on :companyId');
+    return { ...replacements, companyId: ctx.companyId };
+  };
+  return {
+    select<T extends object>(sql: string, replacements: Record<string, unknown> = {}, tx?: Tx) {
+      return sequelize.query<T>(sql, {
+        replacements: bind(sql, replacements),
+        type: QueryTypes.SELECT,
+        ...(tx ? { transaction: tx } : {}),
+      });
+    },
+    async execute(sql: string, replacements: Record<string, unknown>, tx: Tx): Promise<void> {
+      await sequelize.query(sql, {
+        replacements: bind(sql, replacements),
+        type: QueryTypes.UPDATE,
+        transaction: tx,
+      });
     },
   };
 }

@@ -9,6 +9,7 @@ import {
   unsafeFindFirstMembershipOfUser,
   unsafeFindMembershipOfUser,
 } from '../modules/me/me.repository.js';
+import type { UserMembership } from '../modules/me/me.repository.js';
 import { saveSession } from './session.js';
 
 declare global {
@@ -20,11 +21,26 @@ declare global {
   }
 }
 
+/**
+ * The member's role in the company, as read together with the session on this request (one
+ * statement; see session-store.ts), or read now when the session did not come from the store.
+ */
+async function currentMembership(
+  req: Request,
+  userId: string,
+  companyId: string,
+): Promise<UserMembership | null> {
+  const loaded = req.sessionMembership;
+  if (loaded?.userId === userId && loaded.companyId === companyId)
+    return loaded.role ? { companyId, role: loaded.role } : null;
+  return unsafeFindMembershipOfUser(userId, companyId);
+}
+
 /** Requires a signed-in member of the session's active company; sets `req.ctx`. */
 export const requireTenant: RequestHandler = async (req, _res, next) => {
   const { userId, companyId } = req.session;
   if (!userId) return next(new AppError('UNAUTHENTICATED', 'Sign in to continue'));
-  const membership = companyId ? await unsafeFindMembershipOfUser(userId, companyId) : null;
+  const membership = companyId ? await currentMembership(req, userId, companyId) : null;
   if (!membership) return next(await endCompanyAccess(req, userId));
   req.ctx = { userId, companyId: membership.companyId, role: membership.role };
   next();

@@ -11,6 +11,7 @@ import {
   UserModel,
 } from '../db/models/index.js';
 import { scoped } from '../db/tenant-scope.js';
+import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 
@@ -101,6 +102,7 @@ export async function seedDemoData(
         );
       }
     }
+    await unsafeRecountCustomers(company.id, transaction);
   });
   return { created: true, ...result };
 }

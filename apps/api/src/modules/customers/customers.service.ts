@@ -13,16 +13,21 @@ import { notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import type { CustomerRow } from './customers.repository.js';
 import {
-  countSitesByCustomer,
+  adjustCustomerCounts,
   createCustomer,
   deleteCustomerWithSites,
   findCustomer,
+  findCustomerView,
   listCustomers,
   updateCustomer,
 } from './customers.repository.js';
 
 /** Billing details are blanked for roles that may not read them. */
-function toView(ctx: RequestContext, row: CustomerRow, siteCount: number): CustomerView {
+function toView(
+  ctx: RequestContext,
+  row: Omit<CustomerRow, 'companyId'>,
+  siteCount: number,
+): CustomerView {
   const showBilling = can(ctx.role, 'customers.billing.read');
   return {
     id: row.id,
@@ -44,21 +49,16 @@ export function createCustomersService(sequelize: Sequelize) {
     query: CustomerListQuery,
   ): Promise<ListResponse<CustomerView>> {
     const { rows, total } = await listCustomers(ctx, query);
-    const counts = await countSitesByCustomer(
-      ctx,
-      rows.map((r) => r.id),
-    );
     return {
-      data: rows.map((r) => toView(ctx, r, counts.get(r.id) ?? 0)),
+      data: rows.map((r) => toView(ctx, r, r.siteCount)),
       meta: { page: query.page, pageSize: query.pageSize, total },
     };
   }
 
   async function get(ctx: RequestContext, id: string): Promise<CustomerView> {
-    const row = await findCustomer(ctx, id);
+    const row = await findCustomerView(ctx, id);
     if (!row) throw notFound('Customer');
-    const counts = await countSitesByCustomer(ctx, [id]);
-    return toView(ctx, row, counts.get(id) ?? 0);
+    return toView(ctx, row, row.siteCount);
   }
 
   async function create(ctx: RequestContext, input: CreateCustomerData): Promise<CustomerView> {
@@ -74,6 +74,7 @@ export function createCustomersService(sequelize: Sequelize) {
         },
         tx,
       );
+      await adjustCustomerCounts(ctx, { active: 1, archived: 0 }, tx);
       await recordAuditEvent(
         ctx,
         {
@@ -105,9 +106,11 @@ export function createCustomersService(sequelize: Sequelize) {
       if (archived === true && !current.archivedAt) {
         changes.archivedAt = new Date();
         action = 'customer.archived';
+        await adjustCustomerCounts(ctx, { active: -1, archived: 1 }, tx);
       } else if (archived === false && current.archivedAt) {
         changes.archivedAt = null;
         action = 'customer.restored';
+        await adjustCustomerCounts(ctx, { active: 1, archived: -1 }, tx);
       }
       await updateCustomer(ctx, id, changes, tx);
       await recordAuditEvent(
@@ -124,6 +127,12 @@ export function createCustomersService(sequelize: Sequelize) {
       const current = await findCustomer(ctx, id, tx);
       if (!current) throw notFound('Customer');
       await deleteCustomerWithSites(ctx, id, tx);
+      const wasArchived = current.archivedAt !== null;
+      await adjustCustomerCounts(
+        ctx,
+        { active: wasArchived ? 0 : -1, archived: wasArchived ? -1 : 0 },
+        tx,
+      );
       await recordAuditEvent(
         ctx,
         {

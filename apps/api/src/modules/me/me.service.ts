@@ -1,11 +1,6 @@
 import type { CompanyView, MeView } from '@seamwright/shared';
 import { AppError } from '../../errors.js';
-import {
-  findCompanyById,
-  unsafeFindMembershipOfUser,
-  findUserById,
-  unsafeListCompaniesOfUser,
-} from './me.repository.js';
+import { unsafeFindMembershipOfUser, unsafeFindUserWithCompanies } from './me.repository.js';
 
 export function toCompanyView(company: {
   id: string;
@@ -29,15 +24,13 @@ export function toCompanyView(company: {
 
 /** The signed-in user, their active company and role, and every company they belong to. */
 export async function buildMeView(userId: string, companyId: string): Promise<MeView> {
-  const [user, company, membership, companies] = await Promise.all([
-    findUserById(userId),
-    findCompanyById(companyId),
-    unsafeFindMembershipOfUser(userId, companyId),
-    unsafeListCompaniesOfUser(userId),
-  ]);
-  if (!user || !company || !membership)
-    throw new AppError('UNAUTHENTICATED', 'Sign in to continue');
-  return { user, company: toCompanyView(company), role: membership.role, companies };
+  const found = await unsafeFindUserWithCompanies(userId);
+  const active = found?.memberships.find((m) => m.id === companyId);
+  if (!found || !active) throw new AppError('UNAUTHENTICATED', 'Sign in to continue');
+  const companies = found.memberships
+    .map((m) => ({ companyId: m.id, companyName: m.name, role: m.role }))
+    .sort((a, b) => a.companyName.localeCompare(b.companyName));
+  return { user: found.user, company: toCompanyView(active), role: active.role, companies };
 }
 
 /** Checks that the user belongs to `companyId`; another company is simply not found. */

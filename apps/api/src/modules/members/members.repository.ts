@@ -1,41 +1,47 @@
 import type { Role } from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
-import { MembershipModel, UserModel } from '../../db/models/index.js';
+import { MembershipModel } from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
-import { scoped } from '../../db/tenant-scope.js';
+import { scoped, scopedSql } from '../../db/tenant-scope.js';
 
-/** One page of the company's members, oldest first, with their names; `where` narrows to one. */
+interface MemberPageRow {
+  total: number | bigint;
+  id: string | null;
+  userId: string;
+  role: Role;
+  createdAt: Date;
+  name: string;
+  email: string;
+}
+
+/**
+ * One page of the company's members, oldest first, with their names and e-mails, and the
+ * total, in one statement (the total sits in a one-row table the page is left-joined to, so an
+ * empty page still carries it). `where` narrows to one member.
+ */
 export async function listMembers(
   ctx: RequestContext,
   page: { limit: number; offset: number },
   where: { id?: string } = {},
 ) {
-  const memberships = scoped(ctx, MembershipModel);
-  const [rows, total] = await Promise.all([
-    memberships.findAll({
-      where,
-      order: [
-        ['createdAt', 'ASC'],
-        ['id', 'ASC'],
-      ],
-      limit: page.limit,
-      offset: page.offset,
-    }),
-    memberships.count(where),
-  ]);
-  const users = rows.length
-    ? await UserModel.findAll({
-        where: { id: rows.map((m) => m.userId) },
-        attributes: ['id', 'name', 'email'],
-      })
-    : [];
-  const byId = new Map(users.map((u) => [u.id, u]));
-  const members = rows.map((m) => ({
-    ...m,
-    name: byId.get(m.userId)?.name ?? '',
-    email: byId.get(m.userId)?.email ?? '',
-  }));
-  return { rows: members, total };
+  const byId = where.id === undefined ? '' : 'AND id = :id';
+  const rows = await scopedSql(ctx, MembershipModel.sequelize!).select<MemberPageRow>(
+    `SELECT t.total, p.id, p.userId, p.role, p.createdAt, p.name, p.email
+     FROM (SELECT COUNT(*) AS total FROM memberships WHERE company_id = :companyId ${byId}) t
+     LEFT JOIN (
+       SELECT m.id, m.user_id AS userId, m.role, m.created_at AS createdAt, u.name, u.email
+       FROM memberships m JOIN users u ON u.id = m.user_id
+       WHERE m.company_id = :companyId ${byId.replace('id', 'm.id')}
+       ORDER BY m.created_at, m.id
+       LIMIT :limit OFFSET :offset
+     ) p ON TRUE
+     ORDER BY p.createdAt, p.id`,
+    { ...where, limit: page.limit, offset: page.offset },
+  );
+  const members = rows
+    .filter((row): row is MemberPageRow & { id: string } => row.id !== null)
+    .map(({ total: _total, ...member }) => member);
+  return { rows: members, total: Number(rows[0]?.total ?? 0) };
 }
 
 export function findMember(ctx: RequestContext, id: string, tx: Tx) {
