@@ -3,6 +3,7 @@
 import { initialSchema } from './0001-initial-schema.js';
 import { rateLimitHits } from './0002-rate-limit-hits.js';
 import { tenantCompositeKeys } from './0004-tenant-composite-keys.js';
+import { jobs } from './0007-jobs.js';
 import type { Migration } from './types.js';
 
-export const migrations: Migration[] = [initialSchema, rateLimitHits, tenantCompositeKeys];
+export const migrations: Migration[] = [initialSchema, rateLimitHits, tenantCompositeKeys, jobs];
