@@ -12,17 +12,20 @@ export type { JobStatus } from '@seamwright/domain';
 const uuid = (label: string) =>
   z.uuid({ error: `Choose a ${label}` }).transform((value) => value.toLowerCase());
 
+/** A job's title: what the work is, as people say it. */
+export const jobTitleSchema = requiredText('Title', 200);
+
 export const createJobInputSchema = z.object({
   customerId: uuid('customer'),
   siteId: uuid('site'),
-  title: requiredText('Title', 200),
+  title: jobTitleSchema,
 });
 export type CreateJobInput = z.input<typeof createJobInputSchema>;
 export type CreateJobData = z.output<typeof createJobInputSchema>;
 
 export const updateJobInputSchema = z
   .object({
-    title: requiredText('Title', 200).optional(),
+    title: jobTitleSchema.optional(),
     status: z.enum(jobStatuses, { error: 'Choose a job status' }).optional(),
   })
   .refine((value) => Object.keys(value).length > 0, 'Send at least one field to change');
