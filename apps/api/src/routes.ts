@@ -8,6 +8,7 @@ import { registerCompanyRoutes } from './modules/company/company.routes.js';
 import { registerCustomersRoutes } from './modules/customers/customers.routes.js';
 import { registerHealthRoutes } from './modules/health/health.routes.js';
 import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
+import { registerJobsRoutes } from './modules/jobs/jobs.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
@@ -26,6 +27,7 @@ export function registerApiRoutes(
   registerInvitationsRoutes(routes, deps);
   registerCustomersRoutes(routes, deps);
   registerSitesRoutes(routes, deps);
+  registerJobsRoutes(routes, deps);
   registerAuditRoutes(routes);
   registerPlansRoutes(routes, deps);
 }

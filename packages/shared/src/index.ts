@@ -10,3 +10,4 @@ export * from './customers.js';
 export * from './sites.js';
 export * from './audit.js';
 export * from './system.js';
+export * from './jobs.js';

@@ -22,6 +22,8 @@ export const actions = [
   'customers.billing.read',
   'sites.read',
   'sites.write',
+  'jobs.read',
+  'jobs.write',
   'plans.preview',
   'audit.read',
 ] as const;
@@ -40,6 +42,9 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'customers.billing.read': ['owner', 'office', 'bookkeeper'],
   'sites.read': ['owner', 'office', 'bookkeeper'],
   'sites.write': ['owner', 'office'],
+  // Crew leads will reach their jobs through bookings (calendar work); until then, none.
+  'jobs.read': ['owner', 'office', 'bookkeeper'],
+  'jobs.write': ['owner', 'office'],
   'plans.preview': everyone,
   'audit.read': ['owner'],
 };

@@ -4,7 +4,7 @@ import { demoUsers, seedDemoData, selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 
 describe('demo seed', () => {
-  it('files every membership, customer and site under the demo company, once', async () => {
+  it('files every membership, customer, site and job under the demo company, once', async () => {
     const { sequelize } = testApp();
     const first = await seedDemoData(sequelize, { bcryptCost: 4 });
     expect(first.created).toBe(true);
@@ -23,6 +23,12 @@ describe('demo seed', () => {
     expect(Number(await count('memberships', company?.id))).toBe(demoUsers.length);
     expect(Number(await count('customers', company?.id))).toBeGreaterThan(0);
     expect(Number(await count('sites', company?.id))).toBeGreaterThan(0);
+    const statuses = await selectRows<{ status: string }>(
+      sequelize,
+      'SELECT DISTINCT status FROM jobs WHERE company_id = ?',
+      [company?.id],
+    );
+    expect(statuses.length).toBeGreaterThanOrEqual(5);
 
     expect((await seedDemoData(sequelize, { bcryptCost: 4 })).created).toBe(false);
   });

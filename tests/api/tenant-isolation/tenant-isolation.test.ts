@@ -8,6 +8,7 @@ import type { Client } from '../../fixtures/client.js';
 import {
   addMember,
   createCustomer,
+  createJob,
   createSite,
   signUpCompany,
   testPassword,
@@ -20,6 +21,8 @@ interface World {
   b: SignedIn;
   aCustomerId: string;
   aSiteId: string;
+  aJobId: string;
+  bCustomerId: string;
   aInvitationId: string;
   aOwnerMemberId: string;
   aOfficeMemberId: string;
@@ -224,6 +227,37 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.del(`/api/sites/${w.aSiteId}`)),
   },
+  'get /api/jobs': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/jobs?pageSize=100').expect(200);
+      expect(idsOf(res.body)).not.toContain(w.aJobId);
+      expect(res.body.meta.total).toBe(0);
+      const search = await b.get('/api/jobs?q=Alpha').expect(200);
+      expect(search.body.data).toEqual([]);
+    },
+  },
+  'post /api/jobs': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      // A's customer and site are unknown to B; B's own customer with A's site is refused too.
+      await notFound(
+        b.post('/api/jobs', { customerId: w.aCustomerId, siteId: w.aSiteId, title: 'Hijack' }),
+      );
+      await notFound(
+        b.post('/api/jobs', { customerId: w.bCustomerId, siteId: w.aSiteId, title: 'Hijack' }),
+      );
+    },
+  },
+  'get /api/jobs/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}`)),
+  },
+  'patch /api/jobs/:id': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.patch(`/api/jobs/${w.aJobId}`, { title: 'Hijacked', status: 'lost' })),
+  },
   'post /api/plans/preview': {
     kind: 'tenant',
     run: async (b) => {
@@ -289,6 +323,9 @@ async function snapshotOfA(w: World) {
       'SELECT id, name, archived_at, updated_at FROM customers WHERE company_id = ? ORDER BY id',
     ),
     sites: await q('SELECT id, hazards, updated_at FROM sites WHERE company_id = ? ORDER BY id'),
+    jobs: await q(
+      'SELECT id, title, status, updated_at FROM jobs WHERE company_id = ? ORDER BY id',
+    ),
   };
 }
 
@@ -312,12 +349,15 @@ describe('tenant isolation', () => {
       id: string;
       userId: string;
     }[];
-    await createCustomer(b.client, { name: 'Bravo Customer' });
+    const aJob = await createJob(a.client, aCustomer.id, aSite.id, 'Alpha job');
+    const bCustomer = await createCustomer(b.client, { name: 'Bravo Customer' });
     world = {
       a,
       b,
       aCustomerId: aCustomer.id,
       aSiteId: aSite.id,
+      aJobId: aJob.id,
+      bCustomerId: bCustomer.id,
       aInvitationId: invitation.body.data.id,
       aOwnerMemberId: members.find((m) => m.userId === a.me.user.id)!.id,
       aOfficeMemberId: members.find((m) => m.userId === office.me.user.id)!.id,
@@ -355,6 +395,7 @@ describe('tenant isolation', () => {
     // A still sees its own data.
     await world.a.client.get(`/api/customers/${world.aCustomerId}`).expect(200);
     await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
+    await world.a.client.get(`/api/jobs/${world.aJobId}`).expect(200);
   });
 
   it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {

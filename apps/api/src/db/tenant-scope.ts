@@ -4,7 +4,9 @@
 import type {
   Attributes,
   CreationAttributes,
+  FindAttributeOptions,
   FindOptions,
+  Includeable,
   Model,
   ModelStatic,
   Order,
@@ -25,6 +27,13 @@ export interface ScopedFindOptions<M extends TenantModel> {
   tx?: Tx;
   /** Take a row lock (SELECT … FOR UPDATE) inside `tx`. */
   lock?: boolean;
+  /**
+   * Parent rows to join, only through a `(company_id, …)` foreign key (jobs → customers, sites),
+   * which already keeps the parent in the row's own company. The joined rows come back nested.
+   */
+  include?: Includeable[];
+  /** Columns to read (default: all), e.g. to add a computed one. */
+  attributes?: FindAttributeOptions;
 }
 
 export function scoped<M extends TenantModel>(ctx: RequestContext, model: ModelStatic<M>) {
@@ -39,6 +48,8 @@ export function scoped<M extends TenantModel>(ctx: RequestContext, model: ModelS
     ...(options.order ? { order: options.order } : {}),
     ...(options.limit !== undefined ? { limit: options.limit } : {}),
     ...(options.offset !== undefined ? { offset: options.offset } : {}),
+    ...(options.include ? { include: options.include } : {}),
+    ...(options.attributes ? { attributes: options.attributes } : {}),
     ...(options.tx
       ? { transaction: options.tx, ...(options.lock ? { lock: options.tx.LOCK.UPDATE } : {}) }
       : {}),
@@ -56,8 +67,16 @@ export function scoped<M extends TenantModel>(ctx: RequestContext, model: ModelS
       const rows = await model.findAll(findOptions(options));
       return rows.map((row) => row.get({ plain: true }) as Attributes<M>);
     },
-    count(where: WhereOptions<Attributes<M>> = {}, tx?: Tx): Promise<number> {
-      return model.count({ where: withCompany(where), ...(tx ? { transaction: tx } : {}) });
+    count(
+      where: WhereOptions<Attributes<M>> = {},
+      tx?: Tx,
+      include?: Includeable[],
+    ): Promise<number> {
+      return model.count({
+        where: withCompany(where),
+        ...(tx ? { transaction: tx } : {}),
+        ...(include ? { include, distinct: true, col: 'id' } : {}),
+      });
     },
     async create(values: Omit<CreationAttributes<M>, 'companyId'>, tx: Tx): Promise<Attributes<M>> {
       const row = await model.create(

@@ -6,6 +6,7 @@ import type { RequestContext } from '../context.js';
 import {
   CompanyModel,
   CustomerModel,
+  JobModel,
   MembershipModel,
   SiteModel,
   UserModel,
@@ -14,6 +15,7 @@ import { scoped } from '../db/tenant-scope.js';
 import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
+import { demoJobs } from './demo-jobs.js';
 
 /** Demo sign-in password for every demo user (local data only). */
 export const demoPassword = 'turf-demo-2026';
@@ -74,6 +76,8 @@ export async function seedDemoData(
     }
     const [owner] = contexts;
     if (!owner) throw new Error('The demo needs at least one user.');
+    // Each demo customer's id and site ids by name, for the demo jobs.
+    const made = new Map<string, { customerId: string; siteIds: string[] }>();
     for (const demo of demoCustomers) {
       const customer = await scoped(owner, CustomerModel).create(
         {
@@ -88,8 +92,10 @@ export async function seedDemoData(
         },
         transaction,
       );
+      const ids: string[] = [];
+      made.set(demo.name, { customerId: customer.id, siteIds: ids });
       for (const site of demo.sites) {
-        await scoped(owner, SiteModel).create(
+        const created = await scoped(owner, SiteModel).create(
           {
             ...site,
             customerId: customer.id,
@@ -100,7 +106,17 @@ export async function seedDemoData(
           },
           transaction,
         );
+        ids.push(created.id);
       }
+    }
+    for (const job of demoJobs) {
+      const parent = made.get(job.customer);
+      const siteId = parent?.siteIds[job.site];
+      if (!parent || !siteId) throw new Error(`Demo job "${job.title}" has no site.`);
+      await scoped(owner, JobModel).create(
+        { customerId: parent.customerId, siteId, title: job.title, status: job.status },
+        transaction,
+      );
     }
     await unsafeRecountCustomers(company.id, transaction);
   });

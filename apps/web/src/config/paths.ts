@@ -11,6 +11,11 @@ export const paths = {
   customers: '/customers',
   newCustomer: '/customers/new',
   customer: (id: string) => `/customers/${encodeURIComponent(id)}`,
+  jobs: '/jobs',
+  /** With a customer, the form starts on that customer (from their page). */
+  newJob: (customerId?: string) =>
+    customerId ? `/jobs/new?customerId=${encodeURIComponent(customerId)}` : '/jobs/new',
+  job: (id: string) => `/jobs/${encodeURIComponent(id)}`,
   layout: '/layout',
   settings: '/settings',
   profile: '/profile',

@@ -4,6 +4,7 @@ import { initialSchema } from './0001-initial-schema.js';
 import { rateLimitHits } from './0002-rate-limit-hits.js';
 import { tenantCompositeKeys } from './0004-tenant-composite-keys.js';
 import { customerList } from './0006-customer-list.js';
+import { jobs } from './0007-jobs.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -11,4 +12,5 @@ export const migrations: Migration[] = [
   rateLimitHits,
   tenantCompositeKeys,
   customerList,
+  jobs,
 ];

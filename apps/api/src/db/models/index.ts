@@ -3,6 +3,7 @@ import type { Model, ModelStatic, Sequelize } from 'sequelize';
 import { AuditEventModel } from './audit-event.model.js';
 import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
+import { JobModel } from './job.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
 import { PasswordResetModel } from './password-reset.model.js';
@@ -18,6 +19,7 @@ export {
   CompanyModel,
   CustomerModel,
   InvitationModel,
+  JobModel,
   MembershipModel,
   PasswordResetModel,
   SessionModel,
@@ -33,6 +35,7 @@ const allModels = [
   PasswordResetModel,
   CustomerModel,
   SiteModel,
+  JobModel,
   AuditEventModel,
   SessionModel,
 ] as const;
@@ -51,5 +54,20 @@ export const tenantModels: readonly ModelStatic<Model>[] = allModels.filter((mod
 
 export function initModels(sequelize: Sequelize): void {
   for (const model of allModels) model.initModel(sequelize);
+  associateModels();
   guardTenantModels(tenantModels);
+}
+
+/**
+ * Joins used by finds with `include` (the keys themselves live in the migrations, so
+ * `constraints: false`). A job's customer and site share its company by the 0007 foreign keys.
+ */
+function associateModels(): void {
+  JobModel.belongsTo(CustomerModel, {
+    as: 'customer',
+    foreignKey: 'customerId',
+    constraints: false,
+  });
+  JobModel.belongsTo(SiteModel, { as: 'site', foreignKey: 'siteId', constraints: false });
+  AuditEventModel.belongsTo(UserModel, { as: 'user', foreignKey: 'userId', constraints: false });
 }

@@ -11,6 +11,7 @@ import type { RequestContext } from '../../context.js';
 import { inTransaction } from '../../db/sequelize.js';
 import { notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
+import { refuseWhenJobsRemain } from '../jobs/jobs-remain.js';
 import type { CustomerRow } from './customers.repository.js';
 import {
   adjustCustomerCounts,
@@ -123,27 +124,30 @@ export function createCustomersService(sequelize: Sequelize) {
   }
 
   async function remove(ctx: RequestContext, id: string): Promise<void> {
-    await inTransaction(sequelize, async (tx) => {
-      const current = await findCustomer(ctx, id, tx);
-      if (!current) throw notFound('Customer');
-      await deleteCustomerWithSites(ctx, id, tx);
-      const wasArchived = current.archivedAt !== null;
-      await adjustCustomerCounts(
-        ctx,
-        { active: wasArchived ? 0 : -1, archived: wasArchived ? -1 : 0 },
-        tx,
-      );
-      await recordAuditEvent(
-        ctx,
-        {
-          action: 'customer.deleted',
-          entity: 'customer',
-          entityId: id,
-          data: { name: current.name },
-        },
-        tx,
-      );
-    });
+    await refuseWhenJobsRemain(
+      'This customer has jobs, so they cannot be deleted; archive them instead',
+      inTransaction(sequelize, async (tx) => {
+        const current = await findCustomer(ctx, id, tx);
+        if (!current) throw notFound('Customer');
+        await deleteCustomerWithSites(ctx, id, tx);
+        const wasArchived = current.archivedAt !== null;
+        await adjustCustomerCounts(
+          ctx,
+          { active: wasArchived ? 0 : -1, archived: wasArchived ? -1 : 0 },
+          tx,
+        );
+        await recordAuditEvent(
+          ctx,
+          {
+            action: 'customer.deleted',
+            entity: 'customer',
+            entityId: id,
+            data: { name: current.name },
+          },
+          tx,
+        );
+      }),
+    );
   }
 
   return { list, get, create, update, remove };

@@ -4,6 +4,7 @@ import type { RequestContext } from '../../context.js';
 import { inTransaction } from '../../db/sequelize.js';
 import { notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
+import { refuseWhenJobsRemain } from '../jobs/jobs-remain.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import type { SiteRow, SiteValues } from './sites.repository.js';
 import {
@@ -108,21 +109,24 @@ export function createSitesService(sequelize: Sequelize) {
   }
 
   async function remove(ctx: RequestContext, id: string): Promise<void> {
-    await inTransaction(sequelize, async (tx) => {
-      const site = await findSite(ctx, id, tx);
-      if (!site) throw notFound('Site');
-      await deleteSite(ctx, id, tx);
-      await recordAuditEvent(
-        ctx,
-        {
-          action: 'site.deleted',
-          entity: 'site',
-          entityId: id,
-          data: { customerId: site.customerId },
-        },
-        tx,
-      );
-    });
+    await refuseWhenJobsRemain(
+      'This site has jobs, so it cannot be deleted',
+      inTransaction(sequelize, async (tx) => {
+        const site = await findSite(ctx, id, tx);
+        if (!site) throw notFound('Site');
+        await deleteSite(ctx, id, tx);
+        await recordAuditEvent(
+          ctx,
+          {
+            action: 'site.deleted',
+            entity: 'site',
+            entityId: id,
+            data: { customerId: site.customerId },
+          },
+          tx,
+        );
+      }),
+    );
   }
 
   return { listForCustomer, get, create, update, remove };

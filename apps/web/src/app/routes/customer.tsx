@@ -1,4 +1,5 @@
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { buttonClasses } from '../../components/ui/button';
 import { NotAvailable } from '../../components/ui/not-available';
 import { PageHeader } from '../../components/ui/page-header';
 import { RegionErrorBoundary } from '../../components/ui/region-error';
@@ -27,6 +28,7 @@ function CustomerPage({ customerId }: { customerId: string }) {
   const customer = useCustomer(customerId);
   const navigate = useNavigate();
   const canWriteSites = useCan('sites.write');
+  const canStartJob = useCan('jobs.write');
   return (
     <>
       <p className="mb-2 print:hidden">
@@ -35,6 +37,13 @@ function CustomerPage({ customerId }: { customerId: string }) {
       <PageHeader
         title={customer.name}
         subtitle={customer.archivedAt ? 'Archived customer' : undefined}
+        actions={
+          canStartJob && customer.siteCount > 0 ? (
+            <Link to={paths.newJob(customerId)} className={buttonClasses('primary')}>
+              New job
+            </Link>
+          ) : null
+        }
       />
       <CustomerDetails
         customerId={customerId}

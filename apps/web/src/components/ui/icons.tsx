@@ -28,6 +28,16 @@ export function CustomersIcon({ className = 'h-6 w-6' }: { className?: string })
   );
 }
 
+/** A clipboard: a job and its paperwork. */
+export function JobsIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <rect x="5" y="4" width="14" height="17" rx="2" />
+      <path d="M9 4V3h6v1M9 10h6M9 14h6M9 18h3" />
+    </svg>
+  );
+}
+
 export function SettingsIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
     <svg {...base} className={className}>

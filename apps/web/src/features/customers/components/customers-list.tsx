@@ -19,7 +19,7 @@ import {
   type CustomerListParams,
 } from '../utils/list-params';
 import { customerColumns } from './customer-columns';
-import { SearchBox } from './search-box';
+import { SearchBox } from '../../../components/ui/search-box';
 
 const statusLabels: Record<(typeof customerStatuses)[number], string> = {
   active: 'Active',

@@ -14,12 +14,14 @@ describe('sections', () => {
   it('keeps customers out of the crew lead’s rail and bar', () => {
     expect(labels(sectionsFor('crew_lead'))).toEqual(['Today', 'Layout', 'Settings']);
     expect(phoneSectionsFor('crew_lead').some((s) => s.to === paths.customers)).toBe(false);
+    expect(sectionsFor('crew_lead').some((s) => s.to === paths.jobs)).toBe(false);
   });
 
   it('gives the office every section on the phone under its own name', () => {
     expect(labels(phoneSectionsFor('office'))).toEqual([
       'Today',
       'Customers',
+      'Jobs',
       'Layout',
       'Settings',
     ]);

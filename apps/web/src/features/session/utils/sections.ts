@@ -1,6 +1,12 @@
 import type { ComponentType } from 'react';
 import { can, type Action, type Role } from '@seamwright/shared';
-import { CustomersIcon, ProfileIcon, SettingsIcon, TodayIcon } from '../../../components/ui/icons';
+import {
+  CustomersIcon,
+  JobsIcon,
+  ProfileIcon,
+  SettingsIcon,
+  TodayIcon,
+} from '../../../components/ui/icons';
 import { LayoutIcon } from '../../../components/ui/layout-icon';
 import { paths } from '../../../config/paths';
 
@@ -18,7 +24,7 @@ export interface Section {
   phoneNames?: Partial<Record<Role, { label: string; Icon: Icon }>>;
 }
 
-/** Only sections that exist are listed; later work adds Jobs, Calendar, Inventory, Invoices, Reports. */
+/** Only sections that exist are listed; later work adds Calendar, Inventory, Invoices, Reports. */
 const sections: Section[] = [
   {
     to: paths.today,
@@ -31,6 +37,14 @@ const sections: Section[] = [
     label: 'Customers',
     Icon: CustomersIcon,
     needs: 'customers.read',
+    phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
+  // Crew leads reach their jobs through bookings once the calendar lands (jobs.read excludes them).
+  {
+    to: paths.jobs,
+    label: 'Jobs',
+    Icon: JobsIcon,
+    needs: 'jobs.read',
     phoneRoles: ['owner', 'office', 'bookkeeper'],
   },
   // Shows no prices, so every role sees it; crew leads check cuts and seams with it on site.

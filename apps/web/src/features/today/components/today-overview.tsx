@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { can, type Role } from '@seamwright/shared';
 import { CautionPanel } from '../../../components/ui/caution-panel';
@@ -51,7 +52,7 @@ function officeSteps(role: Role) {
 }
 
 /** The first page after sign-in: who, where, and what to do next for this role. */
-export function TodayOverview() {
+export function TodayOverview({ nextJobs }: { nextJobs?: ReactNode }) {
   const { user, company, role } = useSession();
   const firstName = user.name.split(' ')[0] ?? user.name;
   useDocumentTitle('Today');
@@ -76,7 +77,7 @@ export function TodayOverview() {
       {role === 'crew_lead' ? (
         <>
           <EmptyState title="No jobs assigned to your crew yet">
-            When the office books your crew on a job, it shows here with the address, gate notes and
+            Booked jobs appear here once the crew calendar lands, with the address, gate notes and
             the day's checklist. Nothing to do until then.
           </EmptyState>
           <CautionPanel title="Before anyone digs: get the lines marked">
@@ -89,16 +90,19 @@ export function TodayOverview() {
           </CautionPanel>
         </>
       ) : (
-        <section aria-labelledby="next-steps">
-          <h2 id="next-steps" className="mb-3 text-xl font-bold">
-            Next steps
-          </h2>
-          <ul className="grid gap-3 sm:grid-cols-2">{officeSteps(role)}</ul>
-          <p className="mt-4 text-ink-muted">
-            Jobs, the crew calendar and invoices arrive in Seamwright soon. Meanwhile,{' '}
-            <Link to={paths.settings}>Settings</Link> shows your profile and role.
-          </p>
-        </section>
+        <>
+          {nextJobs}
+          <section aria-labelledby="next-steps">
+            <h2 id="next-steps" className="mb-3 text-xl font-bold">
+              Next steps
+            </h2>
+            <ul className="grid gap-3 sm:grid-cols-2">{officeSteps(role)}</ul>
+            <p className="mt-4 text-ink-muted">
+              The crew calendar and invoices arrive in Seamwright soon. Meanwhile,{' '}
+              <Link to={paths.settings}>Settings</Link> shows your profile and role.
+            </p>
+          </section>
+        </>
       )}
     </div>
   );

@@ -5,10 +5,17 @@ interface SearchBoxProps {
   onSearch: (value: string) => void;
   label: string;
   delayMs?: number;
+  placeholder?: string;
 }
 
 /** A search field that reports what was typed once the typing pauses. */
-export function SearchBox({ value, onSearch, label, delayMs = 300 }: SearchBoxProps) {
+export function SearchBox({
+  value,
+  onSearch,
+  label,
+  delayMs = 300,
+  placeholder = 'Name, e-mail or phone',
+}: SearchBoxProps) {
   const id = useId();
   const [text, setText] = useState(value);
   const [lastValue, setLastValue] = useState(value);
@@ -36,7 +43,7 @@ export function SearchBox({ value, onSearch, label, delayMs = 300 }: SearchBoxPr
         type="search"
         value={text}
         onChange={(event) => setText(event.target.value)}
-        placeholder="Name, e-mail or phone"
+        placeholder={placeholder}
         className="min-h-11 rounded-md border border-line-strong bg-white px-3 py-2"
       />
     </div>

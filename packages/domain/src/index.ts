@@ -1,0 +1,2 @@
+// @seamwright/domain: pure business rules (no I/O, no clock, no environment).
+export * from './job-lifecycle.js';
