@@ -34,11 +34,18 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   '/api/invitations': { budget: 2, urls: () => ['/api/invitations'] },
   // Count, page, then the names of the people on the page (not tuned yet; see DEVELOPERS.md).
   '/api/audit-events': { budget: 4, urls: () => ['/api/audit-events'] },
+  '/api/jobs': {
+    budget: 2,
+    urls: () => ['/api/jobs', '/api/jobs?status=lead&q=fern&sort=-createdAt'],
+  },
+  // The job with its customer and site in one join, then its activity (audit events).
+  '/api/jobs/:id': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}`] },
 };
 
 interface Ids {
   customerId: string;
   siteId: string;
+  jobId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -53,7 +60,14 @@ describe('statement budget of signed-in requests', () => {
     const customer = await createCustomer(owner, { name: 'Fern Marlgrove' });
     const site = await createSite(owner, customer.id);
     await createCustomer(owner);
-    ids = { customerId: customer.id, siteId: site.id };
+    const job = await owner
+      .post('/api/jobs', { customerId: customer.id, siteId: site.id, title: 'Front lawn' })
+      .expect(201);
+    ids = {
+      customerId: customer.id,
+      siteId: site.id,
+      jobId: (job.body as { data: { id: string } }).data.id,
+    };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -64,7 +78,11 @@ describe('statement budget of signed-in requests', () => {
     expect(reads.filter((path) => !(path in budgets))).toEqual([]);
     // Only routes listed with a reason in DEVELOPERS.md go above the default.
     const above = Object.entries(budgets).filter(([, b]) => b.budget > defaultReadBudget);
-    expect(above.map(([path]) => path)).toEqual(['/api/customers/:id/sites', '/api/audit-events']);
+    expect(above.map(([path]) => path)).toEqual([
+      '/api/customers/:id/sites',
+      '/api/audit-events',
+      '/api/jobs/:id',
+    ]);
   });
 
   it.each(Object.entries(budgets))(
