@@ -10,3 +10,5 @@ export * from './customers.js';
 export * from './sites.js';
 export * from './audit.js';
 export * from './system.js';
+export * from './price-book.js';
+export * from './estimating-settings.js';

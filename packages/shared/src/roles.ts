@@ -24,6 +24,9 @@ export const actions = [
   'sites.write',
   'plans.preview',
   'audit.read',
+  'pricebook.read',
+  'pricebook.write',
+  'estimating.manage',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -42,6 +45,10 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'sites.write': ['owner', 'office'],
   'plans.preview': everyone,
   'audit.read': ['owner'],
+  // Prices, markup and tax are money: crew leads never see them; bookkeepers read only.
+  'pricebook.read': ['owner', 'office', 'bookkeeper'],
+  'pricebook.write': ['owner', 'office'],
+  'estimating.manage': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

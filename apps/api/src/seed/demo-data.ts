@@ -11,6 +11,7 @@ import {
   UserModel,
 } from '../db/models/index.js';
 import { scoped } from '../db/tenant-scope.js';
+import { createStarterEstimating } from '../modules/price-book/starter-price-book.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 
@@ -101,6 +102,8 @@ export async function seedDemoData(
         );
       }
     }
+    // The same invented starter price book a new company gets at sign-up.
+    await createStarterEstimating(owner, transaction);
   });
   return { created: true, ...result };
 }

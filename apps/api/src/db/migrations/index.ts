@@ -3,6 +3,12 @@
 import { initialSchema } from './0001-initial-schema.js';
 import { rateLimitHits } from './0002-rate-limit-hits.js';
 import { tenantCompositeKeys } from './0004-tenant-composite-keys.js';
+import { priceBook } from './0008-price-book.js';
 import type { Migration } from './types.js';
 
-export const migrations: Migration[] = [initialSchema, rateLimitHits, tenantCompositeKeys];
+export const migrations: Migration[] = [
+  initialSchema,
+  rateLimitHits,
+  tenantCompositeKeys,
+  priceBook,
+];

@@ -3,9 +3,11 @@ import type { Model, ModelStatic, Sequelize } from 'sequelize';
 import { AuditEventModel } from './audit-event.model.js';
 import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
+import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
 import { PasswordResetModel } from './password-reset.model.js';
+import { PriceBookItemModel } from './price-book-item.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { UserModel } from './user.model.js';
@@ -17,9 +19,11 @@ export {
   AuditEventModel,
   CompanyModel,
   CustomerModel,
+  EstimatingSettingsModel,
   InvitationModel,
   MembershipModel,
   PasswordResetModel,
+  PriceBookItemModel,
   SessionModel,
   SiteModel,
   UserModel,
@@ -35,6 +39,8 @@ const allModels = [
   SiteModel,
   AuditEventModel,
   SessionModel,
+  PriceBookItemModel,
+  EstimatingSettingsModel,
 ] as const;
 
 /**
