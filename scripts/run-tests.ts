@@ -89,7 +89,9 @@ await step('e2e', 'end-to-end tests (Chromium)', async () => {
   if (!buildWebIfChanged()) return false;
   const e2eDb = { ...settings.db, database: e2eDatabase };
   recreateDatabase(db, e2eDb);
-  const env = apiEnv('test', { database: e2eDatabase });
+  // Every journey signs up its own companies from 127.0.0.1; more specs than the production
+  // per-IP sign-up limit (10 per window) would otherwise refuse the later ones.
+  const env = { ...apiEnv('test', { database: e2eDatabase }), RATE_LIMIT_SIGNUP_PER_IP: '1000' };
   if (runStep('pnpm', ['exec', 'tsx', 'scripts/migrate-db.ts', 'test'], env) !== 0) return false;
   const mail = await startMailSink('test-e2e', settings.smtpPort, settings.mailWebPort);
   const processor = await startFakeProcessor(settings.processorPort);
