@@ -58,12 +58,12 @@ test('an owner edits a turf price, exports the price book and sees a bad import 
   await expect(preview.getByText(/Enter a price like 2\.35/)).toBeVisible();
   await expect(book.getByText(/nothing was imported/)).toBeVisible();
   await expectAccessible(page, 'Price book import preview (owner)');
-  await page.screenshot({ path: '.tmp/screens/price-book-desktop.png', fullPage: false });
+  await page.screenshot({ path: '../.tmp/screens/price-book-desktop.png', fullPage: false });
 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto('/settings#estimating');
   await expect(page.getByRole('heading', { name: 'Estimating' })).toBeVisible();
-  await page.screenshot({ path: '.tmp/screens/estimating-phone.png' });
+  await page.screenshot({ path: '../.tmp/screens/estimating-phone.png' });
   await page.goto('/settings#price-book');
   await expect(
     page
@@ -71,10 +71,10 @@ test('an owner edits a turf price, exports the price book and sees a bad import 
       .getByRole('cell', { name: /^Crushed base stone/ })
       .first(),
   ).toBeVisible();
-  await page.screenshot({ path: '.tmp/screens/price-book-phone.png' });
+  await page.screenshot({ path: '../.tmp/screens/price-book-phone.png' });
   await page.setViewportSize({ width: 1280, height: 800 });
   await page.goto('/settings#estimating');
   await expect(page.getByRole('heading', { name: 'Estimating' })).toBeVisible();
-  await page.screenshot({ path: '.tmp/screens/estimating-desktop.png' });
+  await page.screenshot({ path: '../.tmp/screens/estimating-desktop.png' });
   await context.close();
 });

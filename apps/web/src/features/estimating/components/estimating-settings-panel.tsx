@@ -34,12 +34,12 @@ function SettingRow({ field, canManage }: { field: TakeoffSettingView; canManage
   }
 
   return (
-    <tr className="border-t border-line align-top">
-      <th scope="row" className="px-3 py-2 text-left font-normal">
+    <li className="grid gap-2 border-t border-line px-3 py-2 sm:grid-cols-[14rem_auto_1fr] sm:gap-4">
+      <div>
         <label htmlFor={inputId}>{label}</label>
         {field.isOverridden ? <span className="ml-1 text-sm font-semibold">(changed)</span> : null}
-      </th>
-      <td className="px-3 py-2">
+      </div>
+      <div>
         {isEditable ? (
           <form
             className="flex gap-2"
@@ -69,8 +69,8 @@ function SettingRow({ field, canManage }: { field: TakeoffSettingView; canManage
             {error}
           </p>
         ) : null}
-      </td>
-      <td className="px-3 py-2">
+      </div>
+      <div>
         <span className="block">Standard: {settingText(field.standard)}</span>
         <span className="block text-sm text-ink-muted">{field.source}</span>
         {canManage && field.isOverridden ? (
@@ -78,8 +78,8 @@ function SettingRow({ field, canManage }: { field: TakeoffSettingView; canManage
             Reset to standard<span className="sr-only"> for {label}</span>
           </Button>
         ) : null}
-      </td>
-    </tr>
+      </div>
+    </li>
   );
 }
 
@@ -95,24 +95,13 @@ export function EstimatingSettingsPanel({ canManage }: { canManage: boolean }) {
     <div className="flex flex-col gap-6">
       <RatesForm settings={settings} canManage={canManage} />
       {[...sections].map(([section, fields]) => (
-        <div key={section} className="overflow-x-auto rounded-lg border border-line bg-white">
-          <table className="w-full border-collapse text-left">
-            <caption className="bg-sand-100 px-3 py-2 text-left font-semibold">
-              {sectionTitle(section)}
-            </caption>
-            <thead className="sr-only">
-              <tr>
-                <th scope="col">Setting</th>
-                <th scope="col">Value</th>
-                <th scope="col">Standard and source</th>
-              </tr>
-            </thead>
-            <tbody>
-              {fields.map((field) => (
-                <SettingRow key={field.path} field={field} canManage={canManage} />
-              ))}
-            </tbody>
-          </table>
+        <div key={section} className="rounded-lg border border-line bg-white">
+          <h3 className="bg-sand-100 px-3 py-2 font-semibold">{sectionTitle(section)}</h3>
+          <ul>
+            {fields.map((field) => (
+              <SettingRow key={field.path} field={field} canManage={canManage} />
+            ))}
+          </ul>
         </div>
       ))}
     </div>

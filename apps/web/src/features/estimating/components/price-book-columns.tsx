@@ -19,7 +19,7 @@ export function priceBookColumns(options: {
         <span>
           {info.getValue()}
           {info.row.original.isStarter ? (
-            <span className="ml-2 rounded bg-sand-100 px-1.5 py-0.5 text-xs text-sand-700">
+            <span className="mt-1 block w-fit rounded bg-sand-100 px-1.5 py-0.5 text-xs text-sand-700">
               starter price — replace with yours
             </span>
           ) : null}
@@ -52,7 +52,7 @@ export function priceBookColumns(options: {
       id: 'actions',
       header: 'Actions',
       cell: (info) => (
-        <span className="flex gap-1">
+        <span className="flex flex-col gap-1 sm:flex-row">
           <Button variant="quiet" onClick={() => options.onEdit(info.row.original)}>
             Edit<span className="sr-only"> {info.row.original.name}</span>
           </Button>

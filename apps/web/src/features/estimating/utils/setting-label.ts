@@ -5,7 +5,8 @@ export function settingLabel(path: string): { section: string; label: string } {
   const words = leaf
     .replace(/([a-z])([A-Z])/g, '$1 $2')
     .toLowerCase()
-    .replace(/\b(in|ft|lb|oz|gal|tons|cu yd|sq ft|sq yd)$/, '($1)')
+    // Trailing units (`… lb per cu yd`, `… in`) go in brackets: "Spoil loose density (lb per cu yd)".
+    .replace(/ (sq ft|cu yd|sq yd|in|ft|lb|oz|gal|tons|lf)( per [a-z ]+)?$/, ' ($1$2)')
     .replace(/ percent$/, ' (%)');
   return { section: parts[0] ?? path, label: words.charAt(0).toUpperCase() + words.slice(1) };
 }
