@@ -6,12 +6,14 @@ import { registerAuditRoutes } from './modules/audit/audit.routes.js';
 import { registerAuthRoutes } from './modules/auth/auth.routes.js';
 import { registerCompanyRoutes } from './modules/company/company.routes.js';
 import { registerCustomersRoutes } from './modules/customers/customers.routes.js';
+import { registerEstimatingSettingsRoutes } from './modules/estimating-settings/estimating-settings.routes.js';
 import { registerHealthRoutes } from './modules/health/health.routes.js';
 import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
 import { registerJobsRoutes } from './modules/jobs/jobs.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
+import { registerPriceBookRoutes } from './modules/price-book/price-book.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
 
 export function registerApiRoutes(
@@ -30,4 +32,6 @@ export function registerApiRoutes(
   registerJobsRoutes(routes, deps);
   registerAuditRoutes(routes);
   registerPlansRoutes(routes, deps);
+  registerPriceBookRoutes(routes, deps);
+  registerEstimatingSettingsRoutes(routes, deps);
 }

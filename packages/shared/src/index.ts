@@ -11,3 +11,5 @@ export * from './sites.js';
 export * from './audit.js';
 export * from './system.js';
 export * from './jobs.js';
+export * from './price-book.js';
+export * from './estimating-settings.js';

@@ -26,6 +26,9 @@ export const actions = [
   'jobs.write',
   'plans.preview',
   'audit.read',
+  'pricebook.read',
+  'pricebook.write',
+  'estimating.manage',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -47,6 +50,10 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'jobs.write': ['owner', 'office'],
   'plans.preview': everyone,
   'audit.read': ['owner'],
+  // Prices, markup and tax are money: crew leads never see them; bookkeepers read only.
+  'pricebook.read': ['owner', 'office', 'bookkeeper'],
+  'pricebook.write': ['owner', 'office'],
+  'estimating.manage': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

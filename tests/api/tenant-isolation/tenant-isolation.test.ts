@@ -26,6 +26,7 @@ interface World {
   aInvitationId: string;
   aOwnerMemberId: string;
   aOfficeMemberId: string;
+  aPriceItemId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -37,6 +38,15 @@ const notFound = async (pending: PromiseLike<{ status: number; body: { code?: st
   const res = await pending;
   expect(res.status).toBe(404);
   expect(res.body.code).toBe('NOT_FOUND');
+};
+
+const alphaPriceItem = {
+  kind: 'material',
+  key: 'alpha-only',
+  name: 'Alpha only material',
+  unit: 'bag',
+  packSize: 50,
+  priceMillicents: 123_450,
 };
 
 const idsOf = (body: unknown) => (body as { data: { id: string }[] }).data.map((row) => row.id);
@@ -307,6 +317,61 @@ const probes: Record<string, Probe> = {
       expect(JSON.stringify(res.body)).not.toContain(w.a.me.company.id);
     },
   },
+  'get /api/price-book': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/price-book?pageSize=100').expect(200);
+      expect(idsOf(res.body)).not.toContain(w.aPriceItemId);
+      const search = await b.get('/api/price-book?q=alpha-only').expect(200);
+      expect(search.body.data).toEqual([]);
+    },
+  },
+  'post /api/price-book': {
+    kind: 'tenant',
+    run: async (b) => {
+      // Keys are per company: B may use the key A already has.
+      await b.post('/api/price-book', { ...alphaPriceItem, name: 'Bravo copy' }).expect(201);
+    },
+  },
+  'get /api/price-book/export.csv': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/price-book/export.csv').expect(200);
+      expect(res.text).not.toContain('Alpha only material');
+    },
+  },
+  'post /api/price-book/import': {
+    kind: 'tenant',
+    run: async (b) => {
+      // A row with A's key never updates A's item: B's import only sees B's book.
+      const csv = 'kind,key,name,unit,price\nmaterial,alpha-only-2,Bravo import,bag,1.00';
+      const res = await b.post('/api/price-book/import', { csv, dryRun: false }).expect(200);
+      expect(res.body.data.rows[0].action).toBe('create');
+    },
+  },
+  'patch /api/price-book/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/price-book/${w.aPriceItemId}`, { priceMillicents: 1 })),
+  },
+  'delete /api/price-book/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/price-book/${w.aPriceItemId}`)),
+  },
+  'get /api/estimating-settings': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/estimating-settings').expect(200);
+      expect(res.body.data.markupBasisPoints).toBe(0);
+    },
+  },
+  'patch /api/estimating-settings': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      await b.patch('/api/estimating-settings', { markupBasisPoints: 999 }).expect(200);
+      const a = await w.a.client.get('/api/estimating-settings').expect(200);
+      expect(a.body.data.markupBasisPoints).toBe(1234);
+    },
+  },
 };
 
 async function snapshotOfA(w: World) {
@@ -325,6 +390,12 @@ async function snapshotOfA(w: World) {
     sites: await q('SELECT id, hazards, updated_at FROM sites WHERE company_id = ? ORDER BY id'),
     jobs: await q(
       'SELECT id, title, status, updated_at FROM jobs WHERE company_id = ? ORDER BY id',
+    ),
+    priceBook: await q(
+      'SELECT id, item_key, price_millicents, updated_at FROM price_book_items WHERE company_id = ? ORDER BY id',
+    ),
+    estimating: await q(
+      'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
   };
 }
@@ -351,6 +422,8 @@ describe('tenant isolation', () => {
     }[];
     const aJob = await createJob(a.client, aCustomer.id, aSite.id, 'Alpha job');
     const bCustomer = await createCustomer(b.client, { name: 'Bravo Customer' });
+    const aPriceItem = await a.client.post('/api/price-book', alphaPriceItem).expect(201);
+    await a.client.patch('/api/estimating-settings', { markupBasisPoints: 1234 }).expect(200);
     world = {
       a,
       b,
@@ -361,6 +434,7 @@ describe('tenant isolation', () => {
       aInvitationId: invitation.body.data.id,
       aOwnerMemberId: members.find((m) => m.userId === a.me.user.id)!.id,
       aOfficeMemberId: members.find((m) => m.userId === office.me.user.id)!.id,
+      aPriceItemId: aPriceItem.body.data.id,
     };
   });
 

@@ -13,6 +13,7 @@ import {
 } from '../db/models/index.js';
 import { scoped } from '../db/tenant-scope.js';
 import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
+import { createStarterEstimating } from '../modules/price-book/starter-price-book.js';
 import { hashPassword } from '../passwords.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 import { demoJobs } from './demo-jobs.js';
@@ -119,6 +120,8 @@ export async function seedDemoData(
       );
     }
     await unsafeRecountCustomers(company.id, transaction);
+    // The same invented starter price book a new company gets at sign-up.
+    await createStarterEstimating(owner, transaction);
   });
   return { created: true, ...result };
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { defaultTakeoffSettings, takeoffSettingsSchema } from './index.js';
+import { defaultTakeoffSettings, takeoffSettingSource, takeoffSettingsSchema } from './index.js';
 
 describe('takeoff settings', () => {
   it('ships defaults that pass their own schema', () => {
@@ -37,5 +37,27 @@ describe('takeoff settings', () => {
     expect(takeoffSettingsSchema.safeParse({ ...defaultTakeoffSettings, infill }).success).toBe(
       false,
     );
+  });
+});
+
+describe('takeoff setting sources', () => {
+  function leafPaths(value: unknown, prefix: string): string[] {
+    if (value === null || typeof value !== 'object' || Array.isArray(value)) return [prefix];
+    return Object.entries(value).flatMap(([key, child]) =>
+      leafPaths(child, prefix ? `${prefix}.${key}` : key),
+    );
+  }
+
+  it('names a source for every default setting', () => {
+    const missing = leafPaths(defaultTakeoffSettings, '').filter(
+      (path) => !takeoffSettingSource(path),
+    );
+    expect(missing).toEqual([]);
+  });
+
+  it('prefers a setting’s own entry over its section’s', () => {
+    expect(takeoffSettingSource('excavation.spoilLooseDensityLbPerCuYd')).toContain('CalRecycle');
+    expect(takeoffSettingSource('labour.seamFtPerHour')).toContain('From memory');
+    expect(takeoffSettingSource('nothing.here')).toBeUndefined();
   });
 });

@@ -5,6 +5,7 @@ import { rateLimitHits } from './0002-rate-limit-hits.js';
 import { tenantCompositeKeys } from './0004-tenant-composite-keys.js';
 import { customerList } from './0006-customer-list.js';
 import { jobs } from './0007-jobs.js';
+import { priceBook } from './0008-price-book.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -13,4 +14,5 @@ export const migrations: Migration[] = [
   tenantCompositeKeys,
   customerList,
   jobs,
+  priceBook,
 ];

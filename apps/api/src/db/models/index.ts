@@ -4,9 +4,11 @@ import { AuditEventModel } from './audit-event.model.js';
 import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
 import { JobModel } from './job.model.js';
+import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
 import { PasswordResetModel } from './password-reset.model.js';
+import { PriceBookItemModel } from './price-book-item.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { UserModel } from './user.model.js';
@@ -18,10 +20,12 @@ export {
   AuditEventModel,
   CompanyModel,
   CustomerModel,
+  EstimatingSettingsModel,
   InvitationModel,
   JobModel,
   MembershipModel,
   PasswordResetModel,
+  PriceBookItemModel,
   SessionModel,
   SiteModel,
   UserModel,
@@ -38,6 +42,8 @@ const allModels = [
   JobModel,
   AuditEventModel,
   SessionModel,
+  PriceBookItemModel,
+  EstimatingSettingsModel,
 ] as const;
 
 /**

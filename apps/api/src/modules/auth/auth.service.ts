@@ -7,6 +7,7 @@ import { inTransaction } from '../../db/sequelize.js';
 import { AppError } from '../../errors.js';
 import { decoyPasswordFor, hashPassword, verifyPassword } from '../../passwords.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
+import { createStarterEstimating } from '../price-book/starter-price-book.js';
 import { unsafeFindFirstMembershipOfUser } from '../me/me.repository.js';
 import {
   addMembership,
@@ -42,6 +43,8 @@ export function createAuthService(deps: ServiceDeps) {
         );
         const ctx = { userId: user.id, companyId: company.id, role: 'owner' as const };
         await addMembership(ctx, 'owner', tx);
+        // Invented starter prices and a 30 % deposit, so the first estimate has totals.
+        await createStarterEstimating(ctx, tx);
         await recordAuditEvent(
           ctx,
           {

@@ -7,6 +7,9 @@ import { queryClient } from '../../lib/query-client';
 import { useCan, useSession } from '../../lib/session';
 import { companyQueryOptions } from '../../features/company-settings/api/get-company';
 import { CompanyForm } from '../../features/company-settings/components/company-form';
+import { estimatingSettingsQueryOptions } from '../../features/estimating/api/estimating-settings';
+import { EstimatingSettingsPanel } from '../../features/estimating/components/estimating-settings-panel';
+import { PriceBookPanel } from '../../features/estimating/components/price-book-panel';
 import { meQueryOptions } from '../../features/session/api/get-me';
 import { MyProfile } from '../../features/session/components/my-profile';
 import { invitationsQueryOptions } from '../../features/team/api/get-invitations';
@@ -25,6 +28,8 @@ export async function loader() {
       queryClient.ensureQueryData(invitationsQueryOptions()),
     ]);
   }
+  if (await sessionCan('pricebook.read'))
+    void queryClient.prefetchQuery(estimatingSettingsQueryOptions());
   return null;
 }
 
@@ -46,6 +51,9 @@ export function Component() {
   const client = useQueryClient();
   const canManageCompany = useCan('company.manage');
   const canManageTeam = useCan('members.manage');
+  const canReadPrices = useCan('pricebook.read');
+  const canWritePrices = useCan('pricebook.write');
+  const canManageEstimating = useCan('estimating.manage');
   return (
     <div className="flex max-w-4xl flex-col gap-10">
       <PageHeader
@@ -67,6 +75,16 @@ export function Component() {
             />
           </div>
         </Section>
+      ) : null}
+      {canReadPrices ? (
+        <>
+          <Section id="estimating" title="Estimating">
+            <EstimatingSettingsPanel canManage={canManageEstimating} />
+          </Section>
+          <Section id="price-book" title="Price book">
+            <PriceBookPanel currency={company.currency} canWrite={canWritePrices} />
+          </Section>
+        </>
       ) : null}
       {canManageTeam ? (
         <>
