@@ -4,7 +4,7 @@ import { selectRows } from '@seamwright/api';
 import type { EstimatingSettingsView } from '@seamwright/shared';
 import { defaultTakeoffSettings } from '@seamwright/takeoff';
 import { testApp } from '../../fixtures/app.js';
-import { addMember, signUpCompany } from '../../fixtures/factories.js';
+import { signUpTeam } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
 async function storedRow(companyId: string) {
@@ -23,10 +23,7 @@ describe('estimating settings', () => {
 
   beforeAll(async () => {
     const { app } = testApp();
-    owner = await signUpCompany(app);
-    office = await addMember(app, owner.client, 'office');
-    bookkeeper = await addMember(app, owner.client, 'bookkeeper');
-    crew = await addMember(app, owner.client, 'crew_lead');
+    ({ owner, office, bookkeeper, crew } = await signUpTeam(app));
   });
 
   it('starts a new company on the standard values with a 30 % deposit, each setting with its source', async () => {

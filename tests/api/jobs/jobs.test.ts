@@ -4,11 +4,11 @@ import { selectRows } from '@seamwright/api';
 import type { JobDetailView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import {
-  addMember,
   createCustomer,
   createJob,
   createSite,
   signUpCompany,
+  signUpTeam,
 } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
@@ -22,10 +22,7 @@ describe('jobs', () => {
 
   beforeAll(async () => {
     const { app } = testApp();
-    owner = await signUpCompany(app);
-    office = await addMember(app, owner.client, 'office');
-    bookkeeper = await addMember(app, owner.client, 'bookkeeper');
-    crew = await addMember(app, owner.client, 'crew_lead');
+    ({ owner, office, bookkeeper, crew } = await signUpTeam(app));
     customerId = (await createCustomer(owner.client, { name: 'Marlow Fenwick' })).id;
     siteId = (await createSite(owner.client, customerId, { addressLine1: '8 Heron Row' })).id;
   });

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { testApp } from '../../fixtures/app.js';
-import { addMember, createCustomer, createSite, signUpCompany } from '../../fixtures/factories.js';
+import { createCustomer, createSite, signUpTeam } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
 describe('permissions per role', () => {
@@ -13,10 +13,7 @@ describe('permissions per role', () => {
 
   beforeAll(async () => {
     const { app } = testApp();
-    owner = await signUpCompany(app);
-    office = await addMember(app, owner.client, 'office');
-    bookkeeper = await addMember(app, owner.client, 'bookkeeper');
-    crew = await addMember(app, owner.client, 'crew_lead');
+    ({ owner, office, bookkeeper, crew } = await signUpTeam(app));
     const customer = await createCustomer(owner.client, {
       email: 'billing@example.test',
       phone: '555 014 1234',

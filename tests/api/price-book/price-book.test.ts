@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';
 import type { PriceBookItemView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
-import { addMember, signUpCompany } from '../../fixtures/factories.js';
+import { signUpTeam } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
 const turf = {
@@ -39,10 +39,7 @@ describe('price book', () => {
 
   beforeAll(async () => {
     const { app } = testApp();
-    owner = await signUpCompany(app);
-    office = await addMember(app, owner.client, 'office');
-    bookkeeper = await addMember(app, owner.client, 'bookkeeper');
-    crew = await addMember(app, owner.client, 'crew_lead');
+    ({ owner, office, bookkeeper, crew } = await signUpTeam(app));
   });
 
   it('gives a freshly signed-up company the invented starter price book, marked as starter', async () => {
