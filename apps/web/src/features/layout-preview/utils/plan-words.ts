@@ -12,7 +12,12 @@ export function grainWords(angleDeg: number): string {
 const fieldNames: Array<[RegExp, string]> = [
   [/^area\.outer\b/, 'The outline'],
   [/^area\.holes\[(\d+)\]/, 'Hole'],
+  [/^area\.holes\b/, 'The holes'],
+  // The work limits name the whole area or the list of walkways (packages/takeoff limits.ts).
+  [/^area\b/, 'The yard'],
   [/^trafficPaths\[0\](\.points)?/, 'The walkway'],
+  [/^trafficPaths\b/, 'The walkways'],
+  [/^lengthStepFt\b/, 'The length step'],
   [/^roll\.maxLengthFt/, 'The longest piece'],
   [/^roll\.widthFt/, 'The roll width'],
   [/^grain\.angleDeg/, 'The grain angle'],
