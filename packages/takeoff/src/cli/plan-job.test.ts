@@ -1,20 +1,9 @@
-import { spawnSync } from 'node:child_process';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { runCommand, type CommandResult } from './run-command.test-helper.js';
 import { jobContractExampleRequest } from '../job/sample-jobs.js';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const root = join(here, '../../../..');
-const script = join(here, 'plan-job.ts');
-
-function run(input: string): { status: number | null; stdout: string; stderr: string } {
-  const result = spawnSync(process.execPath, ['--import', 'tsx', script], {
-    cwd: root,
-    input,
-    encoding: 'utf8',
-  });
-  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+function run(input: string): CommandResult {
+  return runCommand('plan-job', input);
 }
 
 /** The job of the job contract: front lawn 20 × 10 and side strip 20 × 5, two roll widths, costs. */

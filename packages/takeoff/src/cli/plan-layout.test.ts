@@ -1,21 +1,10 @@
-import { spawnSync } from 'node:child_process';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { runCommand, type CommandResult } from './run-command.test-helper.js';
 import { MAX_HOLES, MIN_LENGTH_STEP_FT } from '../layout/limits.js';
 import { contractExampleRequest, irregularYard } from '../layout/sample-yards.js';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const root = join(here, '../../../..');
-const script = join(here, 'plan-layout.ts');
-
-function run(input: string): { status: number | null; stdout: string; stderr: string } {
-  const result = spawnSync(process.execPath, ['--import', 'tsx', script], {
-    cwd: root,
-    input,
-    encoding: 'utf8',
-  });
-  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+function run(input: string): CommandResult {
+  return runCommand('plan-layout', input);
 }
 
 describe('plan-layout command', () => {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { customerSortFields, customerStatuses } from '@seamwright/shared';
+import { joinSort as joinSortWith, type SortDirection } from '../../../lib/list-sort';
 
 export const customerPageSizes = [10, 25, 50, 100] as const;
 const sortValues = [
@@ -42,17 +43,8 @@ export function toCustomerSearchParams(params: CustomerListParams): URLSearchPar
   return search;
 }
 
-/** `-createdAt` ⇄ `{ field: 'createdAt', direction: 'desc' }`, for the table's headers. */
-export function splitSort(sort: CustomerListParams['sort']): {
-  field: string;
-  direction: 'asc' | 'desc';
-} {
-  return sort.startsWith('-')
-    ? { field: sort.slice(1), direction: 'desc' }
-    : { field: sort, direction: 'asc' };
-}
+export { splitSort } from '../../../lib/list-sort';
 
-export function joinSort(field: string, direction: 'asc' | 'desc'): CustomerListParams['sort'] {
-  const raw = direction === 'desc' ? `-${field}` : field;
-  return customerListParamsSchema.shape.sort.parse(raw);
+export function joinSort(field: string, direction: SortDirection): CustomerListParams['sort'] {
+  return joinSortWith(customerListParamsSchema.shape.sort, field, direction);
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { jobSortFields, jobStatuses, type JobStatus } from '@seamwright/shared';
+import { joinSort as joinSortWith, type SortDirection } from '../../../lib/list-sort';
 
 export const jobPageSizes = [10, 25, 50, 100] as const;
 const sortValues = [
@@ -65,17 +66,10 @@ export function isFiltered(params: JobListParams): boolean {
   return params.q !== '' || params.status.length > 0 || params.from !== '' || params.to !== '';
 }
 
-export function splitSort(sort: JobListParams['sort']): {
-  field: string;
-  direction: 'asc' | 'desc';
-} {
-  return sort.startsWith('-')
-    ? { field: sort.slice(1), direction: 'desc' }
-    : { field: sort, direction: 'asc' };
-}
+export { splitSort } from '../../../lib/list-sort';
 
-export function joinSort(field: string, direction: 'asc' | 'desc'): JobListParams['sort'] {
-  return jobListParamsSchema.shape.sort.parse(direction === 'desc' ? `-${field}` : field);
+export function joinSort(field: string, direction: SortDirection): JobListParams['sort'] {
+  return joinSortWith(jobListParamsSchema.shape.sort, field, direction);
 }
 
 /** Toggles one status in the filter, keeping lifecycle order. */
