@@ -7,8 +7,8 @@
 function readPortOffset(raw: string | undefined): number {
   if (raw === undefined || raw === '') return 0;
   const offset = Number(raw);
-  if (!Number.isInteger(offset) || offset < 0 || offset > 500) {
-    throw new Error(`SW_PORT_OFFSET must be a whole number from 0 to 500, got "${raw}"`);
+  if (!Number.isInteger(offset) || offset < 0 || offset > 900) {
+    throw new Error(`SW_PORT_OFFSET must be a whole number from 0 to 900, got "${raw}"`);
   }
   return offset;
 }
