@@ -1,5 +1,6 @@
 // Public surface of the layout planner (re-exported by the package index).
 export { planLayout } from './plan-layout.js';
+export { LAYOUT_ENGINE_VERSION } from './engine-version.js';
 export {
   parseLayoutRequest,
   DEFAULT_MAX_LENGTH_FT,
