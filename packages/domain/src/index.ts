@@ -1,2 +1,3 @@
 // @seamwright/domain: pure business rules (no I/O, no clock, no environment).
 export * from './job-lifecycle.js';
+export * from './cancellation/index.js';

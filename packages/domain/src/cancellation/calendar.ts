@@ -1,0 +1,48 @@
+// Calendar days (`YYYY-MM-DD`) and the instants where they start in a time zone. Day arithmetic
+// runs on calendar dates in UTC, where every day has 24 hours, so summer time cannot shift a
+// count; only the last step turns a day into an instant in the company's zone.
+import { TZDate, tz } from '@date-fns/tz';
+import { addDays, format, getDay, parseISO } from 'date-fns';
+
+/** A calendar day written `YYYY-MM-DD`. */
+export type CalendarDate = string;
+
+const utc = tz('UTC');
+
+/** The day `instant` falls on in `timeZone` (an IANA name such as `America/Denver`). */
+export function localDateOf(instant: Date, timeZone: string): CalendarDate {
+  return format(new TZDate(instant.getTime(), timeZone), 'yyyy-MM-dd');
+}
+
+/** The calendar day `days` after `date` (negative counts back). */
+export function addCalendarDays(date: CalendarDate, days: number): CalendarDate {
+  return format(addDays(parseISO(date, { in: utc }), days, { in: utc }), 'yyyy-MM-dd');
+}
+
+/** 0 = Sunday … 6 = Saturday. */
+export function weekdayOf(date: CalendarDate): number {
+  return getDay(parseISO(date, { in: utc }));
+}
+
+/** The day as numbers (month 1–12). */
+export function partsOf(date: CalendarDate): { year: number; month: number; day: number } {
+  const [year, month, day] = date.split('-').map(Number);
+  return { year: year ?? NaN, month: month ?? NaN, day: day ?? NaN };
+}
+
+/** Builds a calendar day from numbers (month 1–12). */
+export function calendarDate(year: number, month: number, day: number): CalendarDate {
+  return `${String(year).padStart(4, '0')}-${String(month).padStart(2, '0')}-${String(day).padStart(2, '0')}`;
+}
+
+/** Whether `value` is a real calendar day written `YYYY-MM-DD`. */
+export function isCalendarDate(value: string): boolean {
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(value)) return false;
+  return addCalendarDays(value, 0) === value;
+}
+
+/** The instant `date` begins (local midnight) in `timeZone`. */
+export function startOfLocalDay(date: CalendarDate, timeZone: string): Date {
+  const { year, month, day } = partsOf(date);
+  return new Date(new TZDate(year, month - 1, day, 0, 0, 0, 0, timeZone).getTime());
+}

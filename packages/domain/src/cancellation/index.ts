@@ -1,0 +1,19 @@
+// The buyer's right to cancel (TRADE.md §8.2). Only the names other packages need are exported;
+// the calendar helpers stay inside.
+export { businessDaysAfter, isBusinessDay } from './business-days.js';
+export type { BusinessCalendar } from './business-days.js';
+export type { CalendarDate } from './calendar.js';
+export { cancellationPeriod, withinCancellationPeriod } from './cancellation-period.js';
+export type {
+  CancellationInput,
+  CancellationPeriod,
+  CoveredSale,
+  UncoveredSale,
+} from './cancellation-period.js';
+export { holidayDate } from './holidays.js';
+export type { HolidayRule } from './holidays.js';
+export { jurisdictionsOf } from './jurisdiction.js';
+export { cancellationNotice, longCalendarDate } from './notice.js';
+export type { CancellationNotice, CancellationNoticeInput } from './notice.js';
+export { cancellationRules, ftcBusinessHolidays } from './rules.js';
+export type { CancellationRule, SalePlace } from './rules.js';
