@@ -9,6 +9,8 @@
  * - `seedDemoData(sequelize, env)` → loads the demo company once
  * - `startServer(options?)` → listens on env.port with graceful shutdown
  * - `createLogger(level, destination?)` → the pino logger with the API's redaction rules
+ * - `getJobTakeoff(ctx, jobId)`, `listJobTurfPieces(ctx, jobId)` → a job's takeoff and saved
+ *   plan pieces (modules/areas/job-takeoff.service.ts), for tests and scripts
  */
 export { createApp } from './app.js';
 export type { AppDeps } from './app.js';
@@ -28,4 +30,6 @@ export { createLogger } from './http/logging.js';
 export { answerMalformedRequests } from './http/malformed-requests.js';
 export { createSessionStore } from './http/session.js';
 export { executeSql, selectRows } from './db/sql.js';
+export { getJobTakeoff, listJobTurfPieces } from './modules/areas/job-takeoff.service.js';
+export type { JobTurfPiece, JobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export { decoyPasswordFor, hashPassword } from './passwords.js';

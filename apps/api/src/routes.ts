@@ -2,6 +2,7 @@
 import type { Request, Response } from 'express';
 import type { ServiceDeps } from './deps.js';
 import type { RouteTable } from './http/route-table.js';
+import { registerAreasRoutes } from './modules/areas/areas.routes.js';
 import { registerAuditRoutes } from './modules/audit/audit.routes.js';
 import { registerAuthRoutes } from './modules/auth/auth.routes.js';
 import { registerCompanyRoutes } from './modules/company/company.routes.js';
@@ -30,6 +31,7 @@ export function registerApiRoutes(
   registerCustomersRoutes(routes, deps);
   registerSitesRoutes(routes, deps);
   registerJobsRoutes(routes, deps);
+  registerAreasRoutes(routes, deps);
   registerAuditRoutes(routes);
   registerPlansRoutes(routes, deps);
   registerPriceBookRoutes(routes, deps);

@@ -13,3 +13,4 @@ export * from './system.js';
 export * from './jobs.js';
 export * from './price-book.js';
 export * from './estimating-settings.js';
+export * from './areas.js';

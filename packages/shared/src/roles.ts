@@ -24,6 +24,8 @@ export const actions = [
   'sites.write',
   'jobs.read',
   'jobs.write',
+  'areas.read',
+  'areas.write',
   'plans.preview',
   'audit.read',
   'pricebook.read',
@@ -48,6 +50,9 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // Crew leads will reach their jobs through bookings (calendar work); until then, none.
   'jobs.read': ['owner', 'office', 'bookkeeper'],
   'jobs.write': ['owner', 'office'],
+  // A job's areas, saved plans and takeoff follow the job's own access.
+  'areas.read': ['owner', 'office', 'bookkeeper'],
+  'areas.write': ['owner', 'office'],
   'plans.preview': everyone,
   'audit.read': ['owner'],
   // Prices, markup and tax are money: crew leads never see them; bookkeepers read only.

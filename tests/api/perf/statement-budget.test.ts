@@ -7,6 +7,7 @@ import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
 import { addMember, createCustomer, createSite, signUpCompany } from '../../fixtures/factories.js';
 import { recordStatements } from '../../fixtures/statements.js';
+import { createArea } from '../../fixtures/areas.js';
 
 /** The default for a signed-in read: the session with the membership, then the data. */
 const defaultReadBudget = 2;
@@ -47,12 +48,18 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   '/api/price-book/export.csv': { budget: 2, urls: () => ['/api/price-book/export.csv'] },
   // The job with its customer and site in one join, then its activity (audit events).
   '/api/jobs/:id': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}`] },
+  '/api/areas/:id': { budget: 2, urls: (ids) => [`/api/areas/${ids.areaId}`] },
+  // The job is checked first (another company's is a 404), then its areas.
+  '/api/jobs/:id/areas': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/areas`] },
+  // The job, its areas and the company's estimating settings, read in parallel.
+  '/api/jobs/:id/takeoff': { budget: 4, urls: (ids) => [`/api/jobs/${ids.jobId}/takeoff`] },
 };
 
 interface Ids {
   customerId: string;
   siteId: string;
   jobId: string;
+  areaId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -70,11 +77,9 @@ describe('statement budget of signed-in requests', () => {
     const job = await owner
       .post('/api/jobs', { customerId: customer.id, siteId: site.id, title: 'Front lawn' })
       .expect(201);
-    ids = {
-      customerId: customer.id,
-      siteId: site.id,
-      jobId: (job.body as { data: { id: string } }).data.id,
-    };
+    const jobId = (job.body as { data: { id: string } }).data.id;
+    const area = await createArea(owner, jobId);
+    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -90,6 +95,8 @@ describe('statement budget of signed-in requests', () => {
       '/api/audit-events',
       '/api/price-book',
       '/api/jobs/:id',
+      '/api/jobs/:id/areas',
+      '/api/jobs/:id/takeoff',
     ]);
   });
 

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { testApp } from '../../fixtures/app.js';
-import { createCustomer, createSite, signUpTeam } from '../../fixtures/factories.js';
+import { areaBody } from '../../fixtures/areas.js';
+import { createCustomer, createJob, createSite, signUpTeam } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
 describe('permissions per role', () => {
@@ -80,5 +81,24 @@ describe('permissions per role', () => {
     });
     const bad = await owner.client.patch('/api/company', { timeZone: 'Mars/Olympus' }).expect(400);
     expect(bad.body.errors[0].path).toBe('timeZone');
+  });
+
+  it('areas and takeoff: owners and office write, bookkeepers read, crew leads get 403', async () => {
+    const jobId = (await createJob(owner.client, customerId, siteId)).id;
+    const made = await office.client.post(`/api/jobs/${jobId}/areas`, areaBody()).expect(201);
+    const areaId = (made.body as { data: { id: string } }).data.id;
+    await owner.client.patch(`/api/areas/${areaId}`, { name: 'Owner edit' }).expect(200);
+    for (const url of [
+      `/api/areas/${areaId}`,
+      `/api/jobs/${jobId}/areas`,
+      `/api/jobs/${jobId}/takeoff`,
+    ]) {
+      await bookkeeper.client.get(url).expect(200);
+      expect((await crew.client.get(url)).status).toBe(403);
+    }
+    await bookkeeper.client.post(`/api/jobs/${jobId}/areas`, areaBody()).expect(403);
+    await bookkeeper.client.del(`/api/areas/${areaId}`).expect(403);
+    await crew.client.post(`/api/jobs/${jobId}/areas`, areaBody()).expect(403);
+    await office.client.del(`/api/areas/${areaId}`).expect(204);
   });
 });

@@ -5,6 +5,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
+import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
 import {
   addMember,
   createCustomer,
@@ -27,6 +28,9 @@ interface World {
   aOwnerMemberId: string;
   aOfficeMemberId: string;
   aPriceItemId: string;
+  aAreaId: string;
+  bJobId: string;
+  aTurfProductId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -241,8 +245,8 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: async (b, w) => {
       const res = await b.get('/api/jobs?pageSize=100').expect(200);
-      expect(idsOf(res.body)).not.toContain(w.aJobId);
-      expect(res.body.meta.total).toBe(0);
+      expect(idsOf(res.body)).toEqual([w.bJobId]);
+      expect(res.body.meta.total).toBe(1);
       const search = await b.get('/api/jobs?q=Alpha').expect(200);
       expect(search.body.data).toEqual([]);
     },
@@ -267,6 +271,36 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) =>
       notFound(b.patch(`/api/jobs/${w.aJobId}`, { title: 'Hijacked', status: 'lost' })),
+  },
+  'get /api/jobs/:id/areas': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/areas`)),
+  },
+  'post /api/jobs/:id/areas': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      // A's job is unknown to B; so is A's turf product under B's own job.
+      await notFound(b.post(`/api/jobs/${w.aJobId}/areas`, areaBody()));
+      await notFound(
+        b.post(`/api/jobs/${w.bJobId}/areas`, areaBody({ turfProductId: w.aTurfProductId })),
+      );
+    },
+  },
+  'get /api/jobs/:id/takeoff': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/takeoff`)),
+  },
+  'get /api/areas/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}`)),
+  },
+  'patch /api/areas/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/areas/${w.aAreaId}`, { name: 'Hijacked' })),
+  },
+  'delete /api/areas/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/areas/${w.aAreaId}`)),
   },
   'post /api/plans/preview': {
     kind: 'tenant',
@@ -394,6 +428,9 @@ async function snapshotOfA(w: World) {
     priceBook: await q(
       'SELECT id, item_key, price_millicents, updated_at FROM price_book_items WHERE company_id = ? ORDER BY id',
     ),
+    areas: await q(
+      'SELECT id, name, plan, updated_at FROM job_areas WHERE company_id = ? ORDER BY id',
+    ),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -422,6 +459,10 @@ describe('tenant isolation', () => {
     }[];
     const aJob = await createJob(a.client, aCustomer.id, aSite.id, 'Alpha job');
     const bCustomer = await createCustomer(b.client, { name: 'Bravo Customer' });
+    const bSite = await createSite(b.client, bCustomer.id);
+    const bJob = await createJob(b.client, bCustomer.id, bSite.id, 'Bravo job');
+    const aArea = await createArea(a.client, aJob.id, areaBody({ name: 'Alpha area' }));
+    const [aTurf] = await turfProducts(a.client);
     const aPriceItem = await a.client.post('/api/price-book', alphaPriceItem).expect(201);
     await a.client.patch('/api/estimating-settings', { markupBasisPoints: 1234 }).expect(200);
     world = {
@@ -435,6 +476,9 @@ describe('tenant isolation', () => {
       aOwnerMemberId: members.find((m) => m.userId === a.me.user.id)!.id,
       aOfficeMemberId: members.find((m) => m.userId === office.me.user.id)!.id,
       aPriceItemId: aPriceItem.body.data.id,
+      aAreaId: aArea.id,
+      bJobId: bJob.id,
+      aTurfProductId: aTurf!.id,
     };
   });
 
@@ -470,6 +514,7 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/customers/${world.aCustomerId}`).expect(200);
     await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
     await world.a.client.get(`/api/jobs/${world.aJobId}`).expect(200);
+    await world.a.client.get(`/api/areas/${world.aAreaId}`).expect(200);
   });
 
   it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {

@@ -6,6 +6,7 @@ import { tenantCompositeKeys } from './0004-tenant-composite-keys.js';
 import { customerList } from './0006-customer-list.js';
 import { jobs } from './0007-jobs.js';
 import { priceBook } from './0008-price-book.js';
+import { jobAreas } from './0009-job-areas.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -15,4 +16,5 @@ export const migrations: Migration[] = [
   customerList,
   jobs,
   priceBook,
+  jobAreas,
 ];

@@ -4,6 +4,7 @@ import { AuditEventModel } from './audit-event.model.js';
 import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
 import { JobModel } from './job.model.js';
+import { JobAreaModel } from './job-area.model.js';
 import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
@@ -22,6 +23,7 @@ export {
   CustomerModel,
   EstimatingSettingsModel,
   InvitationModel,
+  JobAreaModel,
   JobModel,
   MembershipModel,
   PasswordResetModel,
@@ -40,6 +42,7 @@ const allModels = [
   CustomerModel,
   SiteModel,
   JobModel,
+  JobAreaModel,
   AuditEventModel,
   SessionModel,
   PriceBookItemModel,

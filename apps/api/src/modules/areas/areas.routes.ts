@@ -1,0 +1,16 @@
+import type { ServiceDeps } from '../../deps.js';
+import type { RouteTable } from '../../http/route-table.js';
+import { createAreasHandlers } from './areas.handlers.js';
+import { createAreasService } from './areas.service.js';
+
+export function registerAreasRoutes(routes: RouteTable, deps: ServiceDeps): void {
+  const handlers = createAreasHandlers(createAreasService(deps));
+  const read = { access: 'tenant', permission: 'areas.read' } as const;
+  const write = { access: 'tenant', permission: 'areas.write' } as const;
+  routes.add('get', '/jobs/:id/areas', read, handlers.listForJob);
+  routes.add('post', '/jobs/:id/areas', write, handlers.create);
+  routes.add('get', '/jobs/:id/takeoff', read, handlers.takeoff);
+  routes.add('get', '/areas/:id', read, handlers.get);
+  routes.add('patch', '/areas/:id', write, handlers.update);
+  routes.add('delete', '/areas/:id', write, handlers.remove);
+}
