@@ -2,7 +2,13 @@
 // with sites into the dev database. Idempotent: does nothing when the demo company exists.
 // Usage: pnpm exec tsx scripts/seed-demo.ts [dev]   (runs migrations first)
 // Not for production: it creates users with a published password.
-import { createSequelize, loadEnv, migrateDatabase, seedDemoData } from '@seamwright/api';
+import {
+  createSequelize,
+  loadEnv,
+  migrateDatabase,
+  PlannerPool,
+  seedDemoData,
+} from '@seamwright/api';
 import { instances } from './lib/instances.js';
 import { fail, say } from './lib/log.js';
 
@@ -10,6 +16,7 @@ if (process.argv[2] && process.argv[2] !== 'dev')
   fail('seed', 'only the dev instance takes demo data: seed-demo.ts [dev]');
 const { db } = instances.dev;
 const env = loadEnv({ NODE_ENV: 'development' });
+const plannerPool = new PlannerPool(env.planner);
 const sequelize = createSequelize({
   host: '127.0.0.1',
   port: db.port,
@@ -19,7 +26,7 @@ const sequelize = createSequelize({
 });
 try {
   await migrateDatabase(sequelize);
-  const result = await seedDemoData(sequelize, env);
+  const result = await seedDemoData(sequelize, env, plannerPool);
   say(
     'seed',
     result.created
@@ -31,5 +38,6 @@ try {
 } catch (error) {
   fail('seed', `seeding failed: ${error instanceof Error ? error.message : String(error)}`);
 } finally {
+  await plannerPool.close();
   await sequelize.close();
 }

@@ -6,7 +6,7 @@
  * - `loadEnv(source?)` → validated `Env`
  * - `createSequelize(env.db)` → Sequelize with every model registered
  * - `migrateDatabase(sequelize)` → applies pending migrations
- * - `seedDemoData(sequelize, env)` → loads the demo company once
+ * - `seedDemoData(sequelize, env, plannerPool)` → loads the demo company once, areas planned
  * - `startServer(options?)` → listens on env.port with graceful shutdown
  * - `createLogger(level, destination?)` → the pino logger with the API's redaction rules
  * - `getJobTakeoff(ctx, jobId)`, `listJobTurfPieces(ctx, jobId)` → a job's takeoff and saved
@@ -21,6 +21,7 @@ export type { Env } from './config/env.js';
 export { createSequelize } from './db/sequelize.js';
 export { migrateDatabase } from './db/migrate.js';
 export { seedDemoData, demoPassword, demoUsers } from './seed/demo-data.js';
+export { demoAreas } from './seed/demo-areas.js';
 export type { SeedResult } from './seed/demo-data.js';
 export { startServer } from './server.js';
 export type { RunningServer, StartServerOptions } from './server.js';

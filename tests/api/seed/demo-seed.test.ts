@@ -1,12 +1,12 @@
 // The demo seed writes its rows through scoped(ctx, Model) like request code does.
 import { describe, expect, it } from 'vitest';
-import { demoUsers, seedDemoData, selectRows } from '@seamwright/api';
+import { demoAreas, demoUsers, seedDemoData, selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 
 describe('demo seed', () => {
-  it('files every membership, customer, site and job under the demo company, once', async () => {
-    const { sequelize } = testApp();
-    const first = await seedDemoData(sequelize, { bcryptCost: 4 });
+  it('files every membership, customer, site, job and planned area under the demo company, once', async () => {
+    const { sequelize, plannerPool } = testApp();
+    const first = await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool);
     expect(first.created).toBe(true);
     const [company] = await selectRows<{ id: string }>(
       sequelize,
@@ -30,6 +30,16 @@ describe('demo seed', () => {
     );
     expect(statuses.length).toBeGreaterThanOrEqual(5);
 
-    expect((await seedDemoData(sequelize, { bcryptCost: 4 })).created).toBe(false);
+    // Every demo area is saved with a real plan of its drawing.
+    const areas = await selectRows<{ area_sq_ft: number; ordered_sq_ft: number }>(
+      sequelize,
+      'SELECT area_sq_ft, ordered_sq_ft FROM job_areas WHERE company_id = ?',
+      [company?.id],
+    );
+    expect(areas.length).toBe(demoAreas.length);
+    for (const area of areas)
+      expect(Number(area.ordered_sq_ft)).toBeGreaterThanOrEqual(Number(area.area_sq_ft));
+
+    expect((await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool)).created).toBe(false);
   });
 });

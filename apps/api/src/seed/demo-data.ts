@@ -1,4 +1,5 @@
 // Loads the invented demo company once: skipped when its slug already exists.
+import { createAreaInputSchema } from '@seamwright/shared';
 import type { Role } from '@seamwright/shared';
 import type { Sequelize } from 'sequelize';
 import type { Env } from '../config/env.js';
@@ -12,9 +13,15 @@ import {
   UserModel,
 } from '../db/models/index.js';
 import { scoped } from '../db/tenant-scope.js';
+import type { Tx } from '../db/sequelize.js';
+import { planNewArea } from '../modules/areas/area-values.js';
+import { createArea } from '../modules/areas/areas.repository.js';
 import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
+import { findPriceBookItemByKey } from '../modules/price-book/price-book.repository.js';
 import { createStarterEstimating } from '../modules/price-book/starter-price-book.js';
+import type { PlannerPool } from '../planner/planner-pool.js';
 import { hashPassword } from '../passwords.js';
+import { demoAreas } from './demo-areas.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 import { demoJobs } from './demo-jobs.js';
 
@@ -42,9 +49,14 @@ export interface SeedResult {
   password: string;
 }
 
+/**
+ * Loads the demo company in one transaction (all or nothing). Its areas are planned through
+ * `plannerPool`, like a request's.
+ */
 export async function seedDemoData(
   sequelize: Sequelize,
   env: Pick<Env, 'bcryptCost'>,
+  plannerPool: PlannerPool,
 ): Promise<SeedResult> {
   const result = {
     companyName: demoCompany.name,
@@ -110,18 +122,37 @@ export async function seedDemoData(
         ids.push(created.id);
       }
     }
+    // The same invented starter price book a new company gets at sign-up.
+    await createStarterEstimating(owner, transaction);
+    const jobIds = new Map<string, string>();
     for (const job of demoJobs) {
       const parent = made.get(job.customer);
       const siteId = parent?.siteIds[job.site];
       if (!parent || !siteId) throw new Error(`Demo job "${job.title}" has no site.`);
-      await scoped(owner, JobModel).create(
+      const created = await scoped(owner, JobModel).create(
         { customerId: parent.customerId, siteId, title: job.title, status: job.status },
         transaction,
       );
+      jobIds.set(job.title, created.id);
     }
+    await seedDemoAreas(owner, jobIds, plannerPool, transaction);
     await unsafeRecountCustomers(company.id, transaction);
-    // The same invented starter price book a new company gets at sign-up.
-    await createStarterEstimating(owner, transaction);
   });
   return { created: true, ...result };
+}
+
+/** Draws and plans each demo area on its job, checked by the same schema as a request body. */
+async function seedDemoAreas(
+  ctx: RequestContext,
+  jobIds: Map<string, string>,
+  plannerPool: PlannerPool,
+  tx: Tx,
+): Promise<void> {
+  for (const demo of demoAreas) {
+    const jobId = jobIds.get(demo.jobTitle);
+    const product = await findPriceBookItemByKey(ctx, demo.turfKey, tx);
+    if (!jobId || !product) throw new Error(`Demo area "${demo.body.name}" has no job or turf.`);
+    const input = createAreaInputSchema.parse({ ...demo.body, turfProductId: product.id });
+    await createArea(ctx, jobId, await planNewArea(ctx, plannerPool, input, tx), tx);
+  }
 }

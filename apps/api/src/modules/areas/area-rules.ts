@@ -32,9 +32,10 @@ export async function lockEditableJob(ctx: RequestContext, jobId: string, tx: Tx
 export async function turfProductFor(
   ctx: RequestContext,
   id: string | null | undefined,
+  tx?: Tx,
 ): Promise<AreaTurfProduct | null> {
   if (id === null || id === undefined) return null;
-  const item = await findPriceBookItem(ctx, id);
+  const item = await findPriceBookItem(ctx, id, tx);
   if (!item)
     throw new AppError('NOT_FOUND', 'Turf product not found', {
       errors: [{ path: 'turfProductId', message: 'No such turf product in the price book' }],

@@ -10,7 +10,7 @@ import { notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findJob } from '../jobs/jobs.repository.js';
 import { planArea } from './area-planning.js';
-import type { AreaPlannerInput } from './area-planning.js';
+import { planNewArea, plannerInputOf, plannerKeys } from './area-values.js';
 import { lockEditableJob, turfProductFor } from './area-rules.js';
 import {
   createArea,
@@ -42,23 +42,6 @@ export function toAreaView(record: AreaRecord): AreaView<LayoutPlan> {
   };
 }
 
-const plannerKeys = [
-  'area',
-  'roll',
-  'edges',
-  'holeEdges',
-  'trafficPaths',
-  'lengthStepFt',
-  'trimAllowanceFt',
-] as const;
-
-/** The planner fields sent, without the ones left out (so the stored input stays plain JSON). */
-function plannerInputOf(input: Partial<AreaPlannerInput>): AreaPlannerInput {
-  const out: Record<string, unknown> = {};
-  for (const key of plannerKeys) if (input[key] !== undefined) out[key] = input[key];
-  return out as unknown as AreaPlannerInput;
-}
-
 function auditData(record: { name: string }, id: string, values: Partial<AreaValues>) {
   return {
     areaId: id,
@@ -87,25 +70,7 @@ export function createAreasService(deps: ServiceDeps) {
     input: CreateAreaData,
   ): Promise<AreaView<LayoutPlan>> {
     if (!(await findJob(ctx, jobId))) throw notFound('Job');
-    const product = await turfProductFor(ctx, input.turfProductId);
-    const grainChoice = toGrainChoice(input.grain);
-    const plannerInput = plannerInputOf(input);
-    const planned = await planArea(plannerPool, plannerInput, grainChoice, product);
-    const values: AreaValues = {
-      name: input.name,
-      usage: input.usage,
-      turfProductId: product?.id ?? null,
-      turfProduct: product,
-      baseDepthIn: input.baseDepthIn ?? null,
-      grainChoice,
-      input: plannerInput,
-      request: planned.request,
-      plan: planned.plan,
-      alternatives: planned.alternatives,
-      engineVersion: planned.plan.engineVersion,
-      areaSqFt: planned.plan.areaSqFt,
-      orderedSqFt: planned.plan.orderedSqFt,
-    };
+    const values = await planNewArea(ctx, plannerPool, input);
     const id = await inTransaction(sequelize, async (tx) => {
       await lockEditableJob(ctx, jobId, tx);
       const created = await createArea(ctx, jobId, values, tx);
