@@ -16,6 +16,7 @@ import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
 import { registerPriceBookRoutes } from './modules/price-book/price-book.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
+import { registerStockRoutes } from './modules/stock/stock.routes.js';
 
 export function registerApiRoutes(
   routes: RouteTable,
@@ -32,6 +33,7 @@ export function registerApiRoutes(
   registerSitesRoutes(routes, deps);
   registerJobsRoutes(routes, deps);
   registerAreasRoutes(routes, deps);
+  registerStockRoutes(routes, deps);
   registerAuditRoutes(routes);
   registerPlansRoutes(routes, deps);
   registerPriceBookRoutes(routes, deps);

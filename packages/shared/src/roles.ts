@@ -31,6 +31,8 @@ export const actions = [
   'pricebook.read',
   'pricebook.write',
   'estimating.manage',
+  'inventory.read',
+  'inventory.write',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -59,6 +61,9 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'pricebook.read': ['owner', 'office', 'bookkeeper'],
   'pricebook.write': ['owner', 'office'],
   'estimating.manage': ['owner', 'office'],
+  // Roll stock carries no money; crew leads look up rolls and lots in the yard.
+  'inventory.read': everyone,
+  'inventory.write': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

@@ -7,7 +7,7 @@ import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
 import { addMember, createCustomer, createSite, signUpCompany } from '../../fixtures/factories.js';
 import { recordStatements } from '../../fixtures/statements.js';
-import { createArea } from '../../fixtures/areas.js';
+import { createArea, turfProducts } from '../../fixtures/areas.js';
 
 /** The default for a signed-in read: the session with the membership, then the data. */
 const defaultReadBudget = 2;
@@ -53,6 +53,13 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   '/api/jobs/:id/areas': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/areas`] },
   // The job, its areas and the company's estimating settings, read in parallel.
   '/api/jobs/:id/takeoff': { budget: 4, urls: (ids) => [`/api/jobs/${ids.jobId}/takeoff`] },
+  '/api/rolls': { budget: 2, urls: () => ['/api/rolls', '/api/rolls?kind=remnant&pageSize=5'] },
+  '/api/rolls/:id': { budget: 2, urls: (ids) => [`/api/rolls/${ids.rollId}`] },
+  // The job and its reservations read in parallel, then the reservations' pieces.
+  '/api/jobs/:id/reservations': {
+    budget: 4,
+    urls: (ids) => [`/api/jobs/${ids.jobId}/reservations`],
+  },
 };
 
 interface Ids {
@@ -60,6 +67,7 @@ interface Ids {
   siteId: string;
   jobId: string;
   areaId: string;
+  rollId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -79,7 +87,16 @@ describe('statement budget of signed-in requests', () => {
       .expect(201);
     const jobId = (job.body as { data: { id: string } }).data.id;
     const area = await createArea(owner, jobId);
-    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id };
+    const [turf] = await turfProducts(owner);
+    const rolls = await owner
+      .post('/api/rolls/deliveries', {
+        turfProductId: turf!.id,
+        dyeLot: 'BUDGET-1',
+        rolls: [{ widthFt: 15, lengthFt: 100 }],
+      })
+      .expect(201);
+    const rollId = (rolls.body as { data: { id: string }[] }).data[0]!.id;
+    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -97,6 +114,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id',
       '/api/jobs/:id/areas',
       '/api/jobs/:id/takeoff',
+      '/api/jobs/:id/reservations',
     ]);
   });
 

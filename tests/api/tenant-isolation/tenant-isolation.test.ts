@@ -31,6 +31,7 @@ interface World {
   aAreaId: string;
   bJobId: string;
   aTurfProductId: string;
+  aRollId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -302,6 +303,70 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.del(`/api/areas/${w.aAreaId}`)),
   },
+  'get /api/rolls': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/rolls?includeEmpty=true').expect(200);
+      expect(idsOf(res.body)).not.toContain(w.aRollId);
+      expect(res.body.meta.total).toBe(0);
+      await b.get(`/api/rolls?turfProductId=${w.aTurfProductId}`).expect(200, {
+        data: [],
+        meta: { page: 1, pageSize: 25, total: 0 },
+      });
+    },
+  },
+  'post /api/rolls': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post('/api/rolls', {
+          turfProductId: w.aTurfProductId,
+          dyeLot: 'B-1',
+          widthFt: 15,
+          lengthFt: 50,
+        }),
+      ),
+  },
+  'post /api/rolls/deliveries': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post('/api/rolls/deliveries', {
+          turfProductId: w.aTurfProductId,
+          dyeLot: 'B-1',
+          rolls: [{ widthFt: 15, lengthFt: 50 }],
+        }),
+      ),
+  },
+  'get /api/rolls/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/rolls/${w.aRollId}`)),
+  },
+  'patch /api/rolls/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/rolls/${w.aRollId}`, { remainingFt: 1 })),
+  },
+  'get /api/jobs/:id/reservations': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/reservations`)),
+  },
+  'post /api/jobs/:id/reservations': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/jobs/${w.aJobId}/reservations`, {})),
+  },
+  'delete /api/jobs/:id/reservations': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/jobs/${w.aJobId}/reservations`)),
+  },
+  'post /api/jobs/:id/remnants': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/jobs/${w.aJobId}/remnants`, {
+          remnants: [{ rollId: w.aRollId, lengthFt: 5 }],
+        }),
+      ),
+  },
   'post /api/plans/preview': {
     kind: 'tenant',
     run: async (b) => {
@@ -431,6 +496,10 @@ async function snapshotOfA(w: World) {
     areas: await q(
       'SELECT id, name, plan, updated_at FROM job_areas WHERE company_id = ? ORDER BY id',
     ),
+    rolls: await q(
+      'SELECT id, remaining_ft, held_ft, location, updated_at FROM rolls WHERE company_id = ? ORDER BY id',
+    ),
+    reservations: await q('SELECT id FROM turf_reservations WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -465,6 +534,13 @@ describe('tenant isolation', () => {
     const [aTurf] = await turfProducts(a.client);
     const aPriceItem = await a.client.post('/api/price-book', alphaPriceItem).expect(201);
     await a.client.patch('/api/estimating-settings', { markupBasisPoints: 1234 }).expect(200);
+    const aRolls = await a.client
+      .post('/api/rolls/deliveries', {
+        turfProductId: aTurf!.id,
+        dyeLot: 'ALPHA-1',
+        rolls: [{ widthFt: 15, lengthFt: 100 }],
+      })
+      .expect(201);
     world = {
       a,
       b,
@@ -479,6 +555,7 @@ describe('tenant isolation', () => {
       aAreaId: aArea.id,
       bJobId: bJob.id,
       aTurfProductId: aTurf!.id,
+      aRollId: (aRolls.body as { data: { id: string }[] }).data[0]!.id,
     };
   });
 

@@ -4,7 +4,7 @@
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import { LayoutInputError, checkJobRequestSize, checkLayoutRequestSize } from '@seamwright/takeoff';
-import type { JobPlan, LayoutPlan } from '@seamwright/takeoff';
+import type { JobPlan, LayoutPlan, ReservationPlan, ReservationRequest } from '@seamwright/takeoff';
 import { AppError } from '../errors.js';
 import type { PlanKind, PlanOutcome, PlanTask } from './planner-task.js';
 
@@ -132,11 +132,23 @@ export class PlannerPool {
     return (await this.#run('job', body, options)) as JobPlan;
   }
 
+  /**
+   * Reserves a job's pieces on the rolls in stock (reserveTurf) in a worker thread. The caller
+   * builds the request from its own rows and keeps it within MAX_RESERVATION_PIECES and
+   * MAX_RESERVATION_ROLLS; the search's own work limit keeps it well inside the budget.
+   */
+  async reserveTurf(
+    request: ReservationRequest,
+    options: { budgetMs?: number } = {},
+  ): Promise<ReservationPlan> {
+    return (await this.#run('reserve', request, options)) as ReservationPlan;
+  }
+
   async #run(
     kind: PlanKind,
     body: unknown,
     options: { budgetMs?: number },
-  ): Promise<LayoutPlan | JobPlan> {
+  ): Promise<LayoutPlan | JobPlan | ReservationPlan> {
     if (this.#closed || this.#inFlight >= this.config.threads + this.config.maxQueue)
       throw this.#busy();
     const budgetMs = options.budgetMs ?? this.config.budgetMs;

@@ -2,10 +2,13 @@
 // class instances (LayoutInputError) do not survive structured cloning, so the worker sends
 // the error's fields and the pool rebuilds it.
 import type { MessagePort } from 'node:worker_threads';
-import type { JobPlan, LayoutPlan } from '@seamwright/takeoff';
+import type { JobPlan, LayoutPlan, ReservationPlan } from '@seamwright/takeoff';
 
-/** `layout`: one area (plan-layout's contract); `job`: several areas together (plan-job's). */
-export type PlanKind = 'layout' | 'job';
+/**
+ * `layout`: one area (plan-layout's contract); `job`: several areas together (plan-job's);
+ * `reserve`: a job's pieces on the rolls in stock (reserveTurf, a request the API built).
+ */
+export type PlanKind = 'layout' | 'job' | 'reserve';
 
 export interface PlanTask {
   readonly kind: PlanKind;
@@ -16,5 +19,5 @@ export interface PlanTask {
 }
 
 export type PlanOutcome =
-  | { readonly ok: true; readonly plan: LayoutPlan | JobPlan }
+  | { readonly ok: true; readonly plan: LayoutPlan | JobPlan | ReservationPlan }
   | { readonly ok: false; readonly inputError: { readonly path: string; readonly detail: string } };

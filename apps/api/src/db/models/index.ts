@@ -10,8 +10,11 @@ import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
 import { PasswordResetModel } from './password-reset.model.js';
 import { PriceBookItemModel } from './price-book-item.model.js';
+import { RollAllocationModel } from './roll-allocation.model.js';
+import { RollModel } from './roll.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
+import { TurfReservationModel } from './turf-reservation.model.js';
 import { UserModel } from './user.model.js';
 import { guardTenantModels } from '../tenant-guard.js';
 // JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
@@ -28,8 +31,11 @@ export {
   MembershipModel,
   PasswordResetModel,
   PriceBookItemModel,
+  RollAllocationModel,
+  RollModel,
   SessionModel,
   SiteModel,
+  TurfReservationModel,
   UserModel,
 };
 
@@ -47,6 +53,9 @@ const allModels = [
   SessionModel,
   PriceBookItemModel,
   EstimatingSettingsModel,
+  RollModel,
+  TurfReservationModel,
+  RollAllocationModel,
 ] as const;
 
 /**

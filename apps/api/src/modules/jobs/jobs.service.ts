@@ -15,6 +15,7 @@ import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import { findSite } from '../sites/sites.repository.js';
+import { applyJobStatusEffects } from './job-status-effects.js';
 import type { JobRow } from './jobs.repository.js';
 import {
   createJob,
@@ -144,6 +145,7 @@ export function createJobsService(sequelize: Sequelize) {
           },
           tx,
         );
+      if (changes.status !== undefined) await applyJobStatusEffects(ctx, id, changes.status, tx);
       if (changes.status !== undefined)
         await recordAuditEvent(
           ctx,
