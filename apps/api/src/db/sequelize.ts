@@ -27,7 +27,31 @@ export function createSequelize(db: DbOptions): Sequelize {
 /** An open transaction, passed from services to repositories (services never touch Sequelize). */
 export type Tx = Transaction;
 
-/** Runs `work` in one transaction: all of it commits or none of it does. */
-export function inTransaction<T>(sequelize: Sequelize, work: (tx: Tx) => Promise<T>): Promise<T> {
-  return sequelize.transaction((tx) => work(tx));
+/** MariaDB's "deadlock found" (ER_LOCK_DEADLOCK): the server rolled the transaction back. */
+const deadlockErrno = 1213;
+/** Attempts in all when MariaDB picks the transaction as a deadlock's victim. */
+const deadlockAttempts = 3;
+
+export function isDeadlock(error: unknown): boolean {
+  const parent = (error as { parent?: { errno?: number } } | null)?.parent;
+  return parent?.errno === deadlockErrno;
+}
+
+/**
+ * Runs `work` in one transaction: all of it commits or none of it does. A transaction that
+ * MariaDB rolls back to break a deadlock is run again from the start (its work touched only the
+ * database, which the rollback undid), so two requests racing for the same rows never see a
+ * 500 for it. `work` must not have effects outside the database before it returns.
+ */
+export async function inTransaction<T>(
+  sequelize: Sequelize,
+  work: (tx: Tx) => Promise<T>,
+): Promise<T> {
+  for (let attempt = 1; ; attempt += 1) {
+    try {
+      return await sequelize.transaction((tx) => work(tx));
+    } catch (error) {
+      if (!isDeadlock(error) || attempt >= deadlockAttempts) throw error;
+    }
+  }
 }
