@@ -1,7 +1,7 @@
 // Purpose: `npm test` — set up a separate test MariaDB, then typecheck, lint, unit tests, API
 // tests against the real database, and end-to-end tests in Debian's Chromium; exits non-zero on
 // any failure and ends with one summary line.
-// Usage: pnpm exec tsx scripts/run-tests.ts [--only=typecheck,lint,unit,api,e2e] (normally
+// Usage: pnpm exec tsx scripts/run-tests.ts [--only=typecheck,lint,unit,api,bundle,e2e] (normally
 // through `npm test`; `--only` runs just the named steps, for a quick check while working).
 // Safe in production? It only touches the git-ignored .data/test and .tmp folders.
 import { rmSync } from 'node:fs';
@@ -22,7 +22,8 @@ import {
   zeroCounts,
   type Counts,
 } from './lib/test-report.js';
-import { buildWebIfChanged } from './lib/web-build.js';
+import { routeWeights } from './lib/bundle-budget.js';
+import { buildWebIfChanged, webDistDir } from './lib/web-build.js';
 
 const settings = instances.test;
 const e2eDatabase = 'seamwright_e2e';
@@ -34,7 +35,7 @@ ensureDebianPackages('chromium', ['chromium', 'fonts-liberation']);
 const db = await startMariadb('test', settings.db.port);
 ensureDatabase(db, settings.db);
 
-const stepKeys = ['typecheck', 'lint', 'unit', 'api', 'e2e'] as const;
+const stepKeys = ['typecheck', 'lint', 'unit', 'api', 'bundle', 'e2e'] as const;
 type StepKey = (typeof stepKeys)[number];
 const onlyArg = process.argv.find((arg) => arg.startsWith('--only='));
 const chosen = new Set(onlyArg ? onlyArg.slice('--only='.length).split(',') : stepKeys);
@@ -85,6 +86,16 @@ await step('typecheck', 'typecheck', () => runStep('pnpm', ['run', 'typecheck'])
 await step('lint', 'lint and format', () => runStep('pnpm', ['run', 'lint']) === 0);
 await step('unit', 'unit tests', () => vitest(['unit', 'web'], 'unit.json'));
 await step('api', 'API tests (MariaDB)', () => vitest(['api'], 'api.json'));
+await step('bundle', 'web build size budget', () => {
+  if (!buildWebIfChanged()) return false;
+  const weights = routeWeights(webDistDir);
+  for (const w of weights)
+    say(
+      'bundle',
+      `${w.kb > w.budgetKb ? 'OVER' : 'ok  '} ${w.kb.toFixed(1).padStart(6)} KB gzip (budget ${w.budgetKb}) ${w.route}`,
+    );
+  return weights.length > 0 && weights.every((w) => w.kb <= w.budgetKb);
+});
 await step('e2e', 'end-to-end tests (Chromium)', async () => {
   if (!buildWebIfChanged()) return false;
   const e2eDb = { ...settings.db, database: e2eDatabase };

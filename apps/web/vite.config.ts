@@ -24,6 +24,8 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     emptyOutDir: true,
+    // dist/.vite/manifest.json: which chunks each route loads, for the size budget in npm test.
+    manifest: true,
     rolldownOptions: {
       output: {
         codeSplitting: {
