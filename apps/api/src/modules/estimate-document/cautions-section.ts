@@ -29,6 +29,8 @@ function writeCaution(layout: Layout, caution: EstimateDocumentCaution): void {
   const width = layout.right - pad - textX;
   const title = `CAUTION  ·  ${caution.title}`;
   const body = caution.text.trim();
+  // The pointer ends every caution once, also when the text given already carries it.
+  const deferral = body.includes(DEFER_TO_LOCAL_PRACTICE) ? null : DEFER_TO_LOCAL_PRACTICE;
   const styles = {
     title: { font: 'bold', size: 10 } as const,
     body: { size: 9, lineGap: 1.2 } as const,
@@ -37,7 +39,7 @@ function writeCaution(layout: Layout, caution: EstimateDocumentCaution): void {
   const heights = [
     measureText(layout, title, width, styles.title),
     measureText(layout, body, width, styles.body),
-    measureText(layout, DEFER_TO_LOCAL_PRACTICE, width, styles.deferral),
+    deferral ? measureText(layout, deferral, width, styles.deferral) : 0,
   ];
   const height = heights.reduce((sum, h) => sum + h, 0) + 2 * pad + 6;
   ensureSpace(layout, height + 8);
@@ -48,7 +50,7 @@ function writeCaution(layout: Layout, caution: EstimateDocumentCaution): void {
   let y = top + pad;
   y += textAt(layout, title, textX, y, width, styles.title) + 3;
   y += textAt(layout, body, textX, y, width, styles.body) + 3;
-  textAt(layout, DEFER_TO_LOCAL_PRACTICE, textX, y, width, styles.deferral);
+  if (deferral) textAt(layout, deferral, textX, y, width, styles.deferral);
   layout.y = top + height + 8;
 }
 

@@ -94,11 +94,35 @@ function rowHeight(layout: Layout, columns: Column[], cells: string[]): number {
   return Math.max(...heights) + 2 * padding.y;
 }
 
-/** Writes the table at the cursor and leaves the cursor under its last row. */
+/** The table's whole height on one page. */
+export function linesTableHeight(
+  layout: Layout,
+  lines: readonly EstimateDocumentLine[],
+  currency: string,
+): number {
+  const columns = columnsFor(layout.width);
+  const headHeight = measureText(layout, 'Qty', 100, headStyle) + 2 * padding.y;
+  return lines.reduce(
+    (sum, line) =>
+      sum +
+      rowHeight(
+        layout,
+        columns,
+        columns.map((column) => column.cell(line, currency)),
+      ),
+    headHeight,
+  );
+}
+
+/**
+ * Writes the table at the cursor and leaves the cursor under its last row; on a new page
+ * it first writes `continued` ("Option 2 of 2: … (continued)") and the column heads again.
+ */
 export function writeLinesTable(
   layout: Layout,
   lines: readonly EstimateDocumentLine[],
   currency: string,
+  continued: string,
 ): void {
   const { doc } = layout;
   const columns = columnsFor(layout.width);
@@ -111,6 +135,8 @@ export function writeLinesTable(
     const height = rowHeight(layout, columns, cells);
     if (layout.y + height > layout.bottom) {
       newPage(layout);
+      const style = { font: 'semibold', size: 10, color: ink.muted } as const;
+      layout.y += textAt(layout, continued, layout.left, layout.y, layout.width, style) + 4;
       writeHead(layout, columns);
     }
     // Every other row is shaded very lightly: a reading aid that survives a grey print.

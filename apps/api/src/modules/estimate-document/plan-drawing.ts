@@ -10,6 +10,7 @@ import { fillPiece, pieceFill, polygonPath } from './piece-fills.js';
 import { fitPlan, planPoints } from './plan-frame.js';
 import type { PlanFrame } from './plan-frame.js';
 import { edgeLengths, grainArrow, scaleAndNorth } from './plan-marks.js';
+import { drawWalkwayBand } from './walkway-band.js';
 
 /** Room around the plan for the side lengths printed outside the outline. */
 const labelInset = 26;
@@ -57,26 +58,14 @@ function drawCuts(layout: Layout, area: EstimateDocumentArea, frame: PlanFrame):
 }
 
 function drawWalkways(layout: Layout, area: EstimateDocumentArea, frame: PlanFrame): void {
+  const rings = ringsOf(area);
   const { doc } = layout;
-  for (const path of area.trafficPaths ?? []) {
-    const points = path.points.map(frame.toPage);
-    const first = points[0];
-    if (!first) continue;
-    doc.save().lineCap('round').lineJoin('round');
-    const trace = (): void => {
-      doc.moveTo(first[0], first[1]);
-      for (const [x, y] of points.slice(1)) doc.lineTo(x, y);
-    };
-    trace();
-    doc
-      .lineWidth(path.widthFt * frame.scale)
-      .strokeOpacity(0.55)
-      .strokeColor('#ffffff')
-      .stroke();
-    trace();
-    doc.strokeOpacity(1).lineWidth(0.8).dash(4, { space: 2 }).strokeColor(ink.muted).stroke();
-    doc.restore();
-  }
+  doc.save();
+  // Only the part inside the area is walked on turf.
+  if (rings.length > 0) clipToArea(doc, rings, frame);
+  for (const path of area.trafficPaths ?? [])
+    drawWalkwayBand(doc, path.points.map(frame.toPage), path.widthFt * frame.scale);
+  doc.restore();
 }
 
 function drawSeams(layout: Layout, area: EstimateDocumentArea, frame: PlanFrame): void {

@@ -17,6 +17,7 @@ import { fillPiece, pieceFill } from './piece-fills.js';
 import { drawPlan, planFooterHeight } from './plan-drawing.js';
 import { fitPlan, planPoints } from './plan-frame.js';
 import { grainArrow } from './plan-marks.js';
+import { drawWalkwayBand } from './walkway-band.js';
 
 type Units = EstimateDocumentInput['units'];
 
@@ -76,8 +77,8 @@ function writeKey(layout: Layout, area: EstimateDocumentArea, units: Units): voi
   let x = layout.left;
   const sample = (draw: () => void, label: string): void => {
     draw();
-    textAt(layout, label, x + 30, layout.y, 110, { size: 8.5 });
-    x += 118;
+    textAt(layout, label, x + 30, layout.y, 70, { size: 8.5 });
+    x += 101;
   };
   sample(
     () =>
@@ -116,6 +117,19 @@ function writeKey(layout: Layout, area: EstimateDocumentArea, units: Units): voi
         .restore(),
     'edge of the area',
   );
+  if ((area.trafficPaths ?? []).length > 0)
+    sample(
+      () =>
+        drawWalkwayBand(
+          doc,
+          [
+            [x, y],
+            [x + 24, y],
+          ],
+          9,
+        ),
+      'walkway',
+    );
   layout.y += keyRow;
 }
 

@@ -1,9 +1,17 @@
 // The priced part of page 1: each tier's lines and totals, then notes, validity and the small
 // print (the rounding rule and the terms). Several tiers are options; the customer picks one.
 import { formatDocumentDate, formatMoney } from './document-format.js';
-import { ensureSpace, heading, ink, measureText, paragraph, textAt } from './document-layout.js';
+import {
+  ensureSpace,
+  heading,
+  ink,
+  measureText,
+  newPage,
+  paragraph,
+  textAt,
+} from './document-layout.js';
 import type { Layout } from './document-layout.js';
-import { writeLinesTable } from './lines-table.js';
+import { linesTableHeight, writeLinesTable } from './lines-table.js';
 import type { EstimateDocumentInput, EstimateDocumentTier } from './estimate-document.types.js';
 
 interface TotalRow {
@@ -23,14 +31,20 @@ function totalRows(tier: EstimateDocumentTier): TotalRow[] {
   ];
 }
 
+const totalsWidth = 250;
+
+function totalsHeights(layout: Layout, rows: readonly TotalRow[]): number[] {
+  return rows.map(
+    (row) => measureText(layout, row.label, totalsWidth, { size: row.strong ? 12 : 10 }) + 4,
+  );
+}
+
 function writeTotals(layout: Layout, tier: EstimateDocumentTier, currency: string): void {
   const { doc } = layout;
-  const width = 250;
+  const width = totalsWidth;
   const x = layout.right - width;
   const rows = totalRows(tier);
-  const heights = rows.map(
-    (row) => measureText(layout, row.label, width, { size: row.strong ? 12 : 10 }) + 4,
-  );
+  const heights = totalsHeights(layout, rows);
   ensureSpace(layout, heights.reduce((sum, h) => sum + h, 0) + 10);
   layout.y += 4;
   rows.forEach((row, index) => {
@@ -74,8 +88,17 @@ export function writeTiers(layout: Layout, input: EstimateDocumentInput): void {
       8,
     );
   input.tiers.forEach((tier, index) => {
-    heading(layout, tierHeading(tier, index, count), 60, 12);
-    writeLinesTable(layout, tier.lines, input.currency);
+    const title = tierHeading(tier, index, count);
+    // A tier that fits on one page is never split: it starts on the next page instead.
+    const height =
+      measureText(layout, title, layout.width, { font: 'bold', size: 12 }) +
+      4 +
+      linesTableHeight(layout, tier.lines, input.currency) +
+      totalsHeights(layout, totalRows(tier)).reduce((sum, h) => sum + h, 0) +
+      20;
+    if (layout.y + height > layout.bottom && height <= layout.bottom - layout.top) newPage(layout);
+    heading(layout, title, 60, 12);
+    writeLinesTable(layout, tier.lines, input.currency, `${title} (continued)`);
     writeTotals(layout, tier, input.currency);
   });
 }
