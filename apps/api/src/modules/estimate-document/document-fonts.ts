@@ -1,8 +1,9 @@
 // The document's fonts ship with the app: Source Sans 3 from npm (@fontsource/source-sans-3,
-// SIL Open Font License), read by pdfkit's fontkit from the package's WOFF files. Paths are
-// resolved through the package, never as machine paths, and each file is read once per thread.
+// SIL Open Font License), from the package's WOFF files. Paths are resolved through the
+// package, never as machine paths; each file is read and unpacked once per thread.
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { woffToSfnt } from './woff-to-sfnt.js';
 
 const require = createRequire(import.meta.url);
 
@@ -23,11 +24,11 @@ export function documentFontPath(font: DocumentFont): string {
   return require.resolve(`@fontsource/source-sans-3/files/${documentFonts[font]}.woff`);
 }
 
-/** The bytes of one face, read on first use. */
+/** One face as a TrueType/OpenType font (unpacked from its WOFF file on first use). */
 export function documentFontData(font: DocumentFont): Buffer {
   let data = loaded.get(font);
   if (!data) {
-    data = readFileSync(documentFontPath(font));
+    data = woffToSfnt(readFileSync(documentFontPath(font)));
     loaded.set(font, data);
   }
   return data;

@@ -2,7 +2,7 @@
 // breaks a page by itself; sections ask `ensureSpace` first and the page breaks only between
 // blocks we chose, never inside a table row or a caution.
 import PDFDocument from 'pdfkit';
-import { documentFontData, documentFonts, documentFontPath } from './document-fonts.js';
+import { documentFontData, documentFonts } from './document-fonts.js';
 import type { DocumentFont } from './document-fonts.js';
 
 /** US Letter, in points (72 per inch). */
@@ -38,13 +38,12 @@ export function createLayout(title: string, author: string): Layout {
     size: [pageSize.width, pageSize.height],
     margin: 0,
     bufferPages: true,
-    // The first face is ours, so pdfkit never loads its built-in Helvetica.
-    font: documentFontPath('regular'),
     info: { Title: title, Author: author, Creator: 'Seamwright' },
     lang: 'en-US',
   });
   for (const font of Object.keys(documentFonts) as DocumentFont[])
     doc.registerFont(font, documentFontData(font));
+  doc.font('regular');
   return {
     doc,
     y: margin.top,
