@@ -39,6 +39,7 @@ export {
   DocumentPool,
   closeDefaultDocumentPool,
   defaultDocumentPoolConfig,
+  documentCancellationNotice,
   renderEstimatePdf,
 } from './modules/estimate-document/index.js';
 export type * from './modules/estimate-document/estimate-document.types.js';

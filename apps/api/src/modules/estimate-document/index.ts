@@ -7,6 +7,7 @@ import type { EstimateDocumentInput } from './estimate-document.types.js';
 export { DocumentPool, defaultDocumentPoolConfig } from './document-pool.js';
 export type { DocumentPoolConfig } from './document-pool.js';
 export { formatMoney, formatDocumentDate } from './document-format.js';
+export { documentCancellationNotice } from './cancellation-notice-input.js';
 export type * from './estimate-document.types.js';
 
 /**

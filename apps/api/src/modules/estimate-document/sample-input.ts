@@ -4,6 +4,7 @@
 import { cancellationNotice } from '@seamwright/domain';
 import { cautionsFor, planLayout } from '@seamwright/takeoff';
 import type { LayoutPoint, LayoutRequestInput } from '@seamwright/takeoff';
+import { documentCancellationNotice } from './cancellation-notice-input.js';
 import type {
   EstimateDocumentArea,
   EstimateDocumentInput,
@@ -168,14 +169,10 @@ export function sampleEstimateDocumentInput(
       rollWeightLb: 980,
     }).map((caution) => ({ title: caution.title, text: caution.body })),
     cancellationNotice: options.cancellation
-      ? {
-          endsOnText:
-            'You may cancel this sale until midnight at the end of Thursday, March 11, 2027.',
-          heading: notice.heading,
-          statement: notice.statement,
-          body: notice.paragraphs,
-          formLines: notice.formLines,
-        }
+      ? documentCancellationNotice(
+          notice,
+          'You may cancel this sale until midnight at the end of Thursday, March 11, 2027.',
+        )
       : null,
     units: 'imperial',
   };
