@@ -23,8 +23,9 @@ export interface DocumentPoolConfig {
 
 /**
  * One thread is plenty: the sample document with plans renders in about 0.5–0.7 s on the
- * shared 2-core machine under load, once the thread is warm. The budget is generous because a fresh thread also loads pdfkit and the fonts (about
- * a second on a busy 2-core machine); a document past it is a bug, not a big estimate.
+ * shared 2-core machine under load, once the thread is warm. The budget is generous because a
+ * fresh thread also loads pdfkit and the fonts (a few seconds on that machine); a document
+ * past it is a bug, not a big estimate.
  */
 export const defaultDocumentPoolConfig: DocumentPoolConfig = {
   threads: 1,
