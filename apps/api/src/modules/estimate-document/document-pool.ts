@@ -39,6 +39,15 @@ const workerNiceIncrement = 10;
 /** A document needs far less; a runaway one fails alone instead of taking the process down. */
 const workerHeapMb = 256;
 
+/**
+ * Longest a document may wait for a thread: two budgets (the one ahead finishes or is
+ * stopped), but never less than a fresh thread needs to start under tsx, which loads the
+ * takeoff package and pdfkit (up to about 8 s measured on the shared 2-core machine).
+ */
+function queueWaitMs(budgetMs: number): number {
+  return Math.max(2 * budgetMs, 20_000);
+}
+
 function workerExecArgv(): string[] {
   const inherited = process.execArgv;
   if (inherited.some((arg) => arg.includes('tsx'))) return inherited;
@@ -93,8 +102,7 @@ export class DocumentPool {
     const controller = new AbortController();
     const { port1, port2 } = new MessageChannel();
     let started = false;
-    // Waiting for a thread: two budgets (the one ahead finishes or is stopped) and a thread start.
-    let timer = setTimeout(() => controller.abort(), 2 * budgetMs + 5_000);
+    let timer = setTimeout(() => controller.abort(), queueWaitMs(budgetMs));
     port1.once('message', () => {
       started = true;
       clearTimeout(timer);
