@@ -11,6 +11,8 @@
  * - `createLogger(level, destination?)` → the pino logger with the API's redaction rules
  * - `getJobTakeoff(ctx, jobId)`, `listJobTurfPieces(ctx, jobId)` → a job's takeoff and saved
  *   plan pieces (modules/areas/job-takeoff.service.ts), for tests and scripts
+ * - `renderEstimatePdf(input, pool?)` → the estimate document's PDF, rendered in a worker
+ *   thread (modules/estimate-document); `sampleEstimateDocumentInput()` is invented demo input
  */
 export { createApp } from './app.js';
 export type { AppDeps } from './app.js';
@@ -34,3 +36,13 @@ export { executeSql, selectRows } from './db/sql.js';
 export { getJobTakeoff, listJobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export type { JobTurfPiece, JobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export { decoyPasswordFor, hashPassword } from './passwords.js';
+export {
+  DocumentPool,
+  closeDefaultDocumentPool,
+  defaultDocumentPoolConfig,
+  documentCancellationNotice,
+  renderEstimatePdf,
+} from './modules/estimate-document/index.js';
+export type * from './modules/estimate-document/estimate-document.types.js';
+export type { DocumentPoolConfig } from './modules/estimate-document/index.js';
+export { sampleEstimateDocumentInput } from './modules/estimate-document/sample-input.js';
