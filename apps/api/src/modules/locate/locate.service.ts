@@ -4,8 +4,8 @@ import {
   allowedLocateStatusMoves,
   computeLocateTicket,
   effectiveLocateStatus,
+  finalJobStatuses,
 } from '@seamwright/domain';
-import type { JobStatus } from '@seamwright/domain';
 import { jobStatusLabels } from '@seamwright/shared';
 import type {
   CreateLocateTicketData,
@@ -27,9 +27,6 @@ import {
   updateLocateTicketStatus,
 } from './locate.repository.js';
 import type { LocateTicketRecord } from './locate.repository.js';
-
-/** A job that is over takes no new tickets and no status changes. */
-const closedJobStatuses: readonly JobStatus[] = ['closed', 'lost', 'cancelled'];
 
 /** Clocks of phones and offices drift: a call "now" may arrive stamped a little ahead. */
 const futureAllowanceMs = 2 * 60 * 1000;
@@ -58,11 +55,14 @@ export function toLocateTicketView(record: LocateTicketRecord, now: Date): Locat
   };
 }
 
-/** Locks the job inside `tx`; 404 when missing, 409 naming its status when it is over. */
+/**
+ * Locks the job inside `tx`; 404 when missing, 409 naming its status when it is over (closed,
+ * lost or cancelled: no new tickets, no status changes).
+ */
 async function lockOpenJob(ctx: RequestContext, jobId: string, tx: Tx): Promise<void> {
   const job = await lockJob(ctx, jobId, tx);
   if (!job) throw notFound('Job');
-  if (!closedJobStatuses.includes(job.status)) return;
+  if (!finalJobStatuses.includes(job.status)) return;
   const message = `The job is ${jobStatusLabels[job.status].toLowerCase()}: its locate tickets can no longer change`;
   throw new AppError('CONFLICT', message, { errors: [{ path: 'status', message }] });
 }
@@ -83,11 +83,14 @@ export function createLocateService(deps: ServiceDeps) {
   }
 
   async function listForJob(ctx: RequestContext, jobId: string): Promise<LocateTicketView[]> {
-    if (!(await findJob(ctx, jobId))) throw notFound('Job');
+    // Read together: one round trip; the job decides between 404 and the list.
+    const [job, records] = await Promise.all([
+      findJob(ctx, jobId),
+      listLocateTicketsOfJob(ctx, jobId),
+    ]);
+    if (!job) throw notFound('Job');
     const now = new Date();
-    return (await listLocateTicketsOfJob(ctx, jobId)).map((record) =>
-      toLocateTicketView(record, now),
-    );
+    return records.map((record) => toLocateTicketView(record, now));
   }
 
   async function create(
