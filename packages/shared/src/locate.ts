@@ -57,6 +57,8 @@ export interface LocateTicketView {
     isDefault: boolean;
     title: string;
     source: string;
+    /** How far ahead of digging a notice may be given (for `checkDigDate`); null = no limit. */
+    maxAhead: { days: number; unit: 'calendar' | 'business' } | null;
     /** The counting in words ("Notice Sat 2025-09-06 10:00: … → earliest dig …"). */
     explanation: string;
   };

@@ -108,6 +108,7 @@ describe('locate tickets', () => {
     ['a date-time in the future', { number: 'F-1', calledAt: '2999-01-01T00:00:00Z' }, 'calledAt'],
     ['an unparsable date-time', { number: 'F-2', calledAt: 'next Tuesday' }, 'calledAt'],
     ['a date without a time', { number: 'F-3', calledAt: '2025-06-03' }, 'calledAt'],
+    ['a day that does not exist', { number: 'F-4', calledAt: '2025-02-30T10:00:00Z' }, 'calledAt'],
     ['no number', { calledAt: minutesAgo(1) }, 'number'],
   ])('refuses %s with 400 naming the field and saves nothing', async (_what, body, path) => {
     const before = (await ticketRows(jobId)).length;

@@ -1,9 +1,9 @@
 // Whether a booking may start digging on a ticket: not before the earliest lawful start, not
 // after the ticket expires, and not later than the notice covers (a notice given too early).
-import { addCalendarDays, localDateOf } from '../calendar/calendar.js';
+import { addCalendarDays, localDateOf, localMinuteOf } from '../calendar/calendar.js';
 import { dayLabel, timeLabel } from './format.js';
-import { localMinuteOf } from '../calendar/calendar.js';
 import type { LocateTicketTimes } from './locate-ticket.js';
+import type { LocateDays } from './rules.js';
 
 export type DigDateCheck =
   | { ok: true }
@@ -19,10 +19,10 @@ function localWords(instant: Date, timeZone: string): string {
 }
 
 export function checkDigDate(
-  ticket: Pick<
-    LocateTicketTimes,
-    'earliestDigAt' | 'expiresAt' | 'latestStartAt' | 'maxAhead' | 'timeZone'
-  >,
+  ticket: Pick<LocateTicketTimes, 'earliestDigAt' | 'expiresAt' | 'latestStartAt' | 'timeZone'> & {
+    /** The rule's lead limit, for the advice on when to call again. */
+    maxAhead?: LocateDays | null;
+  },
   bookingStartInstant: Date | string,
 ): DigDateCheck {
   const start = new Date(bookingStartInstant);

@@ -47,6 +47,7 @@ export function toLocateTicketView(record: LocateTicketRecord, now: Date): Locat
       isDefault: record.rule.isDefault,
       title: record.rule.title,
       source: record.rule.source,
+      maxAhead: record.rule.maxAhead,
       explanation: record.explanation,
     },
     timeZone: record.timeZone,
