@@ -11,6 +11,7 @@ import { registerEstimatingSettingsRoutes } from './modules/estimating-settings/
 import { registerHealthRoutes } from './modules/health/health.routes.js';
 import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
 import { registerJobsRoutes } from './modules/jobs/jobs.routes.js';
+import { registerLocateRoutes } from './modules/locate/locate.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
@@ -34,6 +35,7 @@ export function registerApiRoutes(
   registerJobsRoutes(routes, deps);
   registerAreasRoutes(routes, deps);
   registerStockRoutes(routes, deps);
+  registerLocateRoutes(routes, deps);
   registerAuditRoutes(routes);
   registerPlansRoutes(routes, deps);
   registerPriceBookRoutes(routes, deps);

@@ -1,3 +1,5 @@
 // @seamwright/domain: pure business rules (no I/O, no clock, no environment).
 export * from './job-lifecycle.js';
+export * from './calendar/index.js';
 export * from './cancellation/index.js';
+export * from './locate/index.js';

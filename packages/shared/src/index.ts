@@ -15,3 +15,4 @@ export * from './price-book.js';
 export * from './estimating-settings.js';
 export * from './areas.js';
 export * from './stock.js';
+export * from './locate.js';

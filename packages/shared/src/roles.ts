@@ -33,6 +33,8 @@ export const actions = [
   'estimating.manage',
   'inventory.read',
   'inventory.write',
+  'locate.read',
+  'locate.write',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -64,6 +66,10 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // Roll stock carries no money; crew leads look up rolls and lots in the yard.
   'inventory.read': everyone,
   'inventory.write': ['owner', 'office'],
+  // Locate (811) tickets carry no money; crew leads must see the ticket and its dig window on
+  // site, the office calls them in.
+  'locate.read': ['owner', 'office', 'crew_lead'],
+  'locate.write': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

@@ -60,6 +60,11 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 4,
     urls: (ids) => [`/api/jobs/${ids.jobId}/reservations`],
   },
+  // The job (another company's is a 404) and its tickets, read in parallel.
+  '/api/jobs/:id/locate-tickets': {
+    budget: 3,
+    urls: (ids) => [`/api/jobs/${ids.jobId}/locate-tickets`],
+  },
 };
 
 interface Ids {
@@ -96,6 +101,12 @@ describe('statement budget of signed-in requests', () => {
       })
       .expect(201);
     const rollId = (rolls.body as { data: { id: string }[] }).data[0]!.id;
+    await owner
+      .post(`/api/jobs/${jobId}/locate-tickets`, {
+        number: 'BUDGET-811',
+        calledAt: new Date(Date.now() - 60_000).toISOString(),
+      })
+      .expect(201);
     ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId };
   });
 
@@ -115,6 +126,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id/areas',
       '/api/jobs/:id/takeoff',
       '/api/jobs/:id/reservations',
+      '/api/jobs/:id/locate-tickets',
     ]);
   });
 

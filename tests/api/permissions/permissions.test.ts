@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { permissionTable } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import { areaBody } from '../../fixtures/areas.js';
 import { createCustomer, createJob, createSite, signUpTeam } from '../../fixtures/factories.js';
@@ -100,5 +101,29 @@ describe('permissions per role', () => {
     await bookkeeper.client.del(`/api/areas/${areaId}`).expect(403);
     await crew.client.post(`/api/jobs/${jobId}/areas`, areaBody()).expect(403);
     await office.client.del(`/api/areas/${areaId}`).expect(204);
+  });
+
+  it('locate tickets: owners and office record them, crew leads read them on site, bookkeepers get 403', async () => {
+    expect(permissionTable['locate.read']).toEqual(['owner', 'office', 'crew_lead']);
+    expect(permissionTable['locate.write']).toEqual(['owner', 'office']);
+    const jobId = (await createJob(owner.client, customerId, siteId)).id;
+    const ticket = { number: 'PERM-811', calledAt: new Date(Date.now() - 60_000).toISOString() };
+    const made = await office.client.post(`/api/jobs/${jobId}/locate-tickets`, ticket).expect(201);
+    const ticketId = (made.body as { data: { id: string } }).data.id;
+    await owner.client.post(`/api/jobs/${jobId}/locate-tickets`, ticket).expect(201);
+    const read = await crew.client.get(`/api/jobs/${jobId}/locate-tickets`).expect(200);
+    expect(read.body.data).toHaveLength(2);
+    await owner.client.get(`/api/jobs/${jobId}/locate-tickets`).expect(200);
+    for (const res of [
+      await crew.client.post(`/api/jobs/${jobId}/locate-tickets`, ticket),
+      await crew.client.patch(`/api/locate-tickets/${ticketId}`, { status: 'clear' }),
+      await bookkeeper.client.get(`/api/jobs/${jobId}/locate-tickets`),
+      await bookkeeper.client.post(`/api/jobs/${jobId}/locate-tickets`, ticket),
+      await bookkeeper.client.patch(`/api/locate-tickets/${ticketId}`, { status: 'clear' }),
+    ]) {
+      expect(res.status).toBe(403);
+      expect(res.body.code).toBe('FORBIDDEN');
+    }
+    await office.client.patch(`/api/locate-tickets/${ticketId}`, { status: 'clear' }).expect(200);
   });
 });

@@ -32,6 +32,7 @@ interface World {
   bJobId: string;
   aTurfProductId: string;
   aRollId: string;
+  aLocateTicketId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -367,6 +368,25 @@ const probes: Record<string, Probe> = {
         }),
       ),
   },
+  'get /api/jobs/:id/locate-tickets': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/locate-tickets`)),
+  },
+  'post /api/jobs/:id/locate-tickets': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/jobs/${w.aJobId}/locate-tickets`, {
+          number: 'B-HIJACK',
+          calledAt: new Date(Date.now() - 60_000).toISOString(),
+        }),
+      ),
+  },
+  'patch /api/locate-tickets/:id': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.patch(`/api/locate-tickets/${w.aLocateTicketId}`, { status: 'clear' })),
+  },
   'post /api/plans/preview': {
     kind: 'tenant',
     run: async (b) => {
@@ -500,6 +520,9 @@ async function snapshotOfA(w: World) {
       'SELECT id, remaining_ft, held_ft, location, updated_at FROM rolls WHERE company_id = ? ORDER BY id',
     ),
     reservations: await q('SELECT id FROM turf_reservations WHERE company_id = ? ORDER BY id'),
+    locateTickets: await q(
+      'SELECT id, number, status, updated_at FROM locate_tickets WHERE company_id = ? ORDER BY id',
+    ),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -541,6 +564,12 @@ describe('tenant isolation', () => {
         rolls: [{ widthFt: 15, lengthFt: 100 }],
       })
       .expect(201);
+    const aTicket = await a.client
+      .post(`/api/jobs/${aJob.id}/locate-tickets`, {
+        number: 'ALPHA-811',
+        calledAt: new Date(Date.now() - 60_000).toISOString(),
+      })
+      .expect(201);
     world = {
       a,
       b,
@@ -556,6 +585,7 @@ describe('tenant isolation', () => {
       bJobId: bJob.id,
       aTurfProductId: aTurf!.id,
       aRollId: (aRolls.body as { data: { id: string }[] }).data[0]!.id,
+      aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
     };
   });
 

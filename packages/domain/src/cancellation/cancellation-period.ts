@@ -1,8 +1,8 @@
 // When does a buyer's right to cancel a sale end? Pure: the caller passes the moment of signing,
 // the company's time zone and region, where the sale was made and its price.
-import { businessDaysAfter } from './business-days.js';
-import type { CalendarDate } from './calendar.js';
-import { addCalendarDays, localDateOf, startOfLocalDay } from './calendar.js';
+import { businessDaysAfter } from '../calendar/business-days.js';
+import type { CalendarDate } from '../calendar/calendar.js';
+import { addCalendarDays, localDateOf, startOfLocalDay } from '../calendar/calendar.js';
 import { jurisdictionsOf } from './jurisdiction.js';
 import type { CancellationRule, SalePlace } from './rules.js';
 import { cancellationRules } from './rules.js';

@@ -1,8 +1,5 @@
 // The buyer's right to cancel (TRADE.md §8.2). Only the names other packages need are exported;
-// the calendar helpers stay inside.
-export { businessDaysAfter, isBusinessDay } from './business-days.js';
-export type { BusinessCalendar } from './business-days.js';
-export type { CalendarDate } from './calendar.js';
+// the shared day arithmetic is exported from ../calendar.
 export { cancellationPeriod, withinCancellationPeriod } from './cancellation-period.js';
 export type {
   CancellationInput,
@@ -10,8 +7,6 @@ export type {
   CoveredSale,
   UncoveredSale,
 } from './cancellation-period.js';
-export { holidayDate } from './holidays.js';
-export type { HolidayRule } from './holidays.js';
 export { jurisdictionsOf } from './jurisdiction.js';
 export { cancellationNotice, longCalendarDate } from './notice.js';
 export type { CancellationNotice, CancellationNoticeInput } from './notice.js';

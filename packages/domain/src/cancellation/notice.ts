@@ -5,7 +5,7 @@
 // state's law before relying on it.
 import { tz } from '@date-fns/tz';
 import { format, parseISO } from 'date-fns';
-import type { CalendarDate } from './calendar.js';
+import type { CalendarDate } from '../calendar/calendar.js';
 
 export interface CancellationNoticeInput {
   sellerName: string;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { businessDaysAfter, isBusinessDay } from './business-days.js';
-import { holidayDate } from './holidays.js';
+import { businessDaysAfter, isBusinessDay } from '../calendar/business-days.js';
+import { holidayDate } from '../calendar/holidays.js';
 import { jurisdictionsOf } from './jurisdiction.js';
 import { cancellationRules, ftcBusinessHolidays } from './rules.js';
 

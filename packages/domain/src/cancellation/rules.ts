@@ -2,8 +2,8 @@
 // jurisdiction-tagged data (TRADE.md §8.2). Legal values change: a change is a new entry with
 // its own `effectiveFrom`, and the old one gets an `effectiveUntil`, so an acceptance is always
 // judged by the rule in force on the day it was signed. Nothing here is legal advice.
-import type { CalendarDate } from './calendar.js';
-import type { HolidayRule } from './holidays.js';
+import type { CalendarDate } from '../calendar/calendar.js';
+import type { HolidayRule } from '../calendar/holidays.js';
 
 /** Where the buyer agreed to the sale. */
 export type SalePlace =

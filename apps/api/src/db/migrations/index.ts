@@ -1,5 +1,5 @@
 // The ordered list of migrations. Listed explicitly (no glob) so they load the same way under
-// tsx, vitest and any bundler; add new files at the end.
+// tsx, vitest and any bundler; add new files at the end, keeping the numbers in order.
 import { initialSchema } from './0001-initial-schema.js';
 import { rateLimitHits } from './0002-rate-limit-hits.js';
 import { tenantCompositeKeys } from './0004-tenant-composite-keys.js';
@@ -7,6 +7,7 @@ import { customerList } from './0006-customer-list.js';
 import { jobs } from './0007-jobs.js';
 import { priceBook } from './0008-price-book.js';
 import { jobAreas } from './0009-job-areas.js';
+import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
 import type { Migration } from './types.js';
 
@@ -18,5 +19,6 @@ export const migrations: Migration[] = [
   jobs,
   priceBook,
   jobAreas,
+  locateTickets,
   rollStock,
 ];

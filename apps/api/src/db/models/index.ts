@@ -5,6 +5,7 @@ import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
 import { JobModel } from './job.model.js';
 import { JobAreaModel } from './job-area.model.js';
+import { LocateTicketModel } from './locate-ticket.model.js';
 import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
@@ -28,6 +29,7 @@ export {
   InvitationModel,
   JobAreaModel,
   JobModel,
+  LocateTicketModel,
   MembershipModel,
   PasswordResetModel,
   PriceBookItemModel,
@@ -56,6 +58,7 @@ const allModels = [
   RollModel,
   TurfReservationModel,
   RollAllocationModel,
+  LocateTicketModel,
 ] as const;
 
 /**

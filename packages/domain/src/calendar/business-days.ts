@@ -1,16 +1,28 @@
 import type { CalendarDate } from './calendar.js';
 import { addCalendarDays, weekdayOf } from './calendar.js';
 import type { HolidayRule } from './holidays.js';
-import { isHoliday } from './holidays.js';
+import { holidayNameOf } from './holidays.js';
+
+/** Gives the holiday's name when `date` is one, else null (a dataset such as `date-holidays`). */
+export type HolidayLookup = (date: CalendarDate) => string | null;
 
 export interface BusinessCalendar {
   /** Weekdays that are never business days (0 = Sunday … 6 = Saturday). */
   closedWeekdays: readonly number[];
-  holidays: readonly HolidayRule[];
+  /** Holidays as rules (a statute's own list), or a lookup into a dataset. */
+  holidays: readonly HolidayRule[] | HolidayLookup;
+}
+
+/** The holiday `date` is in `calendar`, or null (weekends are not holidays). */
+export function holidayNameOn(date: CalendarDate, calendar: BusinessCalendar): string | null {
+  const { holidays } = calendar;
+  return typeof holidays === 'function' ? holidays(date) : holidayNameOf(date, holidays);
 }
 
 export function isBusinessDay(date: CalendarDate, calendar: BusinessCalendar): boolean {
-  return !calendar.closedWeekdays.includes(weekdayOf(date)) && !isHoliday(date, calendar.holidays);
+  return (
+    !calendar.closedWeekdays.includes(weekdayOf(date)) && holidayNameOn(date, calendar) === null
+  );
 }
 
 /**

@@ -46,3 +46,29 @@ export function startOfLocalDay(date: CalendarDate, timeZone: string): Date {
   const { year, month, day } = partsOf(date);
   return new Date(new TZDate(year, month - 1, day, 0, 0, 0, 0, timeZone).getTime());
 }
+
+/** The minute of the local day (0–1439) `instant` falls on in `timeZone`. */
+export function localMinuteOf(instant: Date, timeZone: string): number {
+  const local = new TZDate(instant.getTime(), timeZone);
+  return local.getHours() * 60 + local.getMinutes();
+}
+
+/**
+ * The instant of local wall-clock time `minute` (0–1440; 1440 is the next midnight) on `date` in
+ * `timeZone`. A time that a spring-forward gap skips comes out an hour later, as clocks show it.
+ */
+export function localInstantAt(date: CalendarDate, minute: number, timeZone: string): Date {
+  if (minute >= 1440) return startOfLocalDay(addCalendarDays(date, 1), timeZone);
+  const { year, month, day } = partsOf(date);
+  const local = new TZDate(
+    year,
+    month - 1,
+    day,
+    Math.floor(minute / 60),
+    minute % 60,
+    0,
+    0,
+    timeZone,
+  );
+  return new Date(local.getTime());
+}
