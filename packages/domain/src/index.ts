@@ -1,3 +1,4 @@
 // @seamwright/domain: pure business rules (no I/O, no clock, no environment).
 export * from './job-lifecycle.js';
 export * from './cancellation/index.js';
+export * from './estimates/index.js';
