@@ -33,3 +33,6 @@ export { executeSql, selectRows } from './db/sql.js';
 export { getJobTakeoff, listJobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export type { JobTurfPiece, JobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export { decoyPasswordFor, hashPassword } from './passwords.js';
+export { markEstimateSent } from './modules/estimates/estimate-sending.service.js';
+export { getEstimateForDocument } from './modules/estimates/estimate-document.service.js';
+export type { EstimateDocument } from './modules/estimates/estimate-document.service.js';

@@ -14,3 +14,4 @@ export * from './jobs.js';
 export * from './price-book.js';
 export * from './estimating-settings.js';
 export * from './areas.js';
+export * from './estimates.js';

@@ -31,6 +31,8 @@ export const actions = [
   'pricebook.read',
   'pricebook.write',
   'estimating.manage',
+  'estimates.read',
+  'estimates.write',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -59,6 +61,9 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'pricebook.read': ['owner', 'office', 'bookkeeper'],
   'pricebook.write': ['owner', 'office'],
   'estimating.manage': ['owner', 'office'],
+  // Estimates are money too: bookkeepers read them, crew leads never see them.
+  'estimates.read': ['owner', 'office', 'bookkeeper'],
+  'estimates.write': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

@@ -7,6 +7,7 @@ import { customerList } from './0006-customer-list.js';
 import { jobs } from './0007-jobs.js';
 import { priceBook } from './0008-price-book.js';
 import { jobAreas } from './0009-job-areas.js';
+import { estimates } from './0010-estimates.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -17,4 +18,5 @@ export const migrations: Migration[] = [
   jobs,
   priceBook,
   jobAreas,
+  estimates,
 ];

@@ -5,6 +5,7 @@ import { CompanyModel } from './company.model.js';
 import { CustomerModel } from './customer.model.js';
 import { JobModel } from './job.model.js';
 import { JobAreaModel } from './job-area.model.js';
+import { EstimateModel } from './estimate.model.js';
 import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
@@ -21,6 +22,7 @@ export {
   AuditEventModel,
   CompanyModel,
   CustomerModel,
+  EstimateModel,
   EstimatingSettingsModel,
   InvitationModel,
   JobAreaModel,
@@ -47,6 +49,7 @@ const allModels = [
   SessionModel,
   PriceBookItemModel,
   EstimatingSettingsModel,
+  EstimateModel,
 ] as const;
 
 /**
