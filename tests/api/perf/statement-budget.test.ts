@@ -53,6 +53,9 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   '/api/jobs/:id/areas': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/areas`] },
   // The job, its areas and the company's estimating settings, read in parallel.
   '/api/jobs/:id/takeoff': { budget: 4, urls: (ids) => [`/api/jobs/${ids.jobId}/takeoff`] },
+  // The job checked (another company's is a 404) and its versions, read in parallel.
+  '/api/jobs/:id/estimates': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/estimates`] },
+  '/api/estimates/:id': { budget: 2, urls: (ids) => [`/api/estimates/${ids.estimateId}`] },
 };
 
 interface Ids {
@@ -60,6 +63,7 @@ interface Ids {
   siteId: string;
   jobId: string;
   areaId: string;
+  estimateId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -79,7 +83,9 @@ describe('statement budget of signed-in requests', () => {
       .expect(201);
     const jobId = (job.body as { data: { id: string } }).data.id;
     const area = await createArea(owner, jobId);
-    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id };
+    const estimate = await owner.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
+    const estimateId = (estimate.body as { data: { id: string } }).data.id;
+    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, estimateId };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -97,6 +103,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id',
       '/api/jobs/:id/areas',
       '/api/jobs/:id/takeoff',
+      '/api/jobs/:id/estimates',
     ]);
   });
 

@@ -31,6 +31,7 @@ interface World {
   aAreaId: string;
   bJobId: string;
   aTurfProductId: string;
+  aEstimateId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -290,6 +291,34 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/takeoff`)),
   },
+  'get /api/jobs/:id/estimates': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/estimates`)),
+  },
+  'post /api/jobs/:id/estimates': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      await notFound(b.post(`/api/jobs/${w.aJobId}/estimates`, {}));
+      // A's turf product is unknown under B's own job too (checked before B's areas).
+      await notFound(
+        b.post(`/api/jobs/${w.bJobId}/estimates`, {
+          tiers: [{ name: 'Hijack', turfProductId: w.aTurfProductId }],
+        }),
+      );
+    },
+  },
+  'get /api/estimates/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/estimates/${w.aEstimateId}`)),
+  },
+  'patch /api/estimates/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/estimates/${w.aEstimateId}`, { notes: 'Hijacked' })),
+  },
+  'post /api/estimates/:id/revisions': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/revisions`, {})),
+  },
   'get /api/areas/:id': {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}`)),
@@ -431,6 +460,9 @@ async function snapshotOfA(w: World) {
     areas: await q(
       'SELECT id, name, plan, updated_at FROM job_areas WHERE company_id = ? ORDER BY id',
     ),
+    estimates: await q(
+      'SELECT id, version, status, notes, tiers, updated_at FROM estimates WHERE company_id = ? ORDER BY id',
+    ),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -465,6 +497,7 @@ describe('tenant isolation', () => {
     const [aTurf] = await turfProducts(a.client);
     const aPriceItem = await a.client.post('/api/price-book', alphaPriceItem).expect(201);
     await a.client.patch('/api/estimating-settings', { markupBasisPoints: 1234 }).expect(200);
+    const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
     world = {
       a,
       b,
@@ -479,6 +512,7 @@ describe('tenant isolation', () => {
       aAreaId: aArea.id,
       bJobId: bJob.id,
       aTurfProductId: aTurf!.id,
+      aEstimateId: aEstimate.body.data.id,
     };
   });
 
@@ -515,6 +549,7 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
     await world.a.client.get(`/api/jobs/${world.aJobId}`).expect(200);
     await world.a.client.get(`/api/areas/${world.aAreaId}`).expect(200);
+    await world.a.client.get(`/api/estimates/${world.aEstimateId}`).expect(200);
   });
 
   it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {

@@ -85,11 +85,16 @@ export async function buildEstimate(
     listAllPriceBookItems(ctx),
     companyRates(ctx),
   ]);
+  const items = book.map(toPricingItem);
+  const wanted: TierSpec[] = specs && specs.length > 0 ? [...specs] : [{ name: 'Standard' }];
+  // The request's own fields first: a product that is not there is a 404 naming it.
+  wanted.forEach((spec, index) => {
+    if (spec.turfProductId) turfItemFor(items, spec.turfProductId, `tiers.${index}.turfProductId`);
+  });
   if (areas.length === 0) {
     const message = 'The job has no areas yet: draw at least one area before making an estimate';
     throw new AppError('CONFLICT', message, { errors: [{ path: 'areas', message }] });
   }
-  const items = book.map(toPricingItem);
   const measures = {
     areaSqFt: Math.round(areas.reduce((sum, a) => sum + a.areaSqFt, 0) * 100) / 100,
     seamFt:
@@ -97,11 +102,9 @@ export async function buildEstimate(
         areas.reduce((sum, a) => sum + a.plan.seams.sideFt + a.plan.seams.buttFt, 0) * 100,
       ) / 100,
   };
-  const wanted: TierSpec[] = specs && specs.length > 0 ? [...specs] : [{ name: 'Standard' }];
   const warnings = new Set<string>();
-  const tiers = wanted.map((spec, index): EstimateTierInput => {
+  const tiers = wanted.map((spec): EstimateTierInput => {
     const productId = spec.turfProductId ?? undefined;
-    if (productId !== undefined) turfItemFor(items, productId, `tiers.${index}.turfProductId`);
     const priced = priceTakeoff(
       {
         lines: takeoff.lines,
