@@ -4,7 +4,13 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { EstimateView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
-import { createEstimate, estimateRows, expectConsistentTier } from '../../fixtures/estimates.js';
+import {
+  activityActions,
+  createEstimate,
+  errorPaths,
+  estimateRows,
+  expectConsistentTier,
+} from '../../fixtures/estimates.js';
 import { createCustomer, createJob, createSite, signUpCompany } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
@@ -23,7 +29,9 @@ describe('PATCH /api/estimates/:id', () => {
     return createEstimate(owner.client, jobId);
   };
   const patch = async (id: string, body: object, status = 200) =>
-    (await owner.client.patch(`/api/estimates/${id}`, body).expect(status)).body;
+    (await owner.client.patch(`/api/estimates/${id}`, body).expect(status)).body as {
+      data: EstimateView;
+    };
 
   beforeAll(async () => {
     owner = await signUpCompany(testApp().app);
@@ -49,7 +57,7 @@ describe('PATCH /api/estimates/:id', () => {
         ],
       },
     });
-    const view = body.data as EstimateView;
+    const view = body.data;
     // Worked by hand: 452.25 × $2.76 = $1,248.21; 6.5 × $43.70 = $284.05; $150.00 untaxed.
     // Subtotal $1,682.26; taxable $1,532.26 × 8.25 % = 126.41145 → $126.41; total $1,808.67;
     // deposit 30 % = 542.601 → $542.60.
@@ -66,10 +74,10 @@ describe('PATCH /api/estimates/:id', () => {
     });
     // A fixed deposit larger than the total is capped at the total.
     const capped = (await patch(estimate.id, { depositRule: { kind: 'amount', cents: 999_999 } }))
-      .data as EstimateView;
+      .data;
     expect(capped.depositCents).toBe(180_867);
     const fixed = (await patch(estimate.id, { depositRule: { kind: 'amount', cents: 50_000 } }))
-      .data as EstimateView;
+      .data;
     expect(fixed.depositCents).toBe(50_000);
     const [row] = await estimateRows(view.jobId);
     expect(Number(row!.total_cents)).toBe(180_867);
@@ -84,7 +92,7 @@ describe('PATCH /api/estimates/:id', () => {
         notes: 'Gate is 36 in wide',
         validUntil: '2027-01-31',
       })
-    ).data as EstimateView;
+    ).data;
     const edited = view.lines.find((l) => l.id === turf.id)!;
     expect(edited).toMatchObject({
       source: 'manual-override',
@@ -98,9 +106,7 @@ describe('PATCH /api/estimates/:id', () => {
     expect(view.subtotalCents).toBe(estimate.subtotalCents - turf.amountCents + 175_000);
     expectConsistentTier(view, 825, percent30);
     const job = await owner.client.get(`/api/jobs/${estimate.jobId}`).expect(200);
-    expect(job.body.data.activity.map((a: { action: string }) => a.action)).toContain(
-      'job.estimate_changed',
-    );
+    expect(activityActions(job.body)).toContain('job.estimate_changed');
   });
 
   it('adds a tier priced with another turf, renames and removes tiers', async () => {
@@ -108,7 +114,7 @@ describe('PATCH /api/estimates/:id', () => {
     const first = estimate.tiers[0]!;
     const added = (
       await patch(estimate.id, { tiers: { add: [{ name: 'Pet upgrade', turfProductId: pet }] } })
-    ).data as EstimateView;
+    ).data;
     expect(added.tiers.map((t) => t.name)).toEqual(['Standard', 'Pet upgrade']);
     const upgrade = added.tiers[1]!;
     const turfOf = (lines: EstimateView['lines']) => lines.find((l) => l.kind === 'turf')!;
@@ -138,7 +144,7 @@ describe('PATCH /api/estimates/:id', () => {
           ],
         },
       })
-    ).data as EstimateView;
+    ).data;
     expect(renamed.tiers.map((t) => t.name)).toEqual(['Good']);
     expect(renamed.totalCents).toBeGreaterThan(first.totalCents);
     expectConsistentTier(renamed, 825, percent30);
@@ -168,10 +174,7 @@ describe('PATCH /api/estimates/:id', () => {
     for (const [body, path] of cases) {
       const res = await owner.client.patch(`/api/estimates/${estimate.id}`, body).expect(400);
       expect(res.body.code, JSON.stringify(body)).toBe('VALIDATION_FAILED');
-      expect(
-        res.body.errors.map((e: { path: string }) => e.path),
-        JSON.stringify(body),
-      ).toContain(path);
+      expect(errorPaths(res.body), JSON.stringify(body)).toContain(path);
     }
     // Valid changes sent with a bad one are not saved either.
     await owner.client

@@ -5,7 +5,7 @@ import { getEstimateForDocument, markEstimateSent } from '@seamwright/api';
 import type { EstimateView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
-import { createEstimate, estimateRows } from '../../fixtures/estimates.js';
+import { activityActions, createEstimate, estimateRows, listOf } from '../../fixtures/estimates.js';
 import { createCustomer, createJob, createSite, signUpCompany } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
 
@@ -41,7 +41,7 @@ describe('estimate versions', () => {
     expect(sent).toMatchObject({ status: 'sent', sentAt: sentAt.toISOString() });
     const job = await owner.client.get(`/api/jobs/${jobId}`).expect(200);
     expect(job.body.data.status).toBe('estimated');
-    expect(job.body.data.activity.map((a: { action: string }) => a.action)).toEqual(
+    expect(activityActions(job.body)).toEqual(
       expect.arrayContaining(['job.estimate_sent', 'job.status_changed']),
     );
     // Sending the same version again changes nothing.
@@ -82,7 +82,7 @@ describe('estimate versions', () => {
     await owner.client.patch(`/api/estimates/${v1.id}`, { notes: 'x' }).expect(409);
     await owner.client.patch(`/api/estimates/${v2.id}`, { notes: 'Revised' }).expect(200);
     const list = await owner.client.get(`/api/jobs/${jobId}/estimates`).expect(200);
-    expect(list.body.data.map((e: EstimateView) => e.version)).toEqual([2, 1]);
+    expect(listOf(list.body).map((e) => e.version)).toEqual([2, 1]);
   });
 
   it('keeps one draft per job: a revision while a draft exists is a 409', async () => {

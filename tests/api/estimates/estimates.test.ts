@@ -5,7 +5,14 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { EstimateView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
-import { createEstimate, estimateRows, expectConsistentTier } from '../../fixtures/estimates.js';
+import {
+  activityActions,
+  createEstimate,
+  errorPaths,
+  estimateRows,
+  expectConsistentTier,
+  listOf,
+} from '../../fixtures/estimates.js';
 import {
   createCustomer,
   createJob,
@@ -86,9 +93,7 @@ describe('POST /api/jobs/:id/estimates', () => {
     expect(rows[0]).toMatchObject({ id: estimate.id, version: 1, status: 'draft' });
     expect(Number(rows[0]!.total_cents)).toBe(estimate.totalCents);
     const job = await owner.client.get(`/api/jobs/${jobId}`).expect(200);
-    expect(job.body.data.activity.map((a: { action: string }) => a.action)).toContain(
-      'job.estimate_created',
-    );
+    expect(activityActions(job.body)).toContain('job.estimate_created');
     await owner.client.get(`/api/estimates/${estimate.id}`).expect(200);
   });
 
@@ -149,7 +154,7 @@ describe('POST /api/jobs/:id/estimates', () => {
     ] as const) {
       const res = await owner.client.post(`/api/jobs/${jobId}/estimates`, body).expect(400);
       expect(res.body.code).toBe('VALIDATION_FAILED');
-      expect(res.body.errors.map((e: { path: string }) => e.path)).toContain(path);
+      expect(errorPaths(res.body)).toContain(path);
     }
     const material = (await owner.client.get('/api/price-book?kind=material').expect(200)).body
       .data[0].id as string;
@@ -170,7 +175,7 @@ describe('POST /api/jobs/:id/estimates', () => {
     await createArea(owner.client, jobId);
     const first = await createEstimate(owner.client, jobId);
     const list = await owner.client.get(`/api/jobs/${jobId}/estimates`).expect(200);
-    expect(list.body.data.map((e: EstimateView) => e.id)).toEqual([first.id]);
+    expect(listOf(list.body).map((e) => e.id)).toEqual([first.id]);
 
     const other = await signUpCompany(testApp().app);
     await other.client.get(`/api/jobs/${jobId}/estimates`).expect(404);
