@@ -46,3 +46,6 @@ export {
 export type * from './modules/estimate-document/estimate-document.types.js';
 export type { DocumentPoolConfig } from './modules/estimate-document/index.js';
 export { sampleEstimateDocumentInput } from './modules/estimate-document/sample-input.js';
+export { markEstimateSent } from './modules/estimates/estimate-sending.service.js';
+export { getEstimateForDocument } from './modules/estimates/estimate-document.service.js';
+export type { EstimateDocument } from './modules/estimates/estimate-document.service.js';

@@ -7,6 +7,7 @@ import { registerAuditRoutes } from './modules/audit/audit.routes.js';
 import { registerAuthRoutes } from './modules/auth/auth.routes.js';
 import { registerCompanyRoutes } from './modules/company/company.routes.js';
 import { registerCustomersRoutes } from './modules/customers/customers.routes.js';
+import { registerEstimatesRoutes } from './modules/estimates/estimates.routes.js';
 import { registerEstimatingSettingsRoutes } from './modules/estimating-settings/estimating-settings.routes.js';
 import { registerHealthRoutes } from './modules/health/health.routes.js';
 import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
@@ -40,4 +41,5 @@ export function registerApiRoutes(
   registerPlansRoutes(routes, deps);
   registerPriceBookRoutes(routes, deps);
   registerEstimatingSettingsRoutes(routes, deps);
+  registerEstimatesRoutes(routes, deps);
 }

@@ -3,3 +3,4 @@ export * from './job-lifecycle.js';
 export * from './calendar/index.js';
 export * from './cancellation/index.js';
 export * from './locate/index.js';
+export * from './estimates/index.js';

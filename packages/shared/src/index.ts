@@ -16,3 +16,4 @@ export * from './estimating-settings.js';
 export * from './areas.js';
 export * from './stock.js';
 export * from './locate.js';
+export * from './estimates.js';

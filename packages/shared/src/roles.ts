@@ -35,6 +35,8 @@ export const actions = [
   'inventory.write',
   'locate.read',
   'locate.write',
+  'estimates.read',
+  'estimates.write',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -70,6 +72,9 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // site, the office calls them in.
   'locate.read': ['owner', 'office', 'crew_lead'],
   'locate.write': ['owner', 'office'],
+  // Estimates are money too: bookkeepers read them, crew leads never see them.
+  'estimates.read': ['owner', 'office', 'bookkeeper'],
+  'estimates.write': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

@@ -65,6 +65,9 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 3,
     urls: (ids) => [`/api/jobs/${ids.jobId}/locate-tickets`],
   },
+  // The job checked (another company's is a 404) and its versions, read in parallel.
+  '/api/jobs/:id/estimates': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/estimates`] },
+  '/api/estimates/:id': { budget: 2, urls: (ids) => [`/api/estimates/${ids.estimateId}`] },
 };
 
 interface Ids {
@@ -73,6 +76,7 @@ interface Ids {
   jobId: string;
   areaId: string;
   rollId: string;
+  estimateId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -107,7 +111,9 @@ describe('statement budget of signed-in requests', () => {
         calledAt: new Date(Date.now() - 60_000).toISOString(),
       })
       .expect(201);
-    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId };
+    const estimate = await owner.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
+    const estimateId = (estimate.body as { data: { id: string } }).data.id;
+    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId, estimateId };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -127,6 +133,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id/takeoff',
       '/api/jobs/:id/reservations',
       '/api/jobs/:id/locate-tickets',
+      '/api/jobs/:id/estimates',
     ]);
   });
 

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { permissionTable } from '@seamwright/shared';
+import { selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import { areaBody } from '../../fixtures/areas.js';
 import { createCustomer, createJob, createSite, signUpTeam } from '../../fixtures/factories.js';
@@ -125,5 +126,34 @@ describe('permissions per role', () => {
       expect(res.body.code).toBe('FORBIDDEN');
     }
     await office.client.patch(`/api/locate-tickets/${ticketId}`, { status: 'clear' }).expect(200);
+  });
+
+  it('estimates: owners and office write, bookkeepers read, crew leads get 403 everywhere', async () => {
+    const { sequelize } = testApp();
+    const jobId = (await createJob(owner.client, customerId, siteId)).id;
+    await office.client.post(`/api/jobs/${jobId}/areas`, areaBody()).expect(201);
+    const forbidden = async (pending: PromiseLike<{ status: number; body: { code?: string } }>) => {
+      const res = await pending;
+      expect(res.status).toBe(403);
+      expect(res.body.code).toBe('FORBIDDEN');
+    };
+    await forbidden(crew.client.post(`/api/jobs/${jobId}/estimates`, {}));
+    await forbidden(bookkeeper.client.post(`/api/jobs/${jobId}/estimates`, {}));
+    const made = await office.client.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
+    const estimateId = (made.body as { data: { id: string } }).data.id;
+    await owner.client.patch(`/api/estimates/${estimateId}`, { notes: 'Owner note' }).expect(200);
+    await office.client.patch(`/api/estimates/${estimateId}`, { notes: 'Office note' }).expect(200);
+    for (const url of [`/api/estimates/${estimateId}`, `/api/jobs/${jobId}/estimates`]) {
+      await bookkeeper.client.get(url).expect(200);
+      await forbidden(crew.client.get(url));
+    }
+    await forbidden(bookkeeper.client.patch(`/api/estimates/${estimateId}`, { notes: 'x' }));
+    await forbidden(crew.client.patch(`/api/estimates/${estimateId}`, { notes: 'x' }));
+    await forbidden(bookkeeper.client.post(`/api/estimates/${estimateId}/revisions`, {}));
+    await forbidden(crew.client.post(`/api/estimates/${estimateId}/revisions`, {}));
+    const rows = await selectRows(sequelize, 'SELECT notes FROM estimates WHERE job_id = ?', [
+      jobId,
+    ]);
+    expect(rows).toEqual([{ notes: 'Office note' }]);
   });
 });

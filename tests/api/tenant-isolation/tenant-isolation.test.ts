@@ -33,6 +33,7 @@ interface World {
   aTurfProductId: string;
   aRollId: string;
   aLocateTicketId: string;
+  aEstimateId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -292,6 +293,34 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/takeoff`)),
   },
+  'get /api/jobs/:id/estimates': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/jobs/${w.aJobId}/estimates`)),
+  },
+  'post /api/jobs/:id/estimates': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      await notFound(b.post(`/api/jobs/${w.aJobId}/estimates`, {}));
+      // A's turf product is unknown under B's own job too (checked before B's areas).
+      await notFound(
+        b.post(`/api/jobs/${w.bJobId}/estimates`, {
+          tiers: [{ name: 'Hijack', turfProductId: w.aTurfProductId }],
+        }),
+      );
+    },
+  },
+  'get /api/estimates/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/estimates/${w.aEstimateId}`)),
+  },
+  'patch /api/estimates/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/estimates/${w.aEstimateId}`, { notes: 'Hijacked' })),
+  },
+  'post /api/estimates/:id/revisions': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/revisions`, {})),
+  },
   'get /api/areas/:id': {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}`)),
@@ -523,6 +552,9 @@ async function snapshotOfA(w: World) {
     locateTickets: await q(
       'SELECT id, number, status, updated_at FROM locate_tickets WHERE company_id = ? ORDER BY id',
     ),
+    estimates: await q(
+      'SELECT id, version, status, notes, tiers, updated_at FROM estimates WHERE company_id = ? ORDER BY id',
+    ),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -570,6 +602,7 @@ describe('tenant isolation', () => {
         calledAt: new Date(Date.now() - 60_000).toISOString(),
       })
       .expect(201);
+    const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
     world = {
       a,
       b,
@@ -586,6 +619,7 @@ describe('tenant isolation', () => {
       aTurfProductId: aTurf!.id,
       aRollId: (aRolls.body as { data: { id: string }[] }).data[0]!.id,
       aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
+      aEstimateId: aEstimate.body.data.id,
     };
   });
 
@@ -622,6 +656,7 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
     await world.a.client.get(`/api/jobs/${world.aJobId}`).expect(200);
     await world.a.client.get(`/api/areas/${world.aAreaId}`).expect(200);
+    await world.a.client.get(`/api/estimates/${world.aEstimateId}`).expect(200);
   });
 
   it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {

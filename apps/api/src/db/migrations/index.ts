@@ -7,6 +7,7 @@ import { customerList } from './0006-customer-list.js';
 import { jobs } from './0007-jobs.js';
 import { priceBook } from './0008-price-book.js';
 import { jobAreas } from './0009-job-areas.js';
+import { estimates } from './0010-estimates.js';
 import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
 import type { Migration } from './types.js';
@@ -19,6 +20,7 @@ export const migrations: Migration[] = [
   jobs,
   priceBook,
   jobAreas,
+  estimates,
   locateTickets,
   rollStock,
 ];

@@ -6,6 +6,7 @@ import { CustomerModel } from './customer.model.js';
 import { JobModel } from './job.model.js';
 import { JobAreaModel } from './job-area.model.js';
 import { LocateTicketModel } from './locate-ticket.model.js';
+import { EstimateModel } from './estimate.model.js';
 import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
@@ -25,6 +26,7 @@ export {
   AuditEventModel,
   CompanyModel,
   CustomerModel,
+  EstimateModel,
   EstimatingSettingsModel,
   InvitationModel,
   JobAreaModel,
@@ -59,6 +61,7 @@ const allModels = [
   TurfReservationModel,
   RollAllocationModel,
   LocateTicketModel,
+  EstimateModel,
 ] as const;
 
 /**

@@ -1,0 +1,15 @@
+import type { ServiceDeps } from '../../deps.js';
+import type { RouteTable } from '../../http/route-table.js';
+import { createEstimatesHandlers } from './estimates.handlers.js';
+import { createEstimatesService } from './estimates.service.js';
+
+export function registerEstimatesRoutes(routes: RouteTable, deps: ServiceDeps): void {
+  const handlers = createEstimatesHandlers(createEstimatesService(deps));
+  const read = { access: 'tenant', permission: 'estimates.read' } as const;
+  const write = { access: 'tenant', permission: 'estimates.write' } as const;
+  routes.add('get', '/jobs/:id/estimates', read, handlers.listForJob);
+  routes.add('post', '/jobs/:id/estimates', write, handlers.create);
+  routes.add('get', '/estimates/:id', read, handlers.get);
+  routes.add('patch', '/estimates/:id', write, handlers.update);
+  routes.add('post', '/estimates/:id/revisions', write, handlers.revise);
+}

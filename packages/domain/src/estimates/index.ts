@@ -1,0 +1,3 @@
+export * from './money.js';
+export * from './estimate-lines.js';
+export * from './price-takeoff.js';
