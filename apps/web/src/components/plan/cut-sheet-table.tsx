@@ -1,7 +1,7 @@
 import type { CutSheetCut, CutSheetEntry } from '@seamwright/takeoff';
-import { cn } from '../../../components/ui/cn';
-import { useUnits, type Units } from '../../../lib/units';
-import { pieceTint } from '../utils/piece-tints';
+import { cn } from '../ui/cn';
+import { useUnits, type Units } from '../../lib/units';
+import { pieceTint } from './piece-tints';
 
 /** An arrow turned to the grain (degrees CCW from east), for the crew reading the sheet. */
 function GrainGlyph({ angleDeg }: { angleDeg: number }) {
