@@ -198,7 +198,8 @@ export function PointsTable({
                     <Button
                       variant="quiet"
                       className="px-2"
-                      aria-label={`Add a point half-way along side ${n}`}
+                      // The name starts with the visible word (WCAG 2.5.3, label in name).
+                      aria-label={`Split side ${n} (add a point half-way)`}
                       onClick={() => dispatch({ type: 'splitSide', index: i })}
                     >
                       Split

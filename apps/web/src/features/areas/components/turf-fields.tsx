@@ -28,7 +28,7 @@ export function TurfFields({ products }: { products: readonly TurfProductChoice[
     <>
       <SelectField
         name="turfProductId"
-        label="Turf"
+        label="Turf product"
         hint={
           products.length === 0
             ? 'Add turf to the price book in Settings to choose it here.'
