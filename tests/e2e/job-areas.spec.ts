@@ -17,6 +17,16 @@ async function post(page: Page, path: string, data: unknown): Promise<string> {
   return ((await res.json()) as { data: { id: string } }).data.id;
 }
 
+/** The page at 1280 × 800 (top of the page) and on a phone at 390 × 844 (whole page), into .tmp/. */
+async function shoot(page: Page, name: string) {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await page.screenshot({ path: `../.tmp/screens/${name}-desktop.png` });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.screenshot({ path: `../.tmp/screens/${name}-phone.png`, fullPage: true });
+  await expectAccessible(page, `${name} on a phone`);
+  await page.setViewportSize({ width: 1280, height: 800 });
+}
+
 /** Types one side into the editor's "Add a side" form (direction from the list, length as typed). */
 async function addSide(page: Page, direction: string, length: string) {
   const form = page.getByRole('form', { name: 'Add a side to the outline' });
@@ -66,7 +76,8 @@ test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees p
   await form.getByLabel('Base depth').fill('3 in');
   await form.getByRole('radio', { name: /buys the least turf/ }).check();
   await expectAccessible(page, 'New area');
-  await page.screenshot({ path: '../.tmp/screens/area-editor-desktop.png', fullPage: true });
+  await page.getByRole('button', { name: 'Fit the drawing' }).click();
+  await shoot(page, 'area-editor');
   await form.getByRole('button', { name: 'Save area' }).click();
 
   // The area's page: the plan drawn, the alternatives side by side, the cut sheet, cautions.
@@ -87,7 +98,7 @@ test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees p
   await expect(sheet.locator('tbody tr').first()).toContainText(/\d+' \d+"/);
   await expect(page.getByRole('heading', { level: 2, name: 'Cautions' })).toBeVisible();
   await expectAccessible(page, 'Area plan');
-  await page.screenshot({ path: '../.tmp/screens/area-plan-desktop.png', fullPage: true });
+  await shoot(page, 'area-plan');
   // On paper the app's navigation is left out.
   await page.emulateMedia({ media: 'print' });
   await expect(rail(page)).toBeHidden();

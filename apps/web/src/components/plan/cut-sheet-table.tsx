@@ -35,7 +35,7 @@ function whereItGoes(cut: CutSheetCut, units: Units): string {
 export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }) {
   const units = useUnits();
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">Cut sheet</caption>
         <thead>

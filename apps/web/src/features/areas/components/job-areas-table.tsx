@@ -15,7 +15,7 @@ export function JobAreasTable({ areas }: { areas: readonly Area[] }) {
     { area: 0, ordered: 0 },
   );
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-white px-4">
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-white px-4">
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">Areas of this job</caption>
         <thead>
@@ -23,7 +23,7 @@ export function JobAreasTable({ areas }: { areas: readonly Area[] }) {
             <th scope="col" className={th}>
               Area
             </th>
-            <th scope="col" className={th}>
+            <th scope="col" className={`${th} hidden sm:table-cell`}>
               Used for
             </th>
             <th scope="col" className={`${th} text-right`}>
@@ -42,8 +42,12 @@ export function JobAreasTable({ areas }: { areas: readonly Area[] }) {
             <tr key={area.id} className="border-b border-line">
               <th scope="row" className={`${th} font-semibold`}>
                 <Link to={paths.area(area.id)}>{area.name}</Link>
+                {/* On a phone the use goes under the name, so the numbers keep their room. */}
+                <span className="block text-sm font-normal text-ink-muted sm:hidden">
+                  {areaUsageLabels[area.usage]}
+                </span>
               </th>
-              <td className={th}>{areaUsageLabels[area.usage]}</td>
+              <td className={`${th} hidden sm:table-cell`}>{areaUsageLabels[area.usage]}</td>
               <td className={`${th} text-right tabular-nums whitespace-nowrap`}>
                 {units.area(area.areaSqFt)}
               </td>
@@ -59,9 +63,10 @@ export function JobAreasTable({ areas }: { areas: readonly Area[] }) {
         {areas.length > 1 ? (
           <tfoot>
             <tr className="font-semibold">
-              <th scope="row" colSpan={2} className={th}>
+              <th scope="row" className={th}>
                 All areas
               </th>
+              <td className={`${th} hidden sm:table-cell`} />
               <td className={`${th} text-right tabular-nums whitespace-nowrap`}>
                 {units.area(total.area)}
               </td>

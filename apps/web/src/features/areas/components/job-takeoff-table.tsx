@@ -9,7 +9,7 @@ import { useUnits } from '../../../lib/units';
 export function JobTakeoffTable({ lines }: { lines: readonly JobTakeoffLineView[] }) {
   const units = useUnits();
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-white px-4">
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-white px-4">
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">Material takeoff for the whole job</caption>
         <thead>
