@@ -130,6 +130,8 @@ test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees p
   await expect(pad.getByTestId('editor-area')).toHaveText('1,020 sq ft');
   const change = pad.getByRole('form', { name: 'Change Play lawn' });
   await expect(change.getByLabel('Base depth')).toHaveValue(`0' 3"`);
+  await expect(change.getByLabel('Used for')).toHaveValue('play');
+  await expect(change.getByRole('radio', { name: /buys the least turf/ })).toBeChecked();
   await change.getByLabel('Area name').fill('Play lawn and swings');
   await change.getByRole('button', { name: 'Save changes' }).click();
   await expect(pad.getByRole('heading', { level: 1, name: 'Play lawn and swings' })).toBeVisible();
