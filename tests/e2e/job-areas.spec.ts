@@ -9,13 +9,19 @@ import { emailFor, rail, runStamp, signUpCompany } from './support/people';
 
 test.use({ bypassCSP: true });
 
-async function post(page: Page, path: string, data: unknown): Promise<string> {
+async function send(page: Page, method: 'POST' | 'PATCH', path: string, data: unknown) {
   const csrf = await page.request.get('/api/auth/csrf');
   const { data: token } = (await csrf.json()) as { data: { token: string } };
-  const res = await page.request.post(path, { data, headers: { 'x-csrf-token': token.token } });
-  expect(res.status()).toBe(201);
+  const res = await page.request.fetch(path, {
+    method,
+    data,
+    headers: { 'x-csrf-token': token.token },
+  });
+  expect(res.ok()).toBe(true);
   return ((await res.json()) as { data: { id: string } }).data.id;
 }
+
+const post = (page: Page, path: string, data: unknown) => send(page, 'POST', path, data);
 
 /** The page at 1280 × 800 (top of the page) and on a phone at 390 × 844 (whole page), into .tmp/. */
 async function shoot(page: Page, name: string) {
@@ -39,6 +45,9 @@ test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees p
   page,
   browser,
 }) => {
+  // One long journey (two contexts, five accessibility checks, phone screenshots) on a shared
+  // 2-core machine: more than the default minute.
+  test.setTimeout(150_000);
   await signUpCompany(page, {
     companyName: `Hollowmere Turf ${runStamp}`,
     name: 'Ada Penwick',
@@ -138,4 +147,20 @@ test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees p
   await expect(pad.getByRole('table', { name: 'Cut sheet' })).toBeVisible();
   await pad.screenshot({ path: '../.tmp/screens/area-plan-tablet.png', fullPage: true });
   await tablet.close();
+
+  // Once the job is sold its areas are fixed: no "Add area", and the server's refusal of a
+  // save reaches the form's alert with what was typed kept.
+  await send(page, 'PATCH', `/api/jobs/${jobId}`, { status: 'estimated' });
+  await send(page, 'PATCH', `/api/jobs/${jobId}`, { status: 'accepted' });
+  await page.reload();
+  await expect(areas.getByRole('row', { name: /Play lawn and swings/ })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Add area' })).toHaveCount(0);
+  await page.goto(`/jobs/${jobId}/areas/new`);
+  await page.getByRole('button', { name: 'Start from a rectangle' }).click();
+  await form.getByLabel('Area name').fill('Side strip');
+  await form.getByRole('button', { name: 'Save area' }).click();
+  await expect(form.getByRole('alert')).toContainText(
+    'areas can change only while a job is a lead or estimated',
+  );
+  await expect(form.getByLabel('Area name')).toHaveValue('Side strip');
 });
