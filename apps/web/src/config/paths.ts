@@ -16,6 +16,9 @@ export const paths = {
   newJob: (customerId?: string) =>
     customerId ? `/jobs/new?customerId=${encodeURIComponent(customerId)}` : '/jobs/new',
   job: (id: string) => `/jobs/${encodeURIComponent(id)}`,
+  newArea: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/areas/new`,
+  area: (id: string) => `/areas/${encodeURIComponent(id)}`,
+  editArea: (id: string) => `/areas/${encodeURIComponent(id)}/edit`,
   layout: '/layout',
   settings: '/settings',
   profile: '/profile',

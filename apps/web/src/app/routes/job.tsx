@@ -1,18 +1,33 @@
+import { Suspense } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Loading } from '../../components/ui/loading';
 import { NotAvailable } from '../../components/ui/not-available';
 import { PageHeader } from '../../components/ui/page-header';
+import { RegionErrorBoundary } from '../../components/ui/region-error';
 import { paths } from '../../config/paths';
 import { queryClient } from '../../lib/query-client';
 import { useCan, useSession } from '../../lib/session';
+import { jobAreasQueryOptions } from '../../features/areas/api/get-job-areas';
+import { jobTakeoffQueryOptions } from '../../features/areas/api/get-job-takeoff';
+import { JobAreasSection } from '../../features/areas/components/job-areas-section';
 import { jobQueryOptions, useJob } from '../../features/jobs/api/get-job';
 import { JobPage } from '../../features/jobs/components/job-page';
 import { statusLabel } from '../../features/jobs/components/job-status';
 import { RouteError } from './route-error';
 import { sessionCan } from './guard';
 
+/** Areas can change while the job is a lead or estimated (the API's rule). */
+const areaEditableStatuses = new Set(['lead', 'estimated']);
+
 export async function loader({ params }: LoaderFunctionArgs) {
   if (!(await sessionCan('jobs.read'))) return null;
-  await queryClient.ensureQueryData(jobQueryOptions(params.jobId ?? ''));
+  const jobId = params.jobId ?? '';
+  // Areas and their takeoff warm alongside the job; their section has its own error boundary.
+  if (await sessionCan('areas.read')) {
+    void queryClient.prefetchQuery(jobAreasQueryOptions(jobId));
+    void queryClient.prefetchQuery(jobTakeoffQueryOptions(jobId));
+  }
+  await queryClient.ensureQueryData(jobQueryOptions(jobId));
   return null;
 }
 
@@ -20,6 +35,8 @@ function JobRoute({ jobId }: { jobId: string }) {
   const job = useJob(jobId);
   const { company } = useSession();
   const canWrite = useCan('jobs.write');
+  const canReadAreas = useCan('areas.read');
+  const canWriteAreas = useCan('areas.write');
   return (
     <>
       <p className="mb-2 print:hidden">
@@ -29,7 +46,23 @@ function JobRoute({ jobId }: { jobId: string }) {
         title={job.title}
         subtitle={`${statusLabel(job.status)} · ${job.customer.name}`}
       />
-      <JobPage job={job} canWrite={canWrite} timeZone={company.timeZone} />
+      <JobPage
+        job={job}
+        canWrite={canWrite}
+        timeZone={company.timeZone}
+        areas={
+          canReadAreas ? (
+            <RegionErrorBoundary>
+              <Suspense fallback={<Loading label="Loading the areas…" />}>
+                <JobAreasSection
+                  jobId={jobId}
+                  canAdd={canWriteAreas && areaEditableStatuses.has(job.status)}
+                />
+              </Suspense>
+            </RegionErrorBoundary>
+          ) : undefined
+        }
+      />
     </>
   );
 }

@@ -39,7 +39,9 @@ export function AreaEditor({
   const [fitSignal, setFitSignal] = useState(0);
   const dispatch: Dispatch<EditorAction> = (action) => {
     send(action);
-    if (action.type === 'template' || action.type === 'load') setFitSignal((n) => n + 1);
+    // A typed side may run out of the view (it is drawn without looking), so the view follows.
+    if (action.type === 'template' || action.type === 'load' || action.type === 'appendSide')
+      setFitSignal((n) => n + 1);
   };
   const problems = drawingProblems(state.doc);
   const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {

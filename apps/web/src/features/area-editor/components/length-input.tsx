@@ -2,8 +2,9 @@ import { useId, useState } from 'react';
 import { useUnits } from '../../../lib/units';
 import { cn } from '../../../components/ui/cn';
 
+// min-w: in the points table on a phone a box still shows a whole length (`40' 0"`).
 const inputClasses =
-  'block w-full min-h-11 rounded-md border border-line-strong bg-white px-2 py-1 tabular-nums ' +
+  'block w-full min-w-[5.5rem] min-h-11 rounded-md border border-line-strong bg-white px-2 py-1 tabular-nums ' +
   'aria-[invalid=true]:border-brick-700 aria-[invalid=true]:bg-brick-50';
 
 interface LengthInputProps {

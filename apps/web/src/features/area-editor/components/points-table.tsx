@@ -41,8 +41,9 @@ export function PointsTable({
     );
   const sideEnd = (i: number): Pt | undefined =>
     closed ? points[(i + 1) % points.length] : points[i + 1];
+  // relative: the visually hidden labels inside stay within the scroll box on a phone.
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-white">
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-white">
       <table className="w-full min-w-[40rem] border-collapse text-left">
         <caption className="px-2 py-2 text-left font-semibold">
           {name}: {points.length} points{closed ? ` and ${points.length} sides` : ''} (positions
@@ -198,7 +199,8 @@ export function PointsTable({
                     <Button
                       variant="quiet"
                       className="px-2"
-                      aria-label={`Add a point half-way along side ${n}`}
+                      // The name starts with the visible word (WCAG 2.5.3, label in name).
+                      aria-label={`Split side ${n} (add a point half-way)`}
                       onClick={() => dispatch({ type: 'splitSide', index: i })}
                     >
                       Split

@@ -27,10 +27,13 @@ export function JobPage({
   job,
   canWrite,
   timeZone,
+  areas,
 }: {
   job: JobDetailView;
   canWrite: boolean;
   timeZone: string;
+  /** The areas section, composed by the route (areas are their own feature). */
+  areas?: ReactNode;
 }) {
   const update = useUpdateJob(job.id);
   const site = job.site;
@@ -76,10 +79,11 @@ export function JobPage({
         </dl>
       </Section>
       <Section id="job-areas" title="Areas and plans">
-        <EmptyState title="No areas yet">
-          Drawing each area, with its seams, cuts and takeoff, comes to the job page next. Until
-          then the Layout tool plans one area at a time.
-        </EmptyState>
+        {areas ?? (
+          <EmptyState title="No areas to show">
+            Your role does not show the areas and their plans.
+          </EmptyState>
+        )}
       </Section>
       <Section id="job-estimates" title="Estimates">
         <EmptyState title="No estimates yet">

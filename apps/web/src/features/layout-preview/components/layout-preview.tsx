@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
+import { CutSheetTable } from '../../../components/plan/cut-sheet-table';
+import { PlanCautions } from '../../../components/plan/plan-cautions';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { useLayoutState } from '../hooks/use-layout-state';
-import { CutSheetTable } from './cut-sheet-table';
 import { EdgeFields } from './edge-fields';
-import { LayoutCautions } from './layout-cautions';
 import { PlanPanel } from './plan-panel';
 import { RollFields } from './roll-fields';
 import { ShapeFields } from './shape-fields';
@@ -103,7 +103,7 @@ export function LayoutPreview() {
           </Section>
           {good.takeoff ? (
             <Section id="cautions-heading" title="Cautions">
-              <LayoutCautions cautions={good.takeoff.cautions} />
+              <PlanCautions cautions={good.takeoff.cautions} />
             </Section>
           ) : null}
         </>

@@ -1,6 +1,6 @@
 import type { EdgeTag, LayoutPlan } from '@seamwright/takeoff';
 import { useUnits } from '../../../lib/units';
-import { Figure } from './figure';
+import { Figure } from '../../../components/plan/figure';
 
 const tagWords: Record<EdgeTag | 'unknown', string> = {
   hard: 'against hard surfaces',

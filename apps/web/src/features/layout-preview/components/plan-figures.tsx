@@ -1,8 +1,8 @@
 import { formatNumber } from '@seamwright/takeoff';
 import type { LayoutPlan } from '@seamwright/takeoff';
 import { useUnits } from '../../../lib/units';
-import { grainWords } from '../utils/plan-words';
-import { Figure } from './figure';
+import { grainWords } from '../../../components/plan/plan-words';
+import { Figure } from '../../../components/plan/figure';
 import { PerimeterFigure } from './perimeter-figure';
 import { WalkwayFigure } from './walkway-figure';
 

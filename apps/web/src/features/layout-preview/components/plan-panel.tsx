@@ -1,6 +1,7 @@
+import { DEFAULT_WALKWAY_WIDTH_FT } from '@seamwright/takeoff';
+import { PieceLegend } from '../../../components/plan/piece-legend';
+import { PlanDrawing } from '../../../components/plan/plan-drawing';
 import type { GoodPlan } from '../utils/compute-plan';
-import { PieceLegend } from './piece-legend';
-import { PlanDrawing } from './plan-drawing';
 import { PlanFigures } from './plan-figures';
 
 /** The drawing with its key, and the figures beside it (under it on a phone). */
@@ -15,7 +16,13 @@ export function PlanPanel({ good, isStale }: { good: GoodPlan; isStale: boolean 
       {/* Exact colours in print, so the piece tints and the legend's swatches still match on paper. */}
       <div className="grid gap-6 [print-color-adjust:exact] xl:grid-cols-[minmax(0,1fr)_15rem]">
         <figure className="flex min-w-0 flex-col self-start gap-3 rounded-lg border border-line bg-white p-3 print:border-0 print:p-0">
-          <PlanDrawing plan={good.plan} rings={good.rings} walkway={good.walkway} />
+          <PlanDrawing
+            plan={good.plan}
+            rings={good.rings}
+            walkways={
+              good.walkway ? [{ points: good.walkway, widthFt: DEFAULT_WALKWAY_WIDTH_FT }] : []
+            }
+          />
           <figcaption>
             <PieceLegend plan={good.plan} hasWalkway={hasWalkway} />
           </figcaption>

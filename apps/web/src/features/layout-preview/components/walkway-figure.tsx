@@ -1,6 +1,6 @@
 import type { LayoutPlan } from '@seamwright/takeoff';
 import { useUnits } from '../../../lib/units';
-import { Figure } from './figure';
+import { Figure } from '../../../components/plan/figure';
 
 /** Seams still inside the walkway: a warning, since seams there wear and lift first. */
 export function WalkwayFigure({ plan }: { plan: LayoutPlan }) {

@@ -3,7 +3,7 @@ import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
 import { unitsFor, type Units } from '../../../lib/units';
 import type { LayoutParams } from './layout-params';
 import { buildLayoutRequest } from './build-request';
-import { plannerMessage } from './plan-words';
+import { plannerMessage } from './planner-message';
 import { takeoffForPlan, type PlanTakeoff } from './plan-takeoff';
 
 /** A plan with its takeoff, for the params it was computed from. */

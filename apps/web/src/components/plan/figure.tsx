@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { cn } from '../../../components/ui/cn';
+import { cn } from '../ui/cn';
 
 /** One figure beside the drawing: its name, the number with its unit, and an optional note. */
 export function Figure({

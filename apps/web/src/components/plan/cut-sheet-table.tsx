@@ -1,7 +1,7 @@
 import type { CutSheetCut, CutSheetEntry } from '@seamwright/takeoff';
-import { cn } from '../../../components/ui/cn';
-import { useUnits, type Units } from '../../../lib/units';
-import { pieceTint } from '../utils/piece-tints';
+import { cn } from '../ui/cn';
+import { useUnits, type Units } from '../../lib/units';
+import { pieceTint } from './piece-tints';
 
 /** An arrow turned to the grain (degrees CCW from east), for the crew reading the sheet. */
 function GrainGlyph({ angleDeg }: { angleDeg: number }) {
@@ -35,7 +35,7 @@ function whereItGoes(cut: CutSheetCut, units: Units): string {
 export function CutSheetTable({ entries }: { entries: readonly CutSheetEntry[] }) {
   const units = useUnits();
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">Cut sheet</caption>
         <thead>

@@ -1,5 +1,5 @@
 import type { SeamLine } from '@seamwright/takeoff';
-import type { DrawingFrame } from '../utils/drawing-frame';
+import type { DrawingFrame } from './drawing-frame';
 
 /** Dash patterns (screen pixels): side seams dashed, butt seams dotted. */
 export const seamDash = { side: '9 5', butt: '0.5 5' } as const;

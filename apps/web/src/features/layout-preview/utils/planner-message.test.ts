@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { LayoutInputError } from '@seamwright/takeoff';
-import { plannerMessage } from './plan-words';
+import { plannerMessage } from './planner-message';
 
 describe('plannerMessage', () => {
   it('names the field as the person typed it, including the work limits', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { render, screen, within } from '@testing-library/react';
 import type { CutSheetEntry } from '@seamwright/takeoff';
-import { testSession, WithSession } from '../../../test/session-fixture';
+import { testSession, WithSession } from '../../test/session-fixture';
 import { CutSheetTable } from './cut-sheet-table';
 
 const cut = (

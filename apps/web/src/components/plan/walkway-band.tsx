@@ -1,5 +1,5 @@
 import type { LayoutPoint } from '@seamwright/takeoff';
-import type { DrawingFrame } from '../utils/drawing-frame';
+import type { DrawingFrame } from './drawing-frame';
 
 interface WalkwayBandProps {
   points: readonly LayoutPoint[];

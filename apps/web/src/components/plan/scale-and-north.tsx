@@ -1,6 +1,6 @@
-import type { Units } from '../../../lib/units';
-import type { DrawingFrame } from '../utils/drawing-frame';
-import { scaleBarFeet, scaleBarMetres } from '../utils/drawing-frame';
+import type { Units } from '../../lib/units';
+import type { DrawingFrame } from './drawing-frame';
+import { scaleBarFeet, scaleBarMetres } from './drawing-frame';
 
 /**
  * The footer of the drawing: a scale bar on the left (in feet, or metres for a metric company),

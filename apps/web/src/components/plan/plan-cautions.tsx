@@ -1,8 +1,16 @@
-import type { Caution } from '@seamwright/takeoff';
-import { CautionPanel } from '../../../components/ui/caution-panel';
+import { CautionPanel } from '../ui/caution-panel';
+
+/** A caution as the takeoff gives it (packages/takeoff cautions, or the API's CautionView). */
+export interface PlanCaution {
+  key: string;
+  title: string;
+  body: string;
+  deferral: string;
+  reference: string;
+}
 
 /** The safety cautions for this usage, each in the shared caution panel with its source. */
-export function LayoutCautions({ cautions }: { cautions: readonly Caution[] }) {
+export function PlanCautions({ cautions }: { cautions: readonly PlanCaution[] }) {
   return (
     <div className="grid gap-4 md:grid-cols-2">
       {cautions.map((caution) => (

@@ -1,6 +1,6 @@
 import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
-import type { DrawingFrame } from '../utils/drawing-frame';
-import { pieceTint } from '../utils/piece-tints';
+import type { DrawingFrame } from './drawing-frame';
+import { pieceTint } from './piece-tints';
 import { GrainArrow } from './grain-arrow';
 
 interface CutShapesProps {

@@ -1,9 +1,9 @@
 import { useId } from 'react';
-import { DEFAULT_WALKWAY_WIDTH_FT } from '@seamwright/takeoff';
 import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
-import { unitsFor, useUnits, type Units } from '../../../lib/units';
-import { drawingFrame, ringsPath } from '../utils/drawing-frame';
-import { grainWords } from '../utils/plan-words';
+import { cn } from '../ui/cn';
+import { unitsFor, useUnits, type Units } from '../../lib/units';
+import { drawingFrame, ringsPath } from './drawing-frame';
+import { grainWords } from './plan-words';
 import { CutShapes } from './cut-shapes';
 import { ScaleAndNorth } from './scale-and-north';
 import { SeamPaths } from './seam-paths';
@@ -13,7 +13,18 @@ interface PlanDrawingProps {
   plan: LayoutPlan;
   /** Outer ring first, then holes (feet). */
   rings: readonly (readonly LayoutPoint[])[];
-  walkway: readonly LayoutPoint[] | null;
+  /** Walkways (traffic paths) as drawn, each at its width in feet. */
+  walkways: readonly PlanWalkway[];
+  /** Name of the drawing for screen readers ("Layout plan", "Plan: 12 ft roll"). */
+  title?: string;
+  /** Size limits of the drawing; the default suits a page's main plan. */
+  className?: string;
+}
+
+/** A walkway to draw: the centre line and its width, both in feet. */
+export interface PlanWalkway {
+  points: readonly LayoutPoint[];
+  widthFt: number;
 }
 
 /** One sentence a screen reader gives for the drawing; the figures beside it carry the numbers too. */
@@ -30,21 +41,31 @@ export function planSummary(plan: LayoutPlan, units: Units = unitsFor('imperial'
  * The plan in SVG, north up: the area outline (holes too), each cut tinted by its piece, side
  * seams dashed, butt seams dotted, grain arrows, the walkway hatched, a scale bar and a north arrow.
  */
-export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
+export function PlanDrawing({
+  plan,
+  rings,
+  walkways,
+  title = 'Layout plan',
+  className = 'max-h-[60vh] lg:max-h-[34rem] print:max-h-[18cm]',
+}: PlanDrawingProps) {
   // useId's punctuation is not safe inside url(#…) references, so keep letters and digits only.
   const id = `plan${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
   const units = useUnits();
-  const frame = drawingFrame(plan, rings, walkway ?? []);
+  const frame = drawingFrame(
+    plan,
+    rings,
+    walkways.flatMap((walkway) => walkway.points),
+  );
   const area = ringsPath(rings, frame.toSvg);
   return (
     <svg
       role="img"
       aria-labelledby={`${id}-title ${id}-desc`}
       viewBox={`0 0 ${frame.width.toFixed(3)} ${frame.height.toFixed(3)}`}
-      className="block h-auto max-h-[60vh] w-full lg:max-h-[34rem] print:max-h-[18cm]"
+      className={cn('block h-auto w-full', className)}
       data-testid="plan-drawing"
     >
-      <title id={`${id}-title`}>Layout plan</title>
+      <title id={`${id}-title`}>{title}</title>
       <desc id={`${id}-desc`}>{planSummary(plan, units)}</desc>
       <defs>
         <clipPath id={`${id}-area`}>
@@ -53,14 +74,15 @@ export function PlanDrawing({ plan, rings, walkway }: PlanDrawingProps) {
         <WalkwayHatch id={`${id}-hatch`} unit={frame.unit} />
       </defs>
       <CutShapes plan={plan} frame={frame} areaClipId={`${id}-area`} />
-      {walkway ? (
+      {walkways.map((walkway, index) => (
         <WalkwayBand
-          points={walkway}
-          widthFt={DEFAULT_WALKWAY_WIDTH_FT}
+          key={index}
+          points={walkway.points}
+          widthFt={walkway.widthFt}
           frame={frame}
           hatchId={`${id}-hatch`}
         />
-      ) : null}
+      ))}
       <SeamPaths seams={plan.seamLines} frame={frame} />
       <path
         d={area}

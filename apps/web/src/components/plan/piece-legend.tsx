@@ -1,7 +1,7 @@
 import type { LayoutPlan } from '@seamwright/takeoff';
-import { cn } from '../../../components/ui/cn';
-import { useUnits } from '../../../lib/units';
-import { pieceTint } from '../utils/piece-tints';
+import { cn } from '../ui/cn';
+import { useUnits } from '../../lib/units';
+import { pieceTint } from './piece-tints';
 import { seamDash } from './seam-paths';
 
 function LineSample({ dash }: { dash: string }) {
