@@ -17,6 +17,9 @@ export const paths = {
     customerId ? `/jobs/new?customerId=${encodeURIComponent(customerId)}` : '/jobs/new',
   job: (id: string) => `/jobs/${encodeURIComponent(id)}`,
   layout: '/layout',
+  stock: '/stock',
+  receiveStock: '/stock/receive',
+  roll: (id: string) => `/stock/${encodeURIComponent(id)}`,
   settings: '/settings',
   profile: '/profile',
 } as const;
