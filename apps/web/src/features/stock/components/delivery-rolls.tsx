@@ -49,12 +49,15 @@ export function DeliveryRolls({ products }: { products: TurfProduct[] }) {
   );
   return (
     <fieldset className="flex flex-col gap-3">
-      <legend className="mb-2 text-lg font-semibold">Rolls in this delivery</legend>
+      <legend className="text-lg font-semibold">Rolls in this delivery</legend>
+      <p className="text-sm text-ink-muted">
+        Each roll&apos;s length as on its label. {units.lengthExamples}.
+      </p>
       <ol className="flex flex-col gap-3">
         {fields.map((field, index) => (
           <li
             key={field.id}
-            className="grid grid-cols-1 items-start gap-3 rounded-md border border-line bg-sand-50 p-3 sm:grid-cols-[10rem_1fr_auto]"
+            className="grid grid-cols-2 items-start gap-3 rounded-md border border-line bg-sand-50 p-3 sm:grid-cols-[10rem_16rem_auto] sm:justify-start"
           >
             <SelectField name={`rolls.${index}.widthFt`} label={`Roll ${index + 1} width`}>
               {widths.length === 0 ? <option value="">Choose the product first</option> : null}
@@ -64,10 +67,14 @@ export function DeliveryRolls({ products }: { products: TurfProduct[] }) {
                 </option>
               ))}
             </SelectField>
-            <LengthField name={`rolls.${index}.lengthFt`} label={`Roll ${index + 1} length`} />
+            <LengthField
+              name={`rolls.${index}.lengthFt`}
+              label={`Roll ${index + 1} length`}
+              hint=""
+            />
             <Button
               variant="quietDanger"
-              className="sm:mt-7"
+              className="col-span-2 justify-self-end sm:col-span-1 sm:mt-7"
               onClick={() => remove(index)}
               disabled={fields.length === 1}
               aria-label={`Remove roll ${index + 1}`}

@@ -10,6 +10,7 @@ import {
 } from '../../../components/ui/form';
 import { useUnits } from '../../../lib/units';
 import { useUpdateRoll } from '../api/update-roll';
+import { inCompanyUnits } from '../utils/feet-words';
 import { rollFormSchema } from '../utils/stock-forms';
 import { CheckboxField } from './checkbox-field';
 
@@ -47,7 +48,12 @@ export function EditRollForm({ roll, onSaved, onCancel }: EditRollFormProps) {
           change.remainingFt = values.remainingFt;
         if (values.notes !== roll.notes) change.notes = values.notes;
         if (values.archived !== roll.archived) change.archived = values.archived;
-        onSaved(Object.keys(change).length > 0 ? await update.mutateAsync(change) : roll);
+        if (Object.keys(change).length === 0) return onSaved(roll);
+        try {
+          onSaved(await update.mutateAsync(change));
+        } catch (error) {
+          throw inCompanyUnits(error, units);
+        }
       }}
     >
       <div className="grid gap-4 sm:grid-cols-2">

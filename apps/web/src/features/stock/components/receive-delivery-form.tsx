@@ -11,6 +11,7 @@ import { ErrorPanel } from '../../../components/ui/region-error';
 import type { RollView } from '@seamwright/shared';
 import { useReceiveDelivery } from '../api/receive-delivery';
 import { useTurfProducts } from '../api/get-turf-products';
+import { inCompanyUnits } from '../utils/feet-words';
 import { deliveryFormSchema } from '../utils/stock-forms';
 import { todayIn } from '../utils/roll-words';
 import { DeliveryRolls } from './delivery-rolls';
@@ -52,11 +53,16 @@ export function ReceiveDeliveryForm({ onReceived, onCancel }: ReceiveDeliveryFor
         rolls: [{ widthFt: String(first?.rollWidthsFt[0] ?? ''), lengthFt: null }],
       }}
       onSubmit={async (values) => {
-        const rolls = await receive.mutateAsync({
-          ...values,
-          rolls: values.rolls.map((roll) => ({ widthFt: roll.widthFt, lengthFt: roll.lengthFt })),
-        });
-        onReceived(rolls);
+        try {
+          onReceived(
+            await receive.mutateAsync({
+              ...values,
+              rolls: values.rolls.map((r) => ({ widthFt: r.widthFt, lengthFt: r.lengthFt })),
+            }),
+          );
+        } catch (error) {
+          throw inCompanyUnits(error, units);
+        }
       }}
     >
       <SelectField name="turfProductId" label="Turf product" wrapperClassName="sm:max-w-md">

@@ -36,6 +36,7 @@ export function stockColumns(units: Units) {
       header: 'Dye lot',
       enableSorting: false,
       meta: { isHiddenOnPhone: true },
+      cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span>,
     }),
     column.accessor((roll) => kindLabel(roll), {
       id: 'kind',
