@@ -51,7 +51,13 @@ export function stockColumns(units: Units) {
       cell: (info) => length(info.getValue()),
     }),
     column.accessor('remainingFt', {
-      header: 'Length left',
+      // Narrow phones get the short word, so the product keeps room.
+      header: () => (
+        <>
+          <span className="sm:hidden">Left</span>
+          <span className="hidden sm:inline">Length left</span>
+        </>
+      ),
       enableSorting: false,
       meta: { isNumeric: true },
       cell: (info) => length(info.getValue()),

@@ -9,9 +9,9 @@ interface StockFiltersProps {
 }
 
 const kindOptions = [
-  { value: 'all', label: 'Rolls and remnants' },
-  { value: 'roll', label: 'Rolls only' },
-  { value: 'remnant', label: 'Remnants only' },
+  { value: 'all', label: 'All' },
+  { value: 'roll', label: 'Rolls' },
+  { value: 'remnant', label: 'Remnants' },
 ] as const;
 
 /** Product, kind, dye lot and whether used-up and archived rolls show. */
@@ -36,37 +36,39 @@ export function StockFilters({ params, onChange }: StockFiltersProps) {
         ))}
         {missing ? <option value={params.product}>The chosen product</option> : null}
       </SelectField>
-      <SelectField
-        label="Show"
-        value={params.kind}
-        onChange={(event) =>
-          onChange({
-            kind: kindOptions.find((o) => o.value === event.target.value)?.value ?? 'all',
-          })
-        }
-        wrapperClassName="w-full sm:w-56"
-      >
-        {kindOptions.map((option) => (
-          <option key={option.value} value={option.value}>
-            {option.label}
-          </option>
-        ))}
-      </SelectField>
       <SearchBox
         label="Dye lot"
         value={params.dyeLot}
         onSearch={(dyeLot) => onChange({ dyeLot })}
         placeholder="The lot as printed on the label"
       />
-      <label className="flex min-h-11 items-center gap-2">
-        <input
-          type="checkbox"
-          className="h-5 w-5 accent-moss-700"
-          checked={params.all}
-          onChange={(event) => onChange({ all: event.target.checked })}
-        />
-        Show used-up and archived
-      </label>
+      <div className="flex flex-wrap items-end gap-4">
+        <SelectField
+          label="Kind"
+          value={params.kind}
+          onChange={(event) =>
+            onChange({
+              kind: kindOptions.find((o) => o.value === event.target.value)?.value ?? 'all',
+            })
+          }
+          wrapperClassName="w-36"
+        >
+          {kindOptions.map((option) => (
+            <option key={option.value} value={option.value}>
+              {option.label}
+            </option>
+          ))}
+        </SelectField>
+        <label className="flex min-h-11 items-center gap-2">
+          <input
+            type="checkbox"
+            className="h-5 w-5 accent-moss-700"
+            checked={params.all}
+            onChange={(event) => onChange({ all: event.target.checked })}
+          />
+          Show used-up and archived
+        </label>
+      </div>
     </div>
   );
 }

@@ -93,7 +93,6 @@ export function StockList() {
   return (
     <>
       {filters}
-      <RollCautions rolls={onShelf} className="mb-4" />
       <DataTable
         caption="Rolls and remnants"
         columns={columns}
@@ -110,6 +109,8 @@ export function StockList() {
           update({ pageSize: stockPageSizes.find((s) => s === pageSize) ?? 25 })
         }
       />
+      {/* After the list, so on a phone the rolls come first; the caution stays on the page. */}
+      <RollCautions rolls={onShelf} className="mt-6" />
     </>
   );
 }
