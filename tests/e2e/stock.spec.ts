@@ -90,6 +90,11 @@ test('office receives two rolls of one lot, sees them listed and moves one', asy
   await edit.getByLabel('Location (optional)').fill('Yard rack C');
   await edit.getByRole('button', { name: 'Save roll' }).click();
   await expect(office.getByText('Roll saved.')).toBeVisible();
+  await expect(office.getByText('Yard rack C', { exact: true })).toBeVisible();
+  await office.screenshot({ path: `${shots}/stock-roll-desktop.png`, fullPage: true });
+  await office.setViewportSize({ width: 390, height: 844 });
+  await office.screenshot({ path: `${shots}/stock-roll-phone.png`, fullPage: true });
+  await office.setViewportSize({ width: 1280, height: 800 });
   await office.getByRole('link', { name: '← Stock' }).click();
   await expect(rows.filter({ hasText: `82' 6"` })).toContainText('Yard rack C');
   await expect(rows.filter({ hasText: `100' 0"` })).toContainText('Yard rack A');

@@ -51,7 +51,7 @@ export function StockFilters({ params, onChange }: StockFiltersProps) {
               kind: kindOptions.find((o) => o.value === event.target.value)?.value ?? 'all',
             })
           }
-          wrapperClassName="w-36"
+          wrapperClassName="w-28"
         >
           {kindOptions.map((option) => (
             <option key={option.value} value={option.value}>
@@ -66,7 +66,7 @@ export function StockFilters({ params, onChange }: StockFiltersProps) {
             checked={params.all}
             onChange={(event) => onChange({ all: event.target.checked })}
           />
-          Show used-up and archived
+          Used-up and archived too
         </label>
       </div>
     </div>
