@@ -1,5 +1,8 @@
 import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import type { RollView } from '@seamwright/shared';
+import { paths } from '../../../config/paths';
+import { useCan } from '../../../lib/session';
 import { useUnits } from '../../../lib/units';
 import { formatDay, kindLabel } from '../utils/roll-words';
 import { RollCautions } from './roll-cautions';
@@ -16,6 +19,8 @@ function Item({ term, children }: { term: string; children: ReactNode }) {
 /** What the stock records of one roll or remnant, lengths in the company's units. */
 export function RollDetails({ roll }: { roll: RollView }) {
   const units = useUnits();
+  // Crew leads do not open job pages yet (jobs.read), so they get no link there.
+  const canOpenJob = useCan('jobs.read');
   return (
     <section aria-labelledby="roll-facts" className="flex flex-col gap-4">
       <h2 id="roll-facts" className="sr-only">
@@ -36,6 +41,11 @@ export function RollDetails({ roll }: { roll: RollView }) {
         <Item term="Status">
           {roll.archived ? 'Archived' : roll.remainingFt > 0 ? 'In stock' : 'Used up'}
         </Item>
+        {roll.sourceJobId && canOpenJob ? (
+          <Item term="Left from">
+            <Link to={paths.job(roll.sourceJobId)}>The job it was cut for</Link>
+          </Item>
+        ) : null}
         {roll.notes ? (
           <div className="col-span-2 sm:col-span-4">
             <dt className="text-sm text-ink-muted">Notes</dt>
