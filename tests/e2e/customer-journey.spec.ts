@@ -152,7 +152,7 @@ test('the crew lead cannot open customers or their billing details', async ({ br
   await expectAccessible(page, 'Settings (crew lead)');
 });
 
-test('on a phone the crew lead gets one column and a bottom bar with Today, Layout and Profile', async ({
+test('on a phone the crew lead gets one column and a bottom bar with Today, Layout, Stock and Profile', async ({
   browser,
 }) => {
   const page = await newPage(browser, { width: 390, height: 844 });
@@ -161,13 +161,20 @@ test('on a phone the crew lead gets one column and a bottom bar with Today, Layo
   await page.getByLabel('Password').fill('long-enough-pass-2026');
   await page.getByRole('button', { name: 'Sign in' }).click();
   const bottomBar = page.getByRole('navigation', { name: 'Sections' }).last();
-  await expect(bottomBar.getByRole('link')).toHaveText(['Today', 'Layout', 'Profile']);
+  await expect(bottomBar.getByRole('link')).toHaveText(['Today', 'Layout', 'Stock', 'Profile']);
   await expectAccessible(page, 'Today (crew lead, phone)');
   await page.screenshot({ path: '../.tmp/screens/crew-today-phone.png' });
 
   await bottomBar.getByRole('link', { name: 'Layout' }).click();
   await expect(page).toHaveTitle('Layout · Seamwright');
   await expect(page.getByRole('heading', { level: 1, name: 'Layout' })).toBeFocused();
+  // Stock is read-only for a crew lead: no way to receive turf, and the empty list says who does.
+  await bottomBar.getByRole('link', { name: 'Stock' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Stock' })).toBeFocused();
+  await expect(
+    page.getByText('The office records turf here when a delivery arrives'),
+  ).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Receive a delivery' })).toHaveCount(0);
   await bottomBar.getByRole('link', { name: 'Profile' }).click();
   await expect(page.getByText('Crew lead at')).toBeVisible();
   await expect(bottomBar.getByRole('link', { name: 'Profile' })).toHaveAttribute(

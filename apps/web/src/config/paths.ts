@@ -20,6 +20,9 @@ export const paths = {
   area: (id: string) => `/areas/${encodeURIComponent(id)}`,
   editArea: (id: string) => `/areas/${encodeURIComponent(id)}/edit`,
   layout: '/layout',
+  stock: '/stock',
+  receiveStock: '/stock/receive',
+  roll: (id: string) => `/stock/${encodeURIComponent(id)}`,
   settings: '/settings',
   profile: '/profile',
 } as const;

@@ -38,6 +38,20 @@ export function JobsIcon({ className = 'h-6 w-6' }: { className?: string }) {
   );
 }
 
+/** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
+export function StockIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <circle cx="7" cy="16" r="4" />
+      <circle cx="17" cy="16" r="4" />
+      <circle cx="12" cy="8" r="4" />
+      <circle cx="7" cy="16" r="1" />
+      <circle cx="17" cy="16" r="1" />
+      <circle cx="12" cy="8" r="1" />
+    </svg>
+  );
+}
+
 export function SettingsIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
     <svg {...base} className={className}>

@@ -5,16 +5,22 @@ import { phoneSectionsFor, sectionsFor } from './sections';
 const labels = (list: { label: string }[]) => list.map((s) => s.label);
 
 describe('sections', () => {
-  it("gives the crew lead's phone bar Today, Layout and their profile", () => {
+  it("gives the crew lead's phone bar Today, Layout, Stock and their profile", () => {
     const bar = phoneSectionsFor('crew_lead');
-    expect(labels(bar)).toEqual(['Today', 'Layout', 'Profile']);
-    expect(bar.map((s) => s.to)).toEqual([paths.today, paths.layout, paths.settings]);
+    expect(labels(bar)).toEqual(['Today', 'Layout', 'Stock', 'Profile']);
+    expect(bar.map((s) => s.to)).toEqual([paths.today, paths.layout, paths.stock, paths.settings]);
   });
 
   it('keeps customers out of the crew lead’s rail and bar', () => {
-    expect(labels(sectionsFor('crew_lead'))).toEqual(['Today', 'Layout', 'Settings']);
+    expect(labels(sectionsFor('crew_lead'))).toEqual(['Today', 'Layout', 'Stock', 'Settings']);
     expect(phoneSectionsFor('crew_lead').some((s) => s.to === paths.customers)).toBe(false);
     expect(sectionsFor('crew_lead').some((s) => s.to === paths.jobs)).toBe(false);
+  });
+
+  it('gives every role the Stock section, but only the crew lead’s phone bar', () => {
+    for (const role of ['owner', 'office', 'bookkeeper', 'crew_lead'] as const)
+      expect(labels(sectionsFor(role))).toContain('Stock');
+    expect(labels(phoneSectionsFor('owner'))).not.toContain('Stock');
   });
 
   it('gives the office every section on the phone under its own name', () => {

@@ -5,6 +5,7 @@ import {
   JobsIcon,
   ProfileIcon,
   SettingsIcon,
+  StockIcon,
   TodayIcon,
 } from '../../../components/ui/icons';
 import { LayoutIcon } from '../../../components/ui/layout-icon';
@@ -54,6 +55,14 @@ const sections: Section[] = [
     Icon: LayoutIcon,
     phoneRoles: ['owner', 'office', 'bookkeeper', 'crew_lead'],
   },
+  // No money in it, so every role reads it; crew leads check lots and lengths from the yard.
+  {
+    to: paths.stock,
+    label: 'Stock',
+    Icon: StockIcon,
+    needs: 'inventory.read',
+    phoneRoles: ['crew_lead'],
+  },
   // For a crew lead the settings page holds only their own profile, so the phone bar says so.
   {
     to: paths.settings,
@@ -70,7 +79,7 @@ export function sectionsFor(role: Role): Section[] {
 
 /**
  * The phone bottom bar. Until crews have their scheduled jobs (and with them the gate and
- * hazard notes of the sites they work on), a crew lead's bar reaches Today, Layout and Profile.
+ * hazard notes of the sites they work on), a crew lead's bar reaches Today, Layout, Stock and Profile.
  */
 export function phoneSectionsFor(role: Role): Section[] {
   return sectionsFor(role)
