@@ -78,6 +78,7 @@ describe('reserving a job’s turf on one dye lot', () => {
     const jobId = await acceptedJobNeedingTwentyFootPieces(team.office.client, turfId);
     const res = await team.office.client.post(`/api/jobs/${jobId}/reservations`, {}).expect(409);
     expect(res.body.detail).toMatch(/no single dye lot/);
+    expect(res.body.errors[0].path).toBe('stock');
     expect(res.body.detail).toMatch(/order 20 ft of 15 ft wide/);
     expect(await reservationRows(jobId)).toEqual([]);
 

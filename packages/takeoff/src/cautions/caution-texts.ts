@@ -41,11 +41,16 @@ export const silicaDustCaution: Caution = {
 };
 
 /** Rolls above the one-person lift limit. */
-export function heavyRollCaution(rollWeightLb: number, liftLimitLb: number): Caution {
+export function heavyRollCaution(
+  rollWeightLb: number,
+  liftLimitLb: number,
+  /** Whose heaviest roll: "on this job" for a plan, "listed" for the stock screens. */
+  where = 'on this job',
+): Caution {
   return {
     key: 'heavy-rolls',
     title: 'Heavy rolls: lift with a machine or a team',
-    body: `The heaviest roll on this job weighs about ${formatNumber(rollWeightLb, 0)} lb, above the ${liftLimitLb} lb recommended limit for one person lifting with two hands in ideal conditions. Move it with a roll cart, or a carpet pole on a skid-steer or forklift, and plan team lifts for anything carried by hand.`,
+    body: `The heaviest roll ${where} weighs about ${formatNumber(rollWeightLb, 0)} lb, above the ${liftLimitLb} lb recommended limit for one person lifting with two hands in ideal conditions. Move it with a roll cart, or a carpet pole on a skid-steer or forklift, and plan team lifts for anything carried by hand.`,
     deferral: DEFER_TO_LOCAL_PRACTICE,
     reference: 'NIOSH recommended weight limit (51 lb) for two-hand lifting, as cited by OSHA',
   };

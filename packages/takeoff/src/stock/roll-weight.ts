@@ -29,5 +29,5 @@ export function rollHandlingCautions(
   liftLimitLb = NIOSH_LIFT_LIMIT_LB,
 ): Caution[] {
   const heaviest = Math.max(0, ...rolls.map((r) => rollWeightLb(r.widthFt, r.lengthFt)));
-  return heaviest > liftLimitLb ? [heavyRollCaution(heaviest, liftLimitLb)] : [];
+  return heaviest > liftLimitLb ? [heavyRollCaution(heaviest, liftLimitLb, 'listed')] : [];
 }

@@ -88,8 +88,9 @@ export function shortConflict(
         : `no single dye lot of ${name} holds the job (best: lot ${product.dyeLot}); order ${order}`;
     });
   const message = `Not enough turf in stock: ${parts.join('; ')}`;
+  // Its own path, so a client can offer to hold what there is (`allowShort`) for this refusal only.
   return new AppError('CONFLICT', message, {
-    errors: [{ path: 'rolls', message }],
+    errors: [{ path: 'stock', message }],
   });
 }
 

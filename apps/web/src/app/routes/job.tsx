@@ -13,6 +13,7 @@ import { JobAreasSection } from '../../features/areas/components/job-areas-secti
 import { jobQueryOptions, useJob } from '../../features/jobs/api/get-job';
 import { JobPage } from '../../features/jobs/components/job-page';
 import { statusLabel } from '../../features/jobs/components/job-status';
+import { JobTurfPanel } from '../../features/stock/components/job-turf-panel';
 import { RouteError } from './route-error';
 import { sessionCan } from './guard';
 
@@ -37,6 +38,7 @@ function JobRoute({ jobId }: { jobId: string }) {
   const canWrite = useCan('jobs.write');
   const canReadAreas = useCan('areas.read');
   const canWriteAreas = useCan('areas.write');
+  const canWriteStock = useCan('inventory.write');
   return (
     <>
       <p className="mb-2 print:hidden">
@@ -61,6 +63,11 @@ function JobRoute({ jobId }: { jobId: string }) {
               </Suspense>
             </RegionErrorBoundary>
           ) : undefined
+        }
+        turf={
+          <RegionErrorBoundary>
+            <JobTurfPanel jobId={jobId} jobStatus={job.status} canWrite={canWriteStock} />
+          </RegionErrorBoundary>
         }
       />
     </>

@@ -28,12 +28,15 @@ export function JobPage({
   canWrite,
   timeZone,
   areas,
+  turf,
 }: {
   job: JobDetailView;
   canWrite: boolean;
   timeZone: string;
   /** The areas section, composed by the route (areas are their own feature). */
   areas?: ReactNode;
+  /** The turf held for the job on rolls in stock, composed by the route (stock's feature). */
+  turf?: ReactNode;
 }) {
   const update = useUpdateJob(job.id);
   const site = job.site;
@@ -85,6 +88,11 @@ export function JobPage({
           </EmptyState>
         )}
       </Section>
+      {turf ? (
+        <Section id="job-turf" title="Turf from stock">
+          {turf}
+        </Section>
+      ) : null}
       <Section id="job-estimates" title="Estimates">
         <EmptyState title="No estimates yet">
           Estimate versions built from the areas&apos; takeoff will be listed here, each with its

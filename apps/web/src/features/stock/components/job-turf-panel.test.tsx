@@ -89,7 +89,7 @@ const shortProblem = {
   code: 'CONFLICT',
   detail:
     'Not enough turf in stock: no single dye lot of Landscape turf holds the job (best: lot LT-7); order 20 ft of 15 ft wide',
-  errors: [{ path: 'rolls', message: 'Not enough turf in stock: order 20 ft of 15 ft wide' }],
+  errors: [{ path: 'stock', message: 'Not enough turf in stock: order 20 ft of 15 ft wide' }],
 };
 
 interface Call {

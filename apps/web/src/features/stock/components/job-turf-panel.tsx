@@ -20,15 +20,12 @@ const reservable: readonly JobStatus[] = ['accepted', 'scheduled'];
 /** Remnants come back while the crew is on the job or just after. */
 const returnable: readonly JobStatus[] = ['in_progress', 'installed'];
 
-/**
- * A 409 that holding what there is would get past: stock is short. The API names `rolls` and
- * says what to order; its other `rolls` refusal (too many rolls to search) asks to archive.
- */
+/** A 409 that holding what there is would get past: stock is short (the API names `stock`). */
 function isShort(error: unknown): error is ApiError {
   return (
     error instanceof ApiError &&
     error.status === 409 &&
-    error.fieldErrors.some((e) => e.path === 'rolls' && /\border\b/.test(e.message))
+    error.fieldErrors.some((e) => e.path === 'stock')
   );
 }
 
