@@ -24,6 +24,7 @@ export { createSequelize } from './db/sequelize.js';
 export { migrateDatabase } from './db/migrate.js';
 export { seedDemoData, demoPassword, demoUsers } from './seed/demo-data.js';
 export { demoAreas } from './seed/demo-areas.js';
+export { demoReservedJobTitles } from './seed/demo-stock.js';
 export type { SeedResult } from './seed/demo-data.js';
 export { startServer } from './server.js';
 export type { RunningServer, StartServerOptions } from './server.js';

@@ -1,6 +1,12 @@
 // The demo seed writes its rows through scoped(ctx, Model) like request code does.
 import { describe, expect, it } from 'vitest';
-import { demoAreas, demoUsers, seedDemoData, selectRows } from '@seamwright/api';
+import {
+  demoAreas,
+  demoReservedJobTitles,
+  demoUsers,
+  seedDemoData,
+  selectRows,
+} from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 
 describe('demo seed', () => {
@@ -40,6 +46,18 @@ describe('demo seed', () => {
     for (const area of areas)
       expect(Number(area.ordered_sq_ft)).toBeGreaterThanOrEqual(Number(area.area_sq_ft));
 
+    // Stock in several dye lots, and the sold jobs' turf held on it.
+    expect(Number(await count('rolls', company?.id))).toBeGreaterThan(3);
+    const held = await selectRows<{ title: string }>(
+      sequelize,
+      `SELECT DISTINCT j.title FROM turf_reservations r JOIN jobs j ON j.id = r.job_id
+        WHERE r.company_id = ? AND r.status = 'held' ORDER BY j.title`,
+      [company?.id],
+    );
+    expect(held.map((row) => row.title)).toEqual([...demoReservedJobTitles].sort());
+
     expect((await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool)).created).toBe(false);
+    // A rerun adds nothing.
+    expect(Number(await count('turf_reservations', company?.id))).toBe(held.length);
   });
 });

@@ -24,6 +24,7 @@ import { hashPassword } from '../passwords.js';
 import { demoAreas } from './demo-areas.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 import { demoJobs } from './demo-jobs.js';
+import { seedDemoStock } from './demo-stock-seed.js';
 
 /** Demo sign-in password for every demo user (local data only). */
 export const demoPassword = 'turf-demo-2026';
@@ -63,10 +64,32 @@ export async function seedDemoData(
     users: demoUsers.map(({ email, role }) => ({ email, role })),
     password: demoPassword,
   };
-  if (await CompanyModel.findOne({ where: { slug: demoCompany.slug } }))
-    return { created: false, ...result };
+  const existing = await CompanyModel.findOne({ where: { slug: demoCompany.slug } });
+  const owner = existing
+    ? await demoOwnerOf(existing.id)
+    : await createDemoCompany(sequelize, env, plannerPool);
+  // Filled in after the company commits, each part only when missing (so a rerun completes a
+  // demo that an older version of this seed made).
+  await seedDemoStock(owner, { sequelize, plannerPool });
+  return { created: !existing, ...result };
+}
+
+/** The demo owner's context, to act as them on an existing demo company. */
+async function demoOwnerOf(companyId: string): Promise<RequestContext> {
+  const lookup = { companyId, userId: '', role: 'owner' as const };
+  const [membership] = await scoped(lookup, MembershipModel).findAll({ where: { role: 'owner' } });
+  if (!membership) throw new Error('The demo company has no owner.');
+  return { companyId, userId: membership.userId, role: 'owner' };
+}
+
+/** Company, people, customers, jobs, price book and planned areas: one transaction. */
+async function createDemoCompany(
+  sequelize: Sequelize,
+  env: Pick<Env, 'bcryptCost'>,
+  plannerPool: PlannerPool,
+): Promise<RequestContext> {
   const passwordHash = await hashPassword(demoPassword, env.bcryptCost);
-  await sequelize.transaction(async (transaction) => {
+  return sequelize.transaction(async (transaction) => {
     const company = await CompanyModel.create(
       { ...demoCompany, region: null, settings: {} },
       { transaction },
@@ -137,8 +160,8 @@ export async function seedDemoData(
     }
     await seedDemoAreas(owner, jobIds, plannerPool, transaction);
     await unsafeRecountCustomers(company.id, transaction);
+    return owner;
   });
-  return { created: true, ...result };
 }
 
 /** Draws and plans each demo area on its job, checked by the same schema as a request body. */

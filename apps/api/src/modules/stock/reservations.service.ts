@@ -79,7 +79,7 @@ async function changeHeld(
   }
 }
 
-export function createReservationsService(deps: ServiceDeps) {
+export function createReservationsService(deps: Pick<ServiceDeps, 'sequelize' | 'plannerPool'>) {
   const { sequelize, plannerPool } = deps;
 
   async function reserve(

@@ -52,7 +52,7 @@ function checkWidth(
 /** Remnants come back while the crew is on the job or just after. */
 const remnantStatuses: readonly JobStatus[] = ['in_progress', 'installed'];
 
-export function createRollsService(deps: ServiceDeps) {
+export function createRollsService(deps: Pick<ServiceDeps, 'sequelize'>) {
   const { sequelize } = deps;
 
   async function get(ctx: RequestContext, id: string): Promise<RollView> {
