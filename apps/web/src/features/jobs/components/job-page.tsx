@@ -35,7 +35,10 @@ export function JobPage({
   timeZone: string;
   /** The areas section, composed by the route (areas are their own feature). */
   areas?: ReactNode;
-  /** The turf held for the job on rolls in stock, composed by the route (stock's feature). */
+  /**
+   * The turf held for the job on rolls in stock: a whole section with its own heading,
+   * composed by the route (stock is its own feature).
+   */
   turf?: ReactNode;
 }) {
   const update = useUpdateJob(job.id);
@@ -88,11 +91,8 @@ export function JobPage({
           </EmptyState>
         )}
       </Section>
-      {turf ? (
-        <Section id="job-turf" title="Turf from stock">
-          {turf}
-        </Section>
-      ) : null}
+      {/* The turf panel is a section of its own, with its heading. */}
+      {turf ?? null}
       <Section id="job-estimates" title="Estimates">
         <EmptyState title="No estimates yet">
           Estimate versions built from the areas&apos; takeoff will be listed here, each with its
