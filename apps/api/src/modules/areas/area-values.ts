@@ -2,7 +2,7 @@
 // the plan with its alternatives. Shared by the areas service and the demo seed, so demo areas
 // are planned exactly as a request's are.
 import { toGrainChoice } from '@seamwright/shared';
-import type { CreateAreaData } from '@seamwright/shared';
+import type { AreaGrainChoice, AreaTurfProduct, CreateAreaData } from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
 import type { Tx } from '../../db/sequelize.js';
 import type { PlannerPool } from '../../planner/planner-pool.js';
@@ -28,6 +28,43 @@ export function plannerInputOf(input: Partial<AreaPlannerInput>): AreaPlannerInp
   return out as unknown as AreaPlannerInput;
 }
 
+/** What planning decides of an area: its product, grain, planner input and plans. */
+export type PlannedValues = Pick<
+  AreaValues,
+  | 'turfProductId'
+  | 'turfProduct'
+  | 'grainChoice'
+  | 'input'
+  | 'request'
+  | 'plan'
+  | 'alternatives'
+  | 'engineVersion'
+  | 'areaSqFt'
+  | 'orderedSqFt'
+>;
+
+/** Plans an area through the pool and returns the row values the plan decides. */
+export async function planValues(
+  plannerPool: PlannerPool,
+  product: AreaTurfProduct | null,
+  grainChoice: AreaGrainChoice,
+  plannerInput: AreaPlannerInput,
+): Promise<PlannedValues> {
+  const planned = await planArea(plannerPool, plannerInput, grainChoice, product);
+  return {
+    turfProductId: product?.id ?? null,
+    turfProduct: product,
+    grainChoice,
+    input: plannerInput,
+    request: planned.request,
+    plan: planned.plan,
+    alternatives: planned.alternatives,
+    engineVersion: planned.plan.engineVersion,
+    areaSqFt: planned.plan.areaSqFt,
+    orderedSqFt: planned.plan.orderedSqFt,
+  };
+}
+
 /**
  * Plans a new area through the pool and returns its row values. Requests plan before their
  * transaction opens; the demo seed passes its own `tx`, as its price book is not committed yet.
@@ -39,22 +76,16 @@ export async function planNewArea(
   tx?: Tx,
 ): Promise<AreaValues> {
   const product = await turfProductFor(ctx, input.turfProductId, tx);
-  const grainChoice = toGrainChoice(input.grain);
-  const plannerInput = plannerInputOf(input);
-  const planned = await planArea(plannerPool, plannerInput, grainChoice, product);
+  const planned = await planValues(
+    plannerPool,
+    product,
+    toGrainChoice(input.grain),
+    plannerInputOf(input),
+  );
   return {
     name: input.name,
     usage: input.usage,
-    turfProductId: product?.id ?? null,
-    turfProduct: product,
     baseDepthIn: input.baseDepthIn ?? null,
-    grainChoice,
-    input: plannerInput,
-    request: planned.request,
-    plan: planned.plan,
-    alternatives: planned.alternatives,
-    engineVersion: planned.plan.engineVersion,
-    areaSqFt: planned.plan.areaSqFt,
-    orderedSqFt: planned.plan.orderedSqFt,
+    ...planned,
   };
 }

@@ -9,8 +9,7 @@ import type { ServiceDeps } from '../../deps.js';
 import { notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findJob } from '../jobs/jobs.repository.js';
-import { planArea } from './area-planning.js';
-import { planNewArea, plannerInputOf, plannerKeys } from './area-values.js';
+import { planNewArea, planValues, plannerInputOf, plannerKeys } from './area-values.js';
 import { lockEditableJob, turfProductFor } from './area-rules.js';
 import {
   createArea,
@@ -113,19 +112,7 @@ export function createAreasService(deps: ServiceDeps) {
       const grainChoice =
         input.grain === undefined ? current.grainChoice : toGrainChoice(input.grain);
       const plannerInput = plannerInputOf({ ...current.input, ...plannerInputOf(input) });
-      const planned = await planArea(plannerPool, plannerInput, grainChoice, product);
-      Object.assign(values, {
-        turfProductId: product?.id ?? null,
-        turfProduct: product,
-        grainChoice,
-        input: plannerInput,
-        request: planned.request,
-        plan: planned.plan,
-        alternatives: planned.alternatives,
-        engineVersion: planned.plan.engineVersion,
-        areaSqFt: planned.plan.areaSqFt,
-        orderedSqFt: planned.plan.orderedSqFt,
-      });
+      Object.assign(values, await planValues(plannerPool, product, grainChoice, plannerInput));
     }
     await inTransaction(sequelize, async (tx) => {
       await lockEditableJob(ctx, current.jobId, tx);

@@ -5,7 +5,7 @@ import { paths } from '../../../config/paths';
 import { useJobAreas } from '../api/get-job-areas';
 import { useJobTakeoff } from '../api/get-job-takeoff';
 import { JobAreasTable } from './job-areas-table';
-import { JobTakeoffTable } from './job-takeoff-table';
+import { TakeoffTable } from '../../../components/plan/takeoff-table';
 
 /**
  * The job's areas and their takeoff, for the job page. Areas can be added while the job is
@@ -41,7 +41,7 @@ export function JobAreasSection({ jobId, canAdd }: { jobId: string; canAdd: bool
           All areas added up, with your company’s estimating settings.
         </p>
         {takeoff.lines.length > 0 ? (
-          <JobTakeoffTable lines={takeoff.lines} />
+          <TakeoffTable lines={takeoff.lines} caption="Material takeoff for the whole job" />
         ) : (
           <p>No materials yet.</p>
         )}

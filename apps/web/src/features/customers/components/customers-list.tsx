@@ -1,14 +1,14 @@
 import { useCallback, useMemo } from 'react';
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { customerStatuses } from '@seamwright/shared';
 import { DataTable } from '../../../components/ui/data-table';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { ErrorPanel } from '../../../components/ui/region-error';
-import { Loading } from '../../../components/ui/loading';
+import { listQueryFrame } from '../../../components/ui/list-query-frame';
 import { SelectField } from '../../../components/ui/form-fields';
 import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { useCan, useSession } from '../../../lib/session';
+import { useUrlListParams } from '../../../lib/use-url-list-params';
 import { useCustomers } from '../api/get-customers';
 import {
   customerPageSizes,
@@ -16,7 +16,6 @@ import {
   parseCustomerListParams,
   splitSort,
   toCustomerSearchParams,
-  type CustomerListParams,
 } from '../utils/list-params';
 import { customerColumns } from './customer-columns';
 import { SearchBox } from '../../../components/ui/search-box';
@@ -29,23 +28,12 @@ const statusLabels: Record<(typeof customerStatuses)[number], string> = {
 
 /** The customers list; every bit of its state is in the URL, so it survives a reload. */
 export function CustomersList() {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const params = useMemo(() => parseCustomerListParams(searchParams), [searchParams]);
+  const { params, update } = useUrlListParams(parseCustomerListParams, toCustomerSearchParams, 'q');
   const { company } = useSession();
   const canWrite = useCan('customers.write');
   const columns = useMemo(() => customerColumns(company.timeZone), [company.timeZone]);
   const query = useCustomers(params);
 
-  const update = useCallback(
-    (change: Partial<CustomerListParams>) => {
-      // Any change other than the page itself starts again at page 1.
-      const next = { ...params, page: 1, ...change };
-      setSearchParams(toCustomerSearchParams(next), {
-        replace: !('page' in change) && 'q' in change,
-      });
-    },
-    [params, setSearchParams],
-  );
   const onSearch = useCallback((q: string) => update({ q }), [update]);
 
   const filters = (
@@ -68,20 +56,8 @@ export function CustomersList() {
     </div>
   );
 
-  if (query.isPending)
-    return (
-      <>
-        {filters}
-        <Loading label="Loading customers…" />
-      </>
-    );
-  if (query.isError)
-    return (
-      <>
-        {filters}
-        <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />
-      </>
-    );
+  const pending = listQueryFrame(query, filters, 'Loading customers…');
+  if (pending || !query.data) return pending;
 
   const { data, meta } = query.data;
   if (meta.total === 0) {

@@ -1,12 +1,12 @@
-import { useCallback, useMemo } from 'react';
-import { Link, useSearchParams } from 'react-router-dom';
+import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
 import { DataTable } from '../../../components/ui/data-table';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { ErrorPanel } from '../../../components/ui/region-error';
-import { Loading } from '../../../components/ui/loading';
+import { listQueryFrame } from '../../../components/ui/list-query-frame';
 import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { useCan, useSession } from '../../../lib/session';
+import { useUrlListParams } from '../../../lib/use-url-list-params';
 import { useJobs } from '../api/get-jobs';
 import {
   isFiltered,
@@ -15,46 +15,21 @@ import {
   parseJobListParams,
   splitSort,
   toJobSearchParams,
-  type JobListParams,
 } from '../utils/list-params';
 import { jobColumns } from './job-columns';
 import { JobFilters } from './job-filters';
 
 /** The jobs list; every bit of its state is in the URL, so it survives a reload. */
 export function JobsList() {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const params = useMemo(() => parseJobListParams(searchParams), [searchParams]);
+  const { params, update } = useUrlListParams(parseJobListParams, toJobSearchParams, 'q');
   const { company } = useSession();
   const canWrite = useCan('jobs.write');
   const columns = useMemo(() => jobColumns(company.timeZone), [company.timeZone]);
   const query = useJobs(params);
 
-  const update = useCallback(
-    (change: Partial<JobListParams>) => {
-      // Any change other than the page itself starts again at page 1.
-      const next = { ...params, page: 1, ...change };
-      setSearchParams(toJobSearchParams(next), {
-        replace: !('page' in change) && 'q' in change,
-      });
-    },
-    [params, setSearchParams],
-  );
-
   const filters = <JobFilters params={params} onChange={update} />;
-  if (query.isPending)
-    return (
-      <>
-        {filters}
-        <Loading label="Loading jobs…" />
-      </>
-    );
-  if (query.isError)
-    return (
-      <>
-        {filters}
-        <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />
-      </>
-    );
+  const pending = listQueryFrame(query, filters, 'Loading jobs…');
+  if (pending || !query.data) return pending;
 
   const { data, meta } = query.data;
   if (meta.total === 0)

@@ -7,7 +7,7 @@ import { EdgeFields } from './edge-fields';
 import { PlanPanel } from './plan-panel';
 import { RollFields } from './roll-fields';
 import { ShapeFields } from './shape-fields';
-import { TakeoffTable } from './takeoff-table';
+import { TakeoffTable } from '../../../components/plan/takeoff-table';
 import { WalkwayFields } from './walkway-fields';
 
 function Section({

@@ -1,12 +1,12 @@
-import { useCallback, useMemo } from 'react';
-import { Link, useSearchParams } from 'react-router-dom';
+import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
 import { DataTable } from '../../../components/ui/data-table';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { ErrorPanel } from '../../../components/ui/region-error';
-import { Loading } from '../../../components/ui/loading';
+import { listQueryFrame } from '../../../components/ui/list-query-frame';
 import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { useCan } from '../../../lib/session';
+import { useUrlListParams } from '../../../lib/use-url-list-params';
 import { useUnits } from '../../../lib/units';
 import { useRolls } from '../api/get-rolls';
 import {
@@ -14,7 +14,6 @@ import {
   parseStockListParams,
   stockPageSizes,
   toStockSearchParams,
-  type StockListParams,
 } from '../utils/list-params';
 import { RollCautions } from './roll-cautions';
 import { stockColumns } from './stock-columns';
@@ -25,39 +24,15 @@ const serverOrder = { field: 'product', direction: 'asc' } as const;
 
 /** Rolls and remnants in stock; every bit of the list's state is in the URL. */
 export function StockList() {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const params = useMemo(() => parseStockListParams(searchParams), [searchParams]);
+  const { params, update } = useUrlListParams(parseStockListParams, toStockSearchParams, 'dyeLot');
   const units = useUnits();
   const canWrite = useCan('inventory.write');
   const columns = useMemo(() => stockColumns(units), [units]);
   const query = useRolls(params);
 
-  const update = useCallback(
-    (change: Partial<StockListParams>) => {
-      // Any change other than the page itself starts again at page 1.
-      const next = { ...params, page: 1, ...change };
-      setSearchParams(toStockSearchParams(next), {
-        replace: !('page' in change) && 'dyeLot' in change,
-      });
-    },
-    [params, setSearchParams],
-  );
-
   const filters = <StockFilters params={params} onChange={update} />;
-  if (query.isPending)
-    return (
-      <>
-        {filters}
-        <Loading label="Loading stock…" />
-      </>
-    );
-  if (query.isError)
-    return (
-      <>
-        {filters}
-        <ErrorPanel error={query.error} onRetry={() => void query.refetch()} />
-      </>
-    );
+  const pending = listQueryFrame(query, filters, 'Loading stock…');
+  if (pending || !query.data) return pending;
 
   const { data, meta } = query.data;
   if (meta.total === 0)
