@@ -28,12 +28,15 @@ export function JobPage({
   canWrite,
   timeZone,
   areas,
+  estimates,
 }: {
   job: JobDetailView;
   canWrite: boolean;
   timeZone: string;
   /** The areas section, composed by the route (areas are their own feature). */
   areas?: ReactNode;
+  /** The estimates section, composed by the route (estimates are their own feature). */
+  estimates?: ReactNode;
 }) {
   const update = useUpdateJob(job.id);
   const site = job.site;
@@ -86,10 +89,11 @@ export function JobPage({
         )}
       </Section>
       <Section id="job-estimates" title="Estimates">
-        <EmptyState title="No estimates yet">
-          Estimate versions built from the areas&apos; takeoff will be listed here, each with its
-          PDF and the customer&apos;s acceptance.
-        </EmptyState>
+        {estimates ?? (
+          <EmptyState title="No estimates to show">
+            Your role does not show the estimates and their prices.
+          </EmptyState>
+        )}
       </Section>
       <Section id="job-documents" title="Documents">
         <EmptyState title="No documents yet">

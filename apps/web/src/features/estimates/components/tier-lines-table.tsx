@@ -1,0 +1,153 @@
+import { useFieldArray, useFormContext } from 'react-hook-form';
+import type { EstimateLine, EstimateTier } from '@seamwright/shared';
+import { Button } from '../../../components/ui/button';
+import { Form, SubmitButton } from '../../../components/ui/form';
+import { formatCents } from '../../../lib/money';
+import { useUnits } from '../../../lib/units';
+import { lineQuantityText } from '../utils/estimate-words';
+import { lineRowsOf, lineRowsSchema, lineUpdatesOf, type LineRow } from '../utils/line-edits';
+import { LineCellInput } from './line-cell-input';
+import { LineSource } from './line-source';
+
+const th = 'py-2 pr-3';
+const num = `${th} text-right tabular-nums whitespace-nowrap`;
+
+interface TableProps {
+  tier: EstimateTier;
+  currency: string;
+  /** Given while the estimate is a draft the user may change. */
+  edit?: {
+    onSave: (updates: ReturnType<typeof lineUpdatesOf>) => Promise<unknown>;
+    onRemove: (line: EstimateLine) => void;
+  };
+}
+
+/** The rows; in edit mode `rowKeys` are the field array's keys, one per line in order. */
+function LineRows({ tier, currency, edit, rowKeys }: TableProps & { rowKeys?: string[] }) {
+  const units = useUnits();
+  return (
+    <tbody>
+      {tier.lines.map((line, index) => {
+        const bound = edit && rowKeys?.[index] !== undefined;
+        return (
+          <tr key={rowKeys?.[index] ?? line.id} className="border-b border-line align-top">
+            <th scope="row" className={`${th} font-normal`}>
+              <span className="font-semibold">{line.label}</span>
+              {line.taxable ? null : <span className="text-sm text-ink-muted"> (not taxed)</span>}
+              {/* On a phone the source goes under the label, so the figures keep their room. */}
+              <span className="block md:hidden">
+                <LineSource line={line} currency={currency} />
+              </span>
+            </th>
+            <td className={num}>
+              {bound ? (
+                <span className="inline-flex items-center gap-2">
+                  <LineCellInput
+                    name={`rows.${index}.quantity`}
+                    label={`Quantity of ${line.label}`}
+                  />
+                  <span className="text-sm">{line.unit}</span>
+                </span>
+              ) : (
+                lineQuantityText(units, line.quantity, line.unit)
+              )}
+            </td>
+            <td className={num}>
+              {bound ? (
+                <LineCellInput
+                  name={`rows.${index}.unitPrice`}
+                  label={`Unit price of ${line.label}`}
+                />
+              ) : (
+                formatCents(line.unitPriceCents, currency)
+              )}
+            </td>
+            <td className={num}>{formatCents(line.amountCents, currency)}</td>
+            <td className={`${th} hidden md:table-cell`}>
+              <LineSource line={line} currency={currency} />
+            </td>
+            {edit ? (
+              <td className="py-2">
+                <Button
+                  variant="quietDanger"
+                  aria-label={`Remove ${line.label}`}
+                  onClick={() => edit.onRemove(line)}
+                >
+                  Remove
+                </Button>
+              </td>
+            ) : null}
+          </tr>
+        );
+      })}
+    </tbody>
+  );
+}
+
+/** The form's rows as a field array: each line's inputs are `rows.N.quantity` and `rows.N.unitPrice`. */
+function EditableRows(props: TableProps) {
+  const { control } = useFormContext<{ rows: LineRow[] }>();
+  const { fields } = useFieldArray({ control, name: 'rows', keyName: 'key' });
+  return <LineRows {...props} rowKeys={fields.map((field) => field.key)} />;
+}
+
+function LinesTable(props: TableProps) {
+  return (
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-white px-4">
+      <table className="w-full border-collapse text-left">
+        <caption className="sr-only">Lines of {props.tier.name}</caption>
+        <thead>
+          <tr className="border-b-2 border-line-strong text-sm text-ink-muted">
+            <th scope="col" className={th}>
+              Item
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              Quantity
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              Unit price
+            </th>
+            <th scope="col" className={`${th} text-right`}>
+              Amount
+            </th>
+            <th scope="col" className={`${th} hidden md:table-cell`}>
+              Source
+            </th>
+            {props.edit ? (
+              <th scope="col" className="py-2">
+                <span className="sr-only">Remove</span>
+              </th>
+            ) : null}
+          </tr>
+        </thead>
+        {props.edit ? <EditableRows {...props} /> : <LineRows {...props} />}
+      </table>
+    </div>
+  );
+}
+
+/**
+ * A tier's lines: read-only, or (draft) with each line's quantity and unit price editable in
+ * one form; saving sends only the changed lines, and the server prices them again.
+ */
+export function TierLinesTable(props: TableProps) {
+  const { tier, edit } = props;
+  if (tier.lines.length === 0) return <p>No lines in this option yet.</p>;
+  if (!edit) return <LinesTable {...props} />;
+  return (
+    <Form
+      schema={lineRowsSchema}
+      defaultValues={{ rows: lineRowsOf(tier.lines) }}
+      aria-label={`Lines of ${tier.name}`}
+      onSubmit={async (values) => {
+        const updates = lineUpdatesOf(tier.lines, values.rows);
+        if (updates.length > 0) await edit.onSave(updates);
+      }}
+    >
+      <LinesTable {...props} />
+      <div>
+        <SubmitButton busyLabel="Saving…">Save line changes</SubmitButton>
+      </div>
+    </Form>
+  );
+}
