@@ -30,7 +30,10 @@ function LineRows({ tier, currency, edit, rowKeys }: TableProps & { rowKeys?: st
       {tier.lines.map((line, index) => {
         const bound = edit && rowKeys?.[index] !== undefined;
         return (
-          <tr key={rowKeys?.[index] ?? line.id} className="border-b border-line align-top">
+          <tr
+            key={rowKeys?.[index] ?? line.id}
+            className={`border-b border-line ${bound ? 'align-middle' : 'align-top'}`}
+          >
             <th scope="row" className={`${th} font-normal`}>
               <span className="font-semibold">{line.label}</span>
               {line.taxable ? null : <span className="text-sm text-ink-muted"> (not taxed)</span>}
@@ -46,7 +49,7 @@ function LineRows({ tier, currency, edit, rowKeys }: TableProps & { rowKeys?: st
                     name={`rows.${index}.quantity`}
                     label={`Quantity of ${line.label}`}
                   />
-                  <span className="text-sm">{line.unit}</span>
+                  <span className="w-10 text-left text-sm">{line.unit}</span>
                 </span>
               ) : (
                 lineQuantityText(units, line.quantity, line.unit)
