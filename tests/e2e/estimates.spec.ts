@@ -142,6 +142,8 @@ test('owner builds an estimate from the job page, edits lines and adds an option
   await page.setViewportSize({ width: 390, height: 844 });
   await expectNoSidewaysScroll(page);
   await page.screenshot({ path: '../.tmp/screens/estimate-phone.png', fullPage: true });
+  await lines.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: '../.tmp/screens/estimate-phone-lines.png' });
   await expectAccessible(page, 'Estimate on a phone');
   await page.setViewportSize({ width: 1280, height: 800 });
 

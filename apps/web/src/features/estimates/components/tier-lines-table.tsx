@@ -1,16 +1,10 @@
 import { useFieldArray, useFormContext } from 'react-hook-form';
 import type { EstimateLine, EstimateTier } from '@seamwright/shared';
-import { Button } from '../../../components/ui/button';
 import { Form, SubmitButton } from '../../../components/ui/form';
-import { formatCents } from '../../../lib/money';
-import { useUnits } from '../../../lib/units';
-import { lineQuantityText } from '../utils/estimate-words';
 import { lineRowsOf, lineRowsSchema, lineUpdatesOf, type LineRow } from '../utils/line-edits';
-import { LineCellInput } from './line-cell-input';
-import { LineSource } from './line-source';
+import { TierLineRow } from './tier-line-row';
 
 const th = 'py-2 pr-3';
-const num = `${th} text-right tabular-nums whitespace-nowrap`;
 
 interface TableProps {
   tier: EstimateTier;
@@ -24,65 +18,17 @@ interface TableProps {
 
 /** The rows; in edit mode `rowKeys` are the field array's keys, one per line in order. */
 function LineRows({ tier, currency, edit, rowKeys }: TableProps & { rowKeys?: string[] }) {
-  const units = useUnits();
   return (
-    <tbody>
-      {tier.lines.map((line, index) => {
-        const bound = edit && rowKeys?.[index] !== undefined;
-        return (
-          <tr
-            key={rowKeys?.[index] ?? line.id}
-            className={`border-b border-line ${bound ? 'align-middle' : 'align-top'}`}
-          >
-            <th scope="row" className={`${th} font-normal`}>
-              <span className="font-semibold">{line.label}</span>
-              {line.taxable ? null : <span className="text-sm text-ink-muted"> (not taxed)</span>}
-              {/* On a phone the source goes under the label, so the figures keep their room. */}
-              <span className="block md:hidden">
-                <LineSource line={line} currency={currency} />
-              </span>
-            </th>
-            <td className={num}>
-              {bound ? (
-                <span className="inline-flex items-center gap-2">
-                  <LineCellInput
-                    name={`rows.${index}.quantity`}
-                    label={`Quantity of ${line.label}`}
-                  />
-                  <span className="w-10 text-left text-sm">{line.unit}</span>
-                </span>
-              ) : (
-                lineQuantityText(units, line.quantity, line.unit)
-              )}
-            </td>
-            <td className={num}>
-              {bound ? (
-                <LineCellInput
-                  name={`rows.${index}.unitPrice`}
-                  label={`Unit price of ${line.label}`}
-                />
-              ) : (
-                formatCents(line.unitPriceCents, currency)
-              )}
-            </td>
-            <td className={num}>{formatCents(line.amountCents, currency)}</td>
-            <td className={`${th} hidden md:table-cell`}>
-              <LineSource line={line} currency={currency} />
-            </td>
-            {edit ? (
-              <td className="py-2">
-                <Button
-                  variant="quietDanger"
-                  aria-label={`Remove ${line.label}`}
-                  onClick={() => edit.onRemove(line)}
-                >
-                  Remove
-                </Button>
-              </td>
-            ) : null}
-          </tr>
-        );
-      })}
+    <tbody className="max-sm:block">
+      {tier.lines.map((line, index) => (
+        <TierLineRow
+          key={rowKeys?.[index] ?? line.id}
+          line={line}
+          currency={currency}
+          index={edit && rowKeys?.[index] !== undefined ? index : undefined}
+          onRemove={edit?.onRemove}
+        />
+      ))}
     </tbody>
   );
 }
@@ -97,9 +43,9 @@ function EditableRows(props: TableProps) {
 function LinesTable(props: TableProps) {
   return (
     <div className="relative overflow-x-auto rounded-lg border border-line bg-white px-4">
-      <table className="w-full border-collapse text-left">
+      <table className="w-full border-collapse text-left max-sm:block">
         <caption className="sr-only">Lines of {props.tier.name}</caption>
-        <thead>
+        <thead className="max-sm:sr-only">
           <tr className="border-b-2 border-line-strong text-sm text-ink-muted">
             <th scope="col" className={th}>
               Item
