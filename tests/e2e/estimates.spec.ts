@@ -92,7 +92,7 @@ test('owner builds an estimate from the job page, edits lines and adds an option
   await expect(page.getByText('Draft', { exact: true })).toBeVisible();
   const lines = page.getByRole('table', { name: 'Lines of Standard' });
   await expect(lines.locator('tbody tr')).not.toHaveCount(0);
-  // (The source column; on a phone the same words sit under the item.)
+  // (The source column; below 1024 px the same words sit under the item.)
   await expect(lines.locator('td').getByText('From the takeoff').first()).toBeVisible();
   await expect(page.getByText('How the figures are rounded:')).toBeVisible();
   await expect(page.getByRole('link', { name: 'Download PDF' })).toHaveAttribute(

@@ -24,6 +24,25 @@ function PhoneWord({ children }: { children: ReactNode }) {
   );
 }
 
+function RemoveButton({
+  line,
+  onRemove,
+}: {
+  line: EstimateLine;
+  onRemove: (line: EstimateLine) => void;
+}) {
+  return (
+    <Button
+      variant="quietDanger"
+      className="-ml-4 lg:ml-0"
+      aria-label={`Remove ${line.label}`}
+      onClick={() => onRemove(line)}
+    >
+      Remove
+    </Button>
+  );
+}
+
 /** One line of a tier; with `index` its quantity and unit price are the form's inputs. */
 export function TierLineRow({
   line,
@@ -44,9 +63,10 @@ export function TierLineRow({
       <th scope="row" className={`${cellClasses} font-normal max-sm:col-span-2`}>
         <span className="font-semibold">{line.label}</span>
         {line.taxable ? null : <span className="text-sm text-ink-muted"> (not taxed)</span>}
-        {/* Below `md` the source goes under the label, so the figures keep their room. */}
-        <span className="block md:hidden">
+        {/* Below `lg` the source (and Remove) go under the label, so the figures keep their room. */}
+        <span className="block lg:hidden">
           <LineSource line={line} currency={currency} />
+          {onRemove ? <RemoveButton line={line} onRemove={onRemove} /> : null}
         </span>
       </th>
       <td className={figure}>
@@ -74,18 +94,12 @@ export function TierLineRow({
           {formatCents(line.amountCents, currency)}
         </span>
       </td>
-      <td className={`${cellClasses} hidden md:table-cell`}>
+      <td className={`${cellClasses} hidden lg:table-cell`}>
         <LineSource line={line} currency={currency} />
       </td>
       {onRemove ? (
-        <td className="py-2 max-sm:py-0 max-sm:text-right">
-          <Button
-            variant="quietDanger"
-            aria-label={`Remove ${line.label}`}
-            onClick={() => onRemove(line)}
-          >
-            Remove
-          </Button>
+        <td className="hidden py-2 lg:table-cell">
+          <RemoveButton line={line} onRemove={onRemove} />
         </td>
       ) : null}
     </tr>

@@ -59,11 +59,11 @@ function LinesTable(props: TableProps) {
             <th scope="col" className={`${th} text-right`}>
               Amount
             </th>
-            <th scope="col" className={`${th} hidden md:table-cell`}>
+            <th scope="col" className={`${th} hidden lg:table-cell`}>
               Source
             </th>
             {props.edit ? (
-              <th scope="col" className="py-2">
+              <th scope="col" className="hidden py-2 lg:table-cell">
                 <span className="sr-only">Remove</span>
               </th>
             ) : null}
