@@ -163,6 +163,6 @@ test('owner builds an estimate from the job page, edits lines and adds an option
   await pad.goto(estimateUrl);
   await expect(pad.getByRole('heading', { level: 2, name: 'Pet turf' })).toBeVisible();
   await expectNoSidewaysScroll(pad);
-  await pad.screenshot({ path: '../.tmp/screens/estimate-tablet.png', fullPage: true });
+  await pad.screenshot({ path: '../.tmp/screens/estimate-tablet.png' });
   await tablet.close();
 });
