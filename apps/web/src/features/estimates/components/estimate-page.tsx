@@ -42,8 +42,9 @@ export function EstimatePage({
   const turfProducts = useTurfChoices(editable);
   const onPatch = editable
     ? async (input: UpdateEstimateInput) => {
-        await update.mutateAsync(input);
+        const next = await update.mutateAsync(input);
         onChanged();
+        return next;
       }
     : undefined;
   return (
@@ -75,7 +76,7 @@ export function EstimatePage({
       </div>
       {estimate.tiers.map((tier) => (
         <TierSection
-          key={`${tier.id}-${estimate.updatedAt}`}
+          key={tier.id}
           tier={tier}
           tierCount={estimate.tiers.length}
           currency={currency}
@@ -91,7 +92,6 @@ export function EstimatePage({
           Terms
         </h2>
         <EstimateTerms
-          key={estimate.updatedAt}
           estimate={estimate}
           currency={currency}
           formatDay={formatDay}

@@ -59,7 +59,7 @@ export function EstimateTerms({
   currency: string;
   /** A calendar date as people read it. */
   formatDay: (isoDate: string) => string;
-  onPatch?: (input: UpdateEstimateInput) => Promise<unknown>;
+  onPatch?: (input: UpdateEstimateInput) => Promise<EstimateView>;
 }) {
   if (!onPatch)
     return (
@@ -84,7 +84,10 @@ export function EstimateTerms({
       defaultValues={termsDefaults(estimate)}
       aria-label="Terms of the estimate"
       className="rounded-lg border border-line bg-white p-4"
-      onSubmit={(values) => onPatch(termsPatchOf(values))}
+      onSubmit={async (values, methods) => {
+        // The same form takes the saved terms (what was typed stays through other edits).
+        methods.reset(termsDefaults(await onPatch(termsPatchOf(values))));
+      }}
     >
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField name="validUntil" label="Valid until" type="date" />

@@ -11,7 +11,8 @@ interface TableProps {
   currency: string;
   /** Given while the estimate is a draft the user may change. */
   edit?: {
-    onSave: (updates: ReturnType<typeof lineUpdatesOf>) => Promise<unknown>;
+    /** Answers the tier's lines as the server saved them. */
+    onSave: (updates: ReturnType<typeof lineUpdatesOf>) => Promise<EstimateLine[]>;
     onRemove: (line: EstimateLine) => void;
   };
 }
@@ -88,9 +89,13 @@ export function TierLinesTable(props: TableProps) {
       schema={lineRowsSchema}
       defaultValues={{ rows: lineRowsOf(tier.lines) }}
       aria-label={`Lines of ${tier.name}`}
-      onSubmit={async (values) => {
+      // A new form when lines come or go; after a save the same form (focus stays on Save)
+      // takes the server's figures.
+      key={tier.lines.map((line) => line.id).join()}
+      onSubmit={async (values, methods) => {
         const updates = lineUpdatesOf(tier.lines, values.rows);
-        if (updates.length > 0) await edit.onSave(updates);
+        if (updates.length === 0) return;
+        methods.reset({ rows: lineRowsOf(await edit.onSave(updates)) });
       }}
     >
       <LinesTable {...props} />

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import type { UpdateEstimateInput } from '@seamwright/shared';
+import type { EstimateView, UpdateEstimateInput } from '@seamwright/shared';
 import { testSession, WithSession } from '../../../test/session-fixture';
 import { sampleEstimate } from '../test/sample-estimate';
 import { TierSection } from './tier-section';
@@ -8,7 +8,7 @@ import { TierSection } from './tier-section';
 const estimate = sampleEstimate();
 const tier = estimate.tiers[0]!;
 
-function renderTier(onPatch?: (input: UpdateEstimateInput) => Promise<unknown>) {
+function renderTier(onPatch?: (input: UpdateEstimateInput) => Promise<EstimateView>) {
   render(
     <WithSession me={testSession()}>
       <TierSection
@@ -50,7 +50,7 @@ describe('TierSection', () => {
     const sent: UpdateEstimateInput[] = [];
     renderTier((input) => {
       sent.push(input);
-      return Promise.resolve();
+      return Promise.resolve(estimate);
     });
     fireEvent.change(screen.getByLabelText('Quantity of Landscape turf'), {
       target: { value: '650' },
@@ -58,13 +58,19 @@ describe('TierSection', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Save line changes' }));
     await waitFor(() => expect(sent).toHaveLength(1));
     expect(sent[0]).toEqual({ lines: { update: [{ id: tier.lines[0]!.id, quantity: 650 }] } });
+    // The form then shows what the server saved (this fake answers the sample unchanged).
+    await waitFor(() =>
+      expect(screen.getByLabelText<HTMLInputElement>('Quantity of Landscape turf').value).toBe(
+        '600',
+      ),
+    );
   });
 
   it('says what is wrong with a typed quantity and sends nothing', async () => {
     const sent: UpdateEstimateInput[] = [];
     renderTier((input) => {
       sent.push(input);
-      return Promise.resolve();
+      return Promise.resolve(estimate);
     });
     fireEvent.change(screen.getByLabelText('Unit price of Seam tape'), {
       target: { value: 'forty' },

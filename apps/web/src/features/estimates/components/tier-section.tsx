@@ -1,6 +1,11 @@
 import { useState } from 'react';
 import { z } from 'zod';
-import type { EstimateLine, EstimateTier, UpdateEstimateInput } from '@seamwright/shared';
+import type {
+  EstimateLine,
+  EstimateTier,
+  EstimateView,
+  UpdateEstimateInput,
+} from '@seamwright/shared';
 import { Button } from '../../../components/ui/button';
 import { FormAlert } from '../../../components/ui/form-alert';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
@@ -20,7 +25,7 @@ interface TierSectionProps {
   currency: string;
   taxRateBasisPoints: number;
   /** Given while the estimate is a draft the user may change; each call PATCHes. */
-  onPatch?: (input: UpdateEstimateInput) => Promise<unknown>;
+  onPatch?: (input: UpdateEstimateInput) => Promise<EstimateView>;
 }
 
 /** One tier (an option the customer can choose): its lines, totals and, in a draft, its edits. */
@@ -55,7 +60,7 @@ export function TierSection({
   return (
     <section aria-labelledby={headingId} className="flex flex-col gap-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 id={headingId} className="text-xl font-bold">
+        <h2 id={headingId} tabIndex={-1} className="text-xl font-bold">
           {tier.name}
         </h2>
         {onPatch && !renaming ? (
@@ -98,7 +103,10 @@ export function TierSection({
         edit={
           onPatch
             ? {
-                onSave: (update) => onPatch({ lines: { update } }),
+                onSave: async (update) => {
+                  const next = await onPatch({ lines: { update } });
+                  return next.tiers.find((entry) => entry.id === tier.id)?.lines ?? tier.lines;
+                },
                 onRemove: setRemovingLine,
               }
             : undefined
@@ -118,6 +126,8 @@ export function TierSection({
         confirmLabel="Remove line"
         isBusy={busy}
         onCancel={() => setRemovingLine(null)}
+        // The row and its button go with the line; focus goes to the option's heading.
+        fallbackFocus={() => document.getElementById(headingId)}
         onConfirm={() => {
           const line = removingLine;
           if (line) void run({ lines: { remove: [line.id] } }).finally(() => setRemovingLine(null));
