@@ -134,6 +134,14 @@ test('owner builds an estimate from the job page, edits lines and adds an option
   await expect(page.getByRole('table', { name: 'Lines of Pet turf' })).toContainText(
     'Haul away old sod',
   );
+  // A fixed deposit instead of the company's percent: the server's deposit follows.
+  const terms = page.getByRole('form', { name: 'Terms of the estimate' });
+  await terms.getByRole('radio', { name: 'A fixed amount' }).check();
+  await terms.getByLabel('Deposit amount').fill('500');
+  await terms.getByRole('button', { name: 'Save terms' }).click();
+  await expect(
+    page.getByRole('region', { name: 'Pet turf', exact: true }).getByRole('definition').nth(3),
+  ).toHaveText('$500.00');
   const estimateUrl = page.url();
 
   // Desktop and phone pictures; the phone never scrolls the whole page sideways.
