@@ -1,7 +1,7 @@
 // Estimates: the owner builds an estimate from a job's area on the job page (first refused,
 // with the reason, while the job has no area), reads its lines and totals, changes a quantity
-// and sees the server's new total, types a line by hand and offers a second option; then the
-// estimate on a tablet and on a phone, never wider than the screen. Sending and the PDF come
+// and sees the server's new total, types a line by hand, offers a second option and sets a
+// fixed deposit; then the estimate on a tablet and on a phone, never wider than the screen. Sending and the PDF come
 // with their own step (their routes are another piece of work).
 import { expect, test, type Page } from '@playwright/test';
 import { expectAccessible } from './support/a11y';
@@ -150,8 +150,11 @@ test('owner builds an estimate from the job page, edits lines and adds an option
   await page.setViewportSize({ width: 390, height: 844 });
   await expectNoSidewaysScroll(page);
   await page.screenshot({ path: '../.tmp/screens/estimate-phone.png', fullPage: true });
+  await page.screenshot({ path: '../.tmp/screens/estimate-phone-top.png' });
   await lines.scrollIntoViewIfNeeded();
   await page.screenshot({ path: '../.tmp/screens/estimate-phone-lines.png' });
+  await terms.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: '../.tmp/screens/estimate-phone-terms.png' });
   await expectAccessible(page, 'Estimate on a phone');
   await page.setViewportSize({ width: 1280, height: 800 });
 

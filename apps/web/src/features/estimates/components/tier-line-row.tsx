@@ -63,11 +63,16 @@ export function TierLineRow({
       <th scope="row" className={`${cellClasses} font-normal max-sm:col-span-2`}>
         <span className="font-semibold">{line.label}</span>
         {line.taxable ? null : <span className="text-sm text-ink-muted"> (not taxed)</span>}
-        {/* Below `lg` the source (and Remove) go under the label, so the figures keep their room. */}
+        {/* Below `lg` the source goes under the label (on a tablet Remove too), so the figures
+            keep their room; on a phone Remove ends the stacked line. */}
         <span className="block lg:hidden">
           <LineSource line={line} currency={currency} />
-          {onRemove ? <RemoveButton line={line} onRemove={onRemove} /> : null}
         </span>
+        {onRemove ? (
+          <span className="hidden sm:max-lg:block">
+            <RemoveButton line={line} onRemove={onRemove} />
+          </span>
+        ) : null}
       </th>
       <td className={figure}>
         <PhoneWord>Quantity</PhoneWord>
@@ -98,7 +103,7 @@ export function TierLineRow({
         <LineSource line={line} currency={currency} />
       </td>
       {onRemove ? (
-        <td className="hidden py-2 lg:table-cell">
+        <td className="hidden py-2 max-sm:block max-sm:py-0 max-sm:text-right lg:table-cell">
           <RemoveButton line={line} onRemove={onRemove} />
         </td>
       ) : null}
