@@ -45,6 +45,7 @@ export const router = createBrowserRouter([
           { path: '/jobs/:jobId/areas/new', lazy: () => import('./routes/new-area') },
           { path: '/areas/:areaId', lazy: () => import('./routes/area') },
           { path: '/areas/:areaId/edit', lazy: () => import('./routes/edit-area') },
+          { path: '/estimates/:estimateId', lazy: () => import('./routes/estimate') },
           { path: '/layout', lazy: () => import('./routes/layout-preview') },
           { path: '/stock', lazy: () => import('./routes/stock') },
           { path: '/stock/receive', lazy: () => import('./routes/stock-receive') },

@@ -19,6 +19,7 @@ export const paths = {
   newArea: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/areas/new`,
   area: (id: string) => `/areas/${encodeURIComponent(id)}`,
   editArea: (id: string) => `/areas/${encodeURIComponent(id)}/edit`,
+  estimate: (id: string) => `/estimates/${encodeURIComponent(id)}`,
   layout: '/layout',
   stock: '/stock',
   receiveStock: '/stock/receive',

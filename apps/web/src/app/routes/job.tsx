@@ -10,14 +10,17 @@ import { useCan, useSession } from '../../lib/session';
 import { jobAreasQueryOptions } from '../../features/areas/api/get-job-areas';
 import { jobTakeoffQueryOptions } from '../../features/areas/api/get-job-takeoff';
 import { JobAreasSection } from '../../features/areas/components/job-areas-section';
+import { jobEstimatesQueryOptions } from '../../features/estimates/api/get-job-estimates';
+import { JobEstimatesSection } from '../../features/estimates/components/job-estimates-section';
 import { jobQueryOptions, useJob } from '../../features/jobs/api/get-job';
+import { jobKeys } from '../../features/jobs/api/job-keys';
 import { JobPage } from '../../features/jobs/components/job-page';
 import { statusLabel } from '../../features/jobs/components/job-status';
 import { JobTurfPanel } from '../../features/stock/components/job-turf-panel';
 import { RouteError } from './route-error';
 import { sessionCan } from './guard';
 
-/** Areas can change while the job is a lead or estimated (the API's rule). */
+/** Areas and estimates can change while the job is a lead or estimated (the API's rule). */
 const areaEditableStatuses = new Set(['lead', 'estimated']);
 
 export async function loader({ params }: LoaderFunctionArgs) {
@@ -28,6 +31,8 @@ export async function loader({ params }: LoaderFunctionArgs) {
     void queryClient.prefetchQuery(jobAreasQueryOptions(jobId));
     void queryClient.prefetchQuery(jobTakeoffQueryOptions(jobId));
   }
+  if (await sessionCan('estimates.read'))
+    void queryClient.prefetchQuery(jobEstimatesQueryOptions(jobId));
   await queryClient.ensureQueryData(jobQueryOptions(jobId));
   return null;
 }
@@ -39,6 +44,8 @@ function JobRoute({ jobId }: { jobId: string }) {
   const canReadAreas = useCan('areas.read');
   const canWriteAreas = useCan('areas.write');
   const canWriteStock = useCan('inventory.write');
+  const canReadEstimates = useCan('estimates.read');
+  const canWriteEstimates = useCan('estimates.write');
   return (
     <>
       <p className="mb-2 print:hidden">
@@ -68,6 +75,21 @@ function JobRoute({ jobId }: { jobId: string }) {
           <RegionErrorBoundary>
             <JobTurfPanel jobId={jobId} jobStatus={job.status} canWrite={canWriteStock} />
           </RegionErrorBoundary>
+        }
+        estimates={
+          canReadEstimates ? (
+            <RegionErrorBoundary>
+              <Suspense fallback={<Loading label="Loading the estimates…" />}>
+                <JobEstimatesSection
+                  jobId={jobId}
+                  canBuild={canWriteEstimates && areaEditableStatuses.has(job.status)}
+                  onBuilt={() => {
+                    void queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
+                  }}
+                />
+              </Suspense>
+            </RegionErrorBoundary>
+          ) : undefined
         }
       />
     </>

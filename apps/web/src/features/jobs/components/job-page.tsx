@@ -29,6 +29,7 @@ export function JobPage({
   timeZone,
   areas,
   turf,
+  estimates,
 }: {
   job: JobDetailView;
   canWrite: boolean;
@@ -40,6 +41,8 @@ export function JobPage({
    * composed by the route (stock is its own feature).
    */
   turf?: ReactNode;
+  /** The estimates section, composed by the route (estimates are their own feature). */
+  estimates?: ReactNode;
 }) {
   const update = useUpdateJob(job.id);
   const site = job.site;
@@ -94,10 +97,11 @@ export function JobPage({
       {/* The turf panel is a section of its own, with its heading. */}
       {turf ?? null}
       <Section id="job-estimates" title="Estimates">
-        <EmptyState title="No estimates yet">
-          Estimate versions built from the areas&apos; takeoff will be listed here, each with its
-          PDF and the customer&apos;s acceptance.
-        </EmptyState>
+        {estimates ?? (
+          <EmptyState title="No estimates to show">
+            Your role does not show the estimates and their prices.
+          </EmptyState>
+        )}
       </Section>
       <Section id="job-documents" title="Documents">
         <EmptyState title="No documents yet">
