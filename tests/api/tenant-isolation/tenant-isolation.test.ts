@@ -321,6 +321,10 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/revisions`, {})),
   },
+  'get /api/estimates/:id/pdf': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/estimates/${w.aEstimateId}/pdf`)),
+  },
   'get /api/areas/:id': {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}`)),

@@ -12,4 +12,5 @@ export function registerEstimatesRoutes(routes: RouteTable, deps: ServiceDeps): 
   routes.add('get', '/estimates/:id', read, handlers.get);
   routes.add('patch', '/estimates/:id', write, handlers.update);
   routes.add('post', '/estimates/:id/revisions', write, handlers.revise);
+  routes.add('get', '/estimates/:id/pdf', read, handlers.pdf);
 }
