@@ -6,6 +6,8 @@ import { areaBody, createArea } from '../../fixtures/areas.js';
 import type { Client } from '../../fixtures/client.js';
 import { createEstimate } from '../../fixtures/estimates.js';
 import { createCustomer, createJob, createSite, uniqueEmail } from '../../fixtures/factories.js';
+import { waitForMail } from '../../fixtures/mail.js';
+import { testAppUrl } from '../../fixtures/test-env.js';
 
 export interface PricedJob {
   customerEmail: string;
@@ -38,4 +40,31 @@ export function binary(
   const chunks: Buffer[] = [];
   stream.on('data', (chunk: Buffer) => chunks.push(chunk));
   stream.on('end', () => done(null, Buffer.concat(chunks)));
+}
+
+interface MaildevAttachment {
+  fileName?: string;
+  contentType: string;
+}
+
+/** The newest message to `address`, with the attachments maildev lists for it. */
+export async function waitForEstimateMail(address: string) {
+  const message = (await waitForMail(address)) as Awaited<ReturnType<typeof waitForMail>> & {
+    attachments?: MaildevAttachment[];
+  };
+  return message;
+}
+
+/** The token of the customer-page link (`${APP_URL}/e/<token>`) in the message text. */
+export function customerToken(message: { text?: string; html?: string; subject: string }): string {
+  const escaped = `${testAppUrl}/e/`.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
+  const match = new RegExp(`${escaped}([A-Za-z0-9_-]+)`).exec(message.text ?? message.html ?? '');
+  if (!match?.[1]) throw new Error(`no customer link in "${message.subject}"`);
+  return match[1];
+}
+
+/** Sends the estimate and returns the token from the e-mail. */
+export async function sendAndReadToken(client: Client, job: PricedJob): Promise<string> {
+  await client.post(`/api/estimates/${job.estimate.id}/send`, {}).expect(200);
+  return customerToken(await waitForEstimateMail(job.customerEmail));
 }

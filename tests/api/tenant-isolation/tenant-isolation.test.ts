@@ -325,6 +325,15 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/estimates/${w.aEstimateId}/pdf`)),
   },
+  'post /api/estimates/:id/send': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.post(`/api/estimates/${w.aEstimateId}/send`, { to: 'thief@example.test' })),
+  },
+  'post /api/estimates/:id/links/revoke': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/links/revoke`, {})),
+  },
   'get /api/areas/:id': {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}`)),
@@ -559,6 +568,10 @@ async function snapshotOfA(w: World) {
     estimates: await q(
       'SELECT id, version, status, notes, tiers, updated_at FROM estimates WHERE company_id = ? ORDER BY id',
     ),
+    estimateLinks: await q(
+      'SELECT id, revoked_at FROM estimate_links WHERE company_id = ? ORDER BY id',
+    ),
+    estimateAnswers: await q('SELECT id FROM estimate_answers WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),

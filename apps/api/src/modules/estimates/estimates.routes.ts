@@ -1,5 +1,7 @@
 import type { ServiceDeps } from '../../deps.js';
 import type { RouteTable } from '../../http/route-table.js';
+import { createEstimateSendService } from './estimate-send.service.js';
+import { createEstimateSendingHandlers } from './estimate-sending.handlers.js';
 import { createEstimatesHandlers } from './estimates.handlers.js';
 import { createEstimatesService } from './estimates.service.js';
 
@@ -13,4 +15,8 @@ export function registerEstimatesRoutes(routes: RouteTable, deps: ServiceDeps): 
   routes.add('patch', '/estimates/:id', write, handlers.update);
   routes.add('post', '/estimates/:id/revisions', write, handlers.revise);
   routes.add('get', '/estimates/:id/pdf', read, handlers.pdf);
+  const sending = createEstimateSendingHandlers(createEstimateSendService(deps));
+  const send = { access: 'tenant', permission: 'estimates.send' } as const;
+  routes.add('post', '/estimates/:id/send', send, sending.send);
+  routes.add('post', '/estimates/:id/links/revoke', send, sending.revokeLinks);
 }
