@@ -63,8 +63,9 @@ export interface PublicEstimateTier {
 export interface PublicEstimateArea {
   name: string;
   areaSqFt: number;
-  outline: { outer: { x: number; y: number }[]; holes: { x: number; y: number }[][] } | null;
-  trafficPaths: { points: { x: number; y: number }[]; widthFt: number }[];
+  /** Feet, `[x, y]` with x east and y north (the planner's frame). */
+  outline: { outer: [number, number][]; holes: [number, number][][] } | null;
+  trafficPaths: { points: [number, number][]; widthFt: number }[];
   /** The saved plan's drawing fields. */
   plan: Record<string, unknown>;
 }
