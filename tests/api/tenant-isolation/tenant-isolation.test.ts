@@ -330,6 +330,31 @@ const probes: Record<string, Probe> = {
     run: (b, w) =>
       notFound(b.post(`/api/estimates/${w.aEstimateId}/send`, { to: 'thief@example.test' })),
   },
+  'post /api/estimates/:id/acceptances': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/estimates/${w.aEstimateId}/acceptances`, {
+          name: 'Mallory',
+          signedAt: new Date().toISOString(),
+          place: 'office',
+        }),
+      ),
+  },
+  // The e-mailed token is the credential and names one estimate of one company; the token
+  // tests (tests/api/estimate-sending/public-estimate.test.ts) prove tampered ones are 404.
+  'get /api/public/estimates/:token': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
+  'post /api/public/estimates/:token/accept': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
+  'post /api/public/estimates/:token/decline': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
   'post /api/estimates/:id/links/revoke': {
     kind: 'tenant',
     run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/links/revoke`, {})),
