@@ -59,7 +59,7 @@ describe('the customer’s estimate page', () => {
     expect(view.tiers).toHaveLength(1);
     expect(view.tiers[0]!.totalCents).toBe(job.estimate.totalCents);
     expect(view.tiers[0]!.depositCents).toBe(job.estimate.depositCents);
-    expect(Object.keys(view.tiers[0]!.lines[0]).sort()).toEqual(
+    expect(Object.keys(view.tiers[0]!.lines[0]!).sort()).toEqual(
       ['amountCents', 'label', 'quantity', 'unit', 'unitPriceCents'].sort(),
     );
     expect(view.areas[0]!.outline!.outer.length).toBeGreaterThan(2);
