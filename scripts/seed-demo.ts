@@ -35,6 +35,11 @@ try {
   );
   say('seed', `sign in with password "${result.password}" as:`);
   for (const user of result.users) say('seed', `  ${user.role.padEnd(10)} ${user.email}`);
+  for (const link of result.customerLinks)
+    say(
+      'seed',
+      `customer's page of "${link.jobTitle}": http://127.0.0.1:${instances.dev.apiPort}${link.path}`,
+    );
 } catch (error) {
   fail('seed', `seeding failed: ${error instanceof Error ? error.message : String(error)}`);
 } finally {

@@ -56,7 +56,33 @@ describe('demo seed', () => {
     );
     expect(held.map((row) => row.title)).toEqual([...demoReservedJobTitles].sort());
 
-    expect((await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool)).created).toBe(false);
+    // A two-option draft, one sent and waiting (its customer's page given), one signed.
+    const estimates = await selectRows<{ title: string; status: string; tiers: unknown }>(
+      sequelize,
+      `SELECT j.title, e.status, e.tiers FROM estimates e JOIN jobs j ON j.id = e.job_id
+        WHERE e.company_id = ? ORDER BY j.title`,
+      [company?.id],
+    );
+    expect(estimates.map((e) => [e.title, e.status])).toEqual([
+      ['Back yard lawn and path', 'draft'],
+      ['Front courtyard lawn', 'accepted'],
+      ['Front lawn on the slope', 'sent'],
+    ]);
+    const tiers = estimates[0]?.tiers;
+    expect((typeof tiers === 'string' ? JSON.parse(tiers) : tiers) as unknown[]).toHaveLength(2);
+    expect(first.customerLinks).toEqual([
+      { jobTitle: 'Front lawn on the slope', path: expect.stringMatching(/^\/e\/[\w-]{40,}$/) },
+    ]);
+    const [accepted] = await selectRows<{ status: string }>(
+      sequelize,
+      "SELECT status FROM jobs WHERE company_id = ? AND title = 'Front courtyard lawn'",
+      [company?.id],
+    );
+    expect(accepted?.status).toBe('accepted');
+
+    const again = await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool);
+    expect(again.created).toBe(false);
+    expect(again.customerLinks).toEqual([]);
     // A rerun adds nothing.
     expect(Number(await count('turf_reservations', company?.id))).toBe(held.length);
   });

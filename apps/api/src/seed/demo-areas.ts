@@ -113,4 +113,25 @@ export const demoAreas: DemoArea[] = [
       grain: 'cheapest',
     },
   },
+  {
+    jobTitle: 'Front courtyard lawn',
+    turfKey: 'turf-landscape-175',
+    body: {
+      name: 'Courtyard',
+      usage: 'landscape',
+      area: {
+        outer: [
+          [0, 0],
+          [22, 0],
+          [22, 16],
+          [0, 16],
+        ],
+        holes: [],
+      },
+      edges: ['hard', 'bed', 'house', 'bed'],
+      roll: { widthFt: 12 },
+      baseDepthIn: 3,
+      grain: { facing: 'N', toward: 'house' },
+    },
+  },
 ];

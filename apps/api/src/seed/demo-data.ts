@@ -24,6 +24,8 @@ import { hashPassword } from '../passwords.js';
 import { demoAreas } from './demo-areas.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 import { demoJobs } from './demo-jobs.js';
+import { seedDemoEstimates } from './demo-estimates.js';
+import type { DemoCustomerLink } from './demo-estimates.js';
 import { seedDemoStock } from './demo-stock-seed.js';
 
 /** Demo sign-in password for every demo user (local data only). */
@@ -48,6 +50,8 @@ export interface SeedResult {
   companyName: string;
   users: { email: string; role: Role }[];
   password: string;
+  /** Customer pages of demo estimates sent on this run (the token exists only here). */
+  customerLinks: DemoCustomerLink[];
 }
 
 /**
@@ -71,7 +75,8 @@ export async function seedDemoData(
   // Filled in after the company commits, each part only when missing (so a rerun completes a
   // demo that an older version of this seed made).
   await seedDemoStock(owner, { sequelize, plannerPool });
-  return { created: !existing, ...result };
+  const customerLinks = await seedDemoEstimates(owner, { sequelize });
+  return { created: !existing, ...result, customerLinks };
 }
 
 /** The demo owner's context, to act as them on an existing demo company. */

@@ -32,4 +32,6 @@ export const demoJobs: DemoJob[] = [
   { customer: 'Marisol Ketteridge', site: 0, title: 'Side yard refresh', status: 'installed' },
   { customer: 'Dunmore Pike Putting Club', site: 0, title: 'Practice green', status: 'paid' },
   { customer: 'Ines Harrowgate', site: 0, title: 'Patio surround', status: 'lost' },
+  // Estimated when seeded; its estimate is then sent and signed at the office (demo-estimates).
+  { customer: 'Ines Harrowgate', site: 0, title: 'Front courtyard lawn', status: 'estimated' },
 ];

@@ -31,7 +31,7 @@ export async function getEstimate(ctx: RequestContext, id: string): Promise<Esti
   return toEstimateView(record);
 }
 
-export function createEstimatesService(deps: ServiceDeps) {
+export function createEstimatesService(deps: Pick<ServiceDeps, 'sequelize'>) {
   const { sequelize } = deps;
 
   async function listForJob(ctx: RequestContext, jobId: string): Promise<EstimateView[]> {
