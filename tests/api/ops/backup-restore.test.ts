@@ -36,10 +36,13 @@ describe('database backup and restore', () => {
   beforeAll(async () => {
     const mariadb = await startMariadb('test', scratch.port);
     recreateDatabase(mariadb, scratch);
+    // The test app first: models bind to the Sequelize made last, which must be the scratch one
+    // for the seed's reads outside its transactions.
+    const { plannerPool } = testApp();
     const sequelize = createSequelize({ ...scratch, name: scratch.database });
     try {
       await migrateDatabase(sequelize);
-      await seedDemoData(sequelize, { bcryptCost: 4 }, testApp().plannerPool);
+      await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool);
       // Text a dump must carry exactly: quotes, a backslash, a newline, a tab, emoji, a NUL.
       await sequelize.query(
         "UPDATE customers SET notes = CONCAT('It''s \"fine\" \\\\ line\\nnext\\tcol 🌱 ', CHAR(0)) LIMIT 1",
