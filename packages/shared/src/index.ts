@@ -17,3 +17,4 @@ export * from './areas.js';
 export * from './stock.js';
 export * from './locate.js';
 export * from './estimates.js';
+export * from './estimate-sending.js';

@@ -37,6 +37,7 @@ export const actions = [
   'locate.write',
   'estimates.read',
   'estimates.write',
+  'estimates.send',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -75,6 +76,8 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // Estimates are money too: bookkeepers read them, crew leads never see them.
   'estimates.read': ['owner', 'office', 'bookkeeper'],
   'estimates.write': ['owner', 'office'],
+  // Sending to the customer, revoking links and recording a paper signature commit the company.
+  'estimates.send': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

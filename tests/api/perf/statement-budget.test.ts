@@ -68,6 +68,12 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   // The job checked (another company's is a 404) and its versions, read in parallel.
   '/api/jobs/:id/estimates': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/estimates`] },
   '/api/estimates/:id': { budget: 2, urls: (ids) => [`/api/estimates/${ids.estimateId}`] },
+  // The estimate, then its job, company, areas and takeoff (job, areas, settings) in parallel,
+  // then the customer and site: what the document prints comes from six tables.
+  '/api/estimates/:id/pdf': {
+    budget: 10,
+    urls: (ids) => [`/api/estimates/${ids.estimateId}/pdf`],
+  },
 };
 
 interface Ids {
@@ -134,6 +140,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id/reservations',
       '/api/jobs/:id/locate-tickets',
       '/api/jobs/:id/estimates',
+      '/api/estimates/:id/pdf',
     ]);
   });
 

@@ -156,4 +156,35 @@ describe('permissions per role', () => {
     ]);
     expect(rows).toEqual([{ notes: 'Office note' }]);
   });
+
+  it('sending, revoking links and recording a paper signature: owners and office only', async () => {
+    const { sequelize } = testApp();
+    expect(permissionTable['estimates.send']).toEqual(['owner', 'office']);
+    const jobId = (await createJob(owner.client, customerId, siteId)).id;
+    await office.client.post(`/api/jobs/${jobId}/areas`, areaBody()).expect(201);
+    const made = await office.client.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
+    const estimateId = (made.body as { data: { id: string } }).data.id;
+    const paper = { name: 'Buyer', signedAt: new Date().toISOString(), place: 'office' };
+    for (const who of [bookkeeper, crew]) {
+      for (const res of [
+        await who.client.post(`/api/estimates/${estimateId}/send`, {}),
+        await who.client.post(`/api/estimates/${estimateId}/links/revoke`, {}),
+        await who.client.post(`/api/estimates/${estimateId}/acceptances`, paper),
+      ]) {
+        expect(res.status).toBe(403);
+        expect(res.body.code).toBe('FORBIDDEN');
+      }
+    }
+    // The PDF is read access: bookkeepers yes, crew leads no.
+    expect((await crew.client.get(`/api/estimates/${estimateId}/pdf`)).status).toBe(403);
+    await office.client.post(`/api/estimates/${estimateId}/send`, {}).expect(200);
+    await owner.client.post(`/api/estimates/${estimateId}/links/revoke`, {}).expect(200);
+    await office.client.post(`/api/estimates/${estimateId}/acceptances`, paper).expect(201);
+    const rows = await selectRows(
+      sequelize,
+      'SELECT kind, place FROM estimate_answers WHERE estimate_id = ?',
+      [estimateId],
+    );
+    expect(rows).toEqual([{ kind: 'accepted', place: 'office' }]);
+  });
 });

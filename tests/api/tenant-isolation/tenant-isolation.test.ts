@@ -321,6 +321,44 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/revisions`, {})),
   },
+  'get /api/estimates/:id/pdf': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/estimates/${w.aEstimateId}/pdf`)),
+  },
+  'post /api/estimates/:id/send': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.post(`/api/estimates/${w.aEstimateId}/send`, { to: 'thief@example.test' })),
+  },
+  'post /api/estimates/:id/acceptances': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/estimates/${w.aEstimateId}/acceptances`, {
+          name: 'Mallory',
+          signedAt: new Date().toISOString(),
+          place: 'office',
+        }),
+      ),
+  },
+  // The e-mailed token is the credential and names one estimate of one company; the token
+  // tests (tests/api/estimate-sending/public-estimate.test.ts) prove tampered ones are 404.
+  'get /api/public/estimates/:token': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
+  'post /api/public/estimates/:token/accept': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
+  'post /api/public/estimates/:token/decline': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
+  'post /api/estimates/:id/links/revoke': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/links/revoke`, {})),
+  },
   'get /api/areas/:id': {
     kind: 'tenant',
     run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}`)),
@@ -555,6 +593,10 @@ async function snapshotOfA(w: World) {
     estimates: await q(
       'SELECT id, version, status, notes, tiers, updated_at FROM estimates WHERE company_id = ? ORDER BY id',
     ),
+    estimateLinks: await q(
+      'SELECT id, revoked_at FROM estimate_links WHERE company_id = ? ORDER BY id',
+    ),
+    estimateAnswers: await q('SELECT id FROM estimate_answers WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),

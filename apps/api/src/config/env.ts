@@ -61,6 +61,9 @@ const envSchema = z
     RATE_LIMIT_RESET_PER_TOKEN: allowance(5),
     RATE_LIMIT_ACCEPT_PER_IP: allowance(20),
     RATE_LIMIT_ACCEPT_PER_TOKEN: allowance(5),
+    /** The customer's estimate page and answers (no account: the link's token is the key). */
+    RATE_LIMIT_ESTIMATE_PER_IP: allowance(120),
+    RATE_LIMIT_ESTIMATE_PER_TOKEN: allowance(60),
     RATE_LIMIT_INVITE_PER_IP: allowance(60),
     RATE_LIMIT_INVITE_PER_USER: allowance(30),
     /** Invitation e-mails one company may send per 24 hours. */
@@ -138,6 +141,7 @@ export interface RateLimits {
   passwordReset: FlowLimit;
   invitationAccept: FlowLimit;
   invitationSend: FlowLimit;
+  estimateLink: FlowLimit;
   invitationMailsPerCompanyPerDay: number;
 }
 
@@ -233,6 +237,10 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       invitationSend: {
         perIp: e.RATE_LIMIT_INVITE_PER_IP,
         perAccount: e.RATE_LIMIT_INVITE_PER_USER,
+      },
+      estimateLink: {
+        perIp: e.RATE_LIMIT_ESTIMATE_PER_IP,
+        perAccount: e.RATE_LIMIT_ESTIMATE_PER_TOKEN,
       },
       invitationMailsPerCompanyPerDay: e.INVITATION_MAILS_PER_COMPANY_PER_DAY,
     },

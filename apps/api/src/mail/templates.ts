@@ -47,3 +47,41 @@ export function passwordResetMail(input: { name: string; link: string }): MailCo
     html: htmlFrom(lines, { href: input.link, label: 'Choose a new password' }),
   };
 }
+
+export function estimateMail(input: {
+  companyName: string;
+  customerName: string;
+  jobTitle: string;
+  validUntilText: string;
+  link: string;
+}): MailContent {
+  const lines = [
+    `Hello ${input.customerName},`,
+    `${input.companyName} has sent you an estimate for “${input.jobTitle}”. The PDF is attached.`,
+    `Open the link below to look at the estimate and the plan, and to accept or decline it. The link is private to you and works until ${input.validUntilText}.`,
+  ];
+  return {
+    subject: `Your estimate from ${input.companyName}`,
+    text: `${lines.join('\n\n')}\n\n${input.link}\n`,
+    html: htmlFrom(lines, { href: input.link, label: 'See the estimate' }),
+  };
+}
+
+export function estimateAnswerMail(input: {
+  companyName: string;
+  customerName: string;
+  jobTitle: string;
+  answer: string;
+  details: string[];
+  link: string;
+}): MailContent {
+  const lines = [
+    `${input.customerName} ${input.answer} the estimate for “${input.jobTitle}”.`,
+    ...input.details,
+  ];
+  return {
+    subject: `${input.customerName} ${input.answer} the estimate for ${input.jobTitle}`,
+    text: `${lines.join('\n\n')}\n\n${input.link}\n`,
+    html: htmlFrom(lines, { href: input.link, label: 'Open the job' }),
+  };
+}

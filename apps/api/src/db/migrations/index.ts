@@ -8,6 +8,7 @@ import { jobs } from './0007-jobs.js';
 import { priceBook } from './0008-price-book.js';
 import { jobAreas } from './0009-job-areas.js';
 import { estimates } from './0010-estimates.js';
+import { estimateLinks } from './0011-estimate-links.js';
 import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
 import type { Migration } from './types.js';
@@ -21,6 +22,7 @@ export const migrations: Migration[] = [
   priceBook,
   jobAreas,
   estimates,
+  estimateLinks,
   locateTickets,
   rollStock,
 ];

@@ -7,6 +7,8 @@ import { JobModel } from './job.model.js';
 import { JobAreaModel } from './job-area.model.js';
 import { LocateTicketModel } from './locate-ticket.model.js';
 import { EstimateModel } from './estimate.model.js';
+import { EstimateAnswerModel } from './estimate-answer.model.js';
+import { EstimateLinkModel } from './estimate-link.model.js';
 import { EstimatingSettingsModel } from './estimating-settings.model.js';
 import { InvitationModel } from './invitation.model.js';
 import { MembershipModel } from './membership.model.js';
@@ -26,6 +28,8 @@ export {
   AuditEventModel,
   CompanyModel,
   CustomerModel,
+  EstimateAnswerModel,
+  EstimateLinkModel,
   EstimateModel,
   EstimatingSettingsModel,
   InvitationModel,
@@ -62,6 +66,8 @@ const allModels = [
   RollAllocationModel,
   LocateTicketModel,
   EstimateModel,
+  EstimateLinkModel,
+  EstimateAnswerModel,
 ] as const;
 
 /**

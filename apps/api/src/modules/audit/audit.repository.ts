@@ -8,6 +8,8 @@ export interface AuditEntry {
   entity: string;
   entityId: string | null;
   data?: Record<string, unknown>;
+  /** Who acted, when not the context's user: null for the customer on their estimate page. */
+  userId?: string | null;
 }
 
 /** Appends an audit event for the acting user in their company, inside the caller's transaction. */
@@ -18,7 +20,7 @@ export async function recordAuditEvent(
 ): Promise<void> {
   await scoped(ctx, AuditEventModel).create(
     {
-      userId: ctx.userId,
+      userId: entry.userId === undefined ? ctx.userId : entry.userId,
       action: entry.action,
       entity: entry.entity,
       entityId: entry.entityId,

@@ -15,6 +15,7 @@ import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import { findSite } from '../sites/sites.repository.js';
+import { assertCancellationPeriodOver } from './job-cancellation-guard.js';
 import { applyJobStatusEffects } from './job-status-effects.js';
 import type { JobRow } from './jobs.repository.js';
 import {
@@ -130,6 +131,7 @@ export function createJobsService(sequelize: Sequelize) {
       if (input.title !== undefined && input.title !== current.title) changes.title = input.title;
       if (input.status !== undefined && input.status !== current.status) {
         checkMove(current.status, input.status);
+        await assertCancellationPeriodOver(ctx, id, input.status, tx);
         changes.status = input.status;
       }
       if (Object.keys(changes).length === 0) return;
