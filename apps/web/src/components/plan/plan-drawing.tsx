@@ -9,8 +9,17 @@ import { ScaleAndNorth } from './scale-and-north';
 import { SeamPaths } from './seam-paths';
 import { WalkwayBand, WalkwayHatch } from './walkway-band';
 
+/**
+ * What the drawing reads of a plan: the planner's whole plan, or the fields an estimate keeps
+ * of it (the customer's page gets only those).
+ */
+export type DrawablePlan = Pick<
+  LayoutPlan,
+  'pieces' | 'cuts' | 'seamLines' | 'grainAngleDeg' | 'areaSqFt' | 'orderedSqFt'
+> & { seams: Pick<LayoutPlan['seams'], 'count'> };
+
 interface PlanDrawingProps {
-  plan: LayoutPlan;
+  plan: DrawablePlan;
   /** Outer ring first, then holes (feet). */
   rings: readonly (readonly LayoutPoint[])[];
   /** Walkways (traffic paths) as drawn, each at its width in feet. */
@@ -28,7 +37,7 @@ export interface PlanWalkway {
 }
 
 /** One sentence a screen reader gives for the drawing; the figures beside it carry the numbers too. */
-export function planSummary(plan: LayoutPlan, units: Units = unitsFor('imperial')): string {
+export function planSummary(plan: DrawablePlan, units: Units = unitsFor('imperial')): string {
   const pieces = plan.pieces.length === 1 ? '1 piece' : `${plan.pieces.length} pieces`;
   const seams = plan.seams.count === 1 ? '1 seam' : `${plan.seams.count} seams`;
   return (
