@@ -124,6 +124,10 @@ test('the homeowner accepts an e-mailed estimate on a phone and the job turns ac
   await expect(thanks.getByRole('heading', { name: /Thank you/ })).toBeVisible();
   await expect(thanks.getByTestId('accepted-at')).toContainText(String(new Date().getFullYear()));
   await expect(customerPage.getByRole('button', { name: 'Accept estimate' })).toHaveCount(0);
+  await expect(
+    customerPage.getByRole('heading', { level: 2, name: 'What you accepted: Pet-friendly turf' }),
+  ).toBeVisible();
+  await expect(customerPage.getByRole('heading', { name: 'Standard turf' })).toHaveCount(0);
   await expectAccessible(customerPage, 'Customer estimate accepted');
   await customerPage.screenshot({
     path: '../.tmp/screens/customer-estimate-accepted-phone.png',

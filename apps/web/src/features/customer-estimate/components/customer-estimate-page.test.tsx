@@ -53,6 +53,9 @@ describe('the customer estimate page', () => {
       }),
     );
     expect(screen.getByRole('heading', { name: /Thank you/ })).toBeTruthy();
+    // Only the option taken is shown once accepted.
+    expect(screen.getByRole('heading', { level: 2, name: 'What you accepted: Best' })).toBeTruthy();
+    expect(screen.queryByRole('heading', { level: 3, name: 'Good' })).toBeNull();
     expect(screen.getByTestId('cancellation-ends').textContent).toMatch(
       /March 9, 2026|March 8, 2026/,
     );

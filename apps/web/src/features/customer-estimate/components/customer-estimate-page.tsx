@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import type { PublicEstimateView } from '@seamwright/shared';
+import { buttonClasses } from '../../../components/ui/button';
 import { useDocumentTitle } from '../../../lib/page-title';
 import { pageStateOf, type DeadLink, type EstimatePageState } from '../utils/answer-state';
 import { AcceptForm } from './accept-form';
@@ -22,29 +23,40 @@ export function CustomerEstimatePage({ token, view }: { token: string; view: Pub
   useDocumentTitle(`Estimate from ${view.company.name}`);
   if (dead) return <DeadLinkCard dead={dead} />;
   const state = answered ?? pageStateOf(view);
-  const severalTiers = view.tiers.length > 1;
+  // Once accepted, the option taken is the one that counts; the others would only confuse.
+  const chosen =
+    state.kind === 'accepted'
+      ? view.tiers.find((tier) => tier.id === view.chosenTierId)
+      : undefined;
+  const tiers = chosen ? [chosen] : view.tiers;
+  const severalTiers = tiers.length > 1;
   return (
     <div className="min-h-dvh bg-sand-100 px-3 py-6 sm:px-6 sm:py-10">
       <main className="mx-auto flex w-full max-w-3xl flex-col gap-8 rounded-xl border border-line bg-white p-4 shadow-sm sm:p-8">
         <EstimateHeader view={view} />
         {state.kind !== 'open' ? (
           <AnswerPanel state={state} view={view} takeFocus={answered !== null} />
-        ) : null}
+        ) : (
+          <p>
+            <a href="#accept-heading" className={buttonClasses('secondary', 'w-full sm:w-auto')}>
+              Go to accept or decline
+            </a>
+          </p>
+        )}
         <AreaPlans areas={view.areas} units={view.units} />
         <section aria-labelledby="price-heading" className="flex flex-col gap-4">
           <h2 id="price-heading" className="text-2xl font-bold">
-            {severalTiers ? 'Your options' : 'The price'}
+            {chosen
+              ? `What you accepted: ${chosen.name}`
+              : severalTiers
+                ? 'Your options'
+                : 'The price'}
           </h2>
           {severalTiers ? (
-            <p>There are {view.tiers.length} options. Choose one when you accept.</p>
+            <p>There are {tiers.length} options. Choose one when you accept.</p>
           ) : null}
-          {view.tiers.map((tier) => (
-            <TierPrice
-              key={tier.id}
-              tier={tier}
-              currency={view.currency}
-              headingLevel={severalTiers ? 3 : 2}
-            />
+          {tiers.map((tier) => (
+            <TierPrice key={tier.id} tier={tier} currency={view.currency} />
           ))}
         </section>
         <NotesAndCautions view={view} />

@@ -2,26 +2,16 @@ import type { PublicEstimateTier } from '@seamwright/shared';
 import { formatMoney, formatQuantity } from '../utils/words';
 
 /** One option: its lines as a list (a table does not fit a phone), then its totals. */
-export function TierPrice({
-  tier,
-  currency,
-  headingLevel,
-}: {
-  tier: PublicEstimateTier;
-  currency: string;
-  /** h2 when it is the only option, h3 under "Your options" otherwise. */
-  headingLevel: 2 | 3;
-}) {
-  const Heading = headingLevel === 2 ? 'h2' : 'h3';
+export function TierPrice({ tier, currency }: { tier: PublicEstimateTier; currency: string }) {
   const money = (cents: number) => formatMoney(cents, currency);
   return (
     <section
       aria-labelledby={`tier-${tier.id}`}
       className="rounded-lg border border-line bg-white p-4 sm:p-6"
     >
-      <Heading id={`tier-${tier.id}`} className="text-xl font-bold">
+      <h3 id={`tier-${tier.id}`} className="text-xl font-bold">
         {tier.name}
-      </Heading>
+      </h3>
       <ul className="mt-3 divide-y divide-line" aria-label={`What ${tier.name} includes`}>
         {tier.lines.map((line, index) => (
           <li key={index} className="flex flex-wrap items-baseline justify-between gap-x-4 py-3">
