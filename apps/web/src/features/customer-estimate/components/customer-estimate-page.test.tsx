@@ -71,3 +71,19 @@ describe('the customer estimate page', () => {
     expect(screen.queryByLabelText('Your full name')).toBeNull();
   });
 });
+
+describe('declining', () => {
+  it('opens behind a button, with an optional reason, and can be put away', () => {
+    renderPage();
+    fireEvent.click(screen.getByRole('button', { name: 'Decline this estimate' }));
+    const reason = screen.getByLabelText('Why not? (you can leave this empty)');
+    expect(reason.tagName).toBe('TEXTAREA');
+    expect(document.activeElement).toBe(reason);
+    expect(screen.getByRole('button', { name: 'Decline estimate' })).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Keep it open' }));
+    expect(screen.queryByLabelText('Why not? (you can leave this empty)')).toBeNull();
+    expect(document.activeElement).toBe(
+      screen.getByRole('button', { name: 'Decline this estimate' }),
+    );
+  });
+});

@@ -18,7 +18,7 @@ export function TierPrice({ tier, currency }: { tier: PublicEstimateTier; curren
             <span className="min-w-0 flex-1 font-medium">{line.label}</span>
             <span className="font-semibold tabular-nums">{money(line.amountCents)}</span>
             <span className="basis-full text-sm text-ink-muted">
-              {formatQuantity(line.quantity)} {line.unit} at {money(line.unitPriceCents)}
+              {formatQuantity(line.quantity, line.unit)} at {money(line.unitPriceCents)}
             </span>
           </li>
         ))}

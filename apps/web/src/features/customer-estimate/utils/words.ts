@@ -24,7 +24,22 @@ export function formatMoment(iso: string, timeZone?: string): string {
   }).format(new Date(iso));
 }
 
-/** 12.5 → "12.5", 3 → "3": quantities as printed. */
-export function formatQuantity(quantity: number): string {
-  return quantity.toLocaleString('en-US', { maximumFractionDigits: 2 });
+// The price book's plural units that read wrong after a 1 ("1 days"); others ("sq ft", "box",
+// "gal") read the same either way.
+const pluralUnits = new Set([
+  'days',
+  'rolls',
+  'loads',
+  'bags',
+  'tons',
+  'hours',
+  'pallets',
+  'boxes',
+]);
+
+/** 12.5 and "tons" → "12.5 tons", 1 and "days" → "1 day": a quantity with its unit as said aloud. */
+export function formatQuantity(quantity: number, unit: string): string {
+  const amount = quantity.toLocaleString('en-US', { maximumFractionDigits: 2 });
+  const said = quantity === 1 && pluralUnits.has(unit) ? unit.replace(/e?s$/, '') : unit;
+  return `${amount} ${said}`;
 }
