@@ -149,3 +149,82 @@ test('the homeowner accepts an e-mailed estimate on a phone and the job turns ac
   await expect(page.getByRole('heading', { level: 1, name: 'Front and side lawn' })).toBeVisible();
   await expect(page.getByRole('main').getByText('Accepted', { exact: true }).first()).toBeVisible();
 });
+
+test('a homeowner declines with a reason, and a second tab that tries to accept is told it was answered', async ({
+  page,
+  browser,
+}) => {
+  test.setTimeout(120_000);
+  await signUpCompany(page, {
+    companyName: `Thistledown Lawns ${runStamp}`,
+    name: 'Ivo Thistledown',
+    email: emailFor('owner-decline'),
+  });
+  const customerEmail = emailFor('homeowner-decline');
+  const customer = await call<{ id: string }>(page, 'POST', '/api/customers', {
+    name: 'Perpetua Ashgrove',
+    email: customerEmail,
+  });
+  const site = await call<{ id: string }>(page, 'POST', `/api/customers/${customer.id}/sites`, {
+    label: 'Home',
+    addressLine1: '3 Sorrel Way',
+    city: 'Hollin Vale',
+  });
+  const job = await call<{ id: string }>(page, 'POST', '/api/jobs', {
+    customerId: customer.id,
+    siteId: site.id,
+    title: 'Back lawn refresh',
+  });
+  const turf = await call<{ id: string; key: string }[]>(
+    page,
+    'GET',
+    '/api/price-book?kind=turf&pageSize=100',
+  );
+  // A 30 × 20 ft rectangle, as tests/fixtures/areas.ts draws it.
+  await call(page, 'POST', `/api/jobs/${job.id}/areas`, {
+    name: 'Back lawn',
+    usage: 'landscape',
+    area: {
+      outer: [
+        [0, 0],
+        [30, 0],
+        [30, 20],
+        [0, 20],
+      ],
+      holes: [],
+    },
+    roll: { widthFt: 15, maxLengthFt: 100 },
+    grain: { angleDeg: 90 },
+    turfProductId: turf.find((item) => item.key === 'turf-landscape-175')?.id,
+  });
+  const estimate = await call<{ id: string }>(page, 'POST', `/api/jobs/${job.id}/estimates`, {});
+  await call(page, 'POST', `/api/estimates/${estimate.id}/send`, {});
+  const link = await linkFromMail(customerEmail, /\/e\/[A-Za-z0-9_-]{20,}/);
+
+  const home = await browser.newContext({ baseURL: baseUrl, bypassCSP: true, viewport: phone });
+  const first = await home.newPage();
+  const second = await home.newPage();
+  await first.goto(link);
+  await second.goto(link);
+  // One option: no choice to make, and the statement names its total.
+  const accept = second.getByRole('form', { name: 'Accept this estimate' });
+  await expect(accept.getByRole('group', { name: 'Which option do you choose?' })).toHaveCount(0);
+  await expect(accept).toContainText(/do the work described above for \$[\d,]+\.\d\d/);
+
+  await first.getByRole('button', { name: 'Decline this estimate' }).click();
+  const reason = first.getByLabel('Why not? (you can leave this empty)');
+  await expect(reason).toBeFocused();
+  await reason.fill('We decided to keep the grass this year.');
+  await first.getByRole('button', { name: 'Decline estimate' }).click();
+  await expect(first.getByRole('heading', { name: 'The estimate is declined' })).toBeVisible();
+  await expectAccessible(first, 'Customer estimate declined');
+
+  // The second tab still shows the form; its answer comes too late.
+  await accept.getByLabel('Your full name').fill('Perpetua Ashgrove');
+  await accept.getByRole('button', { name: 'Accept estimate' }).click();
+  await expect(
+    second.getByRole('heading', { level: 1, name: 'This estimate has already been answered' }),
+  ).toBeVisible();
+  await expect(second.getByText(/\b409\b/)).toHaveCount(0);
+  await home.close();
+});
