@@ -45,7 +45,7 @@ export function AcceptForm({ token, view, onAccepted, onDeadLink }: Props) {
           By accepting, you agree to have {view.company.name} do the work described above
           {only
             ? ` for ${formatMoney(only.totalCents, view.currency)}`
-            : ' at the option you choose'}
+            : ' for the total of the option you choose'}
           , at these prices and on these terms. Typing your full name counts as your signature.
         </p>
         <TextField name="name" label="Your full name" autoComplete="name" />
