@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { queryClient } from '../../../lib/query-client';
 import { viewFixture } from '../../../test/public-estimate-fixture';
@@ -85,5 +85,31 @@ describe('declining', () => {
     expect(document.activeElement).toBe(
       screen.getByRole('button', { name: 'Decline this estimate' }),
     );
+  });
+});
+
+describe('the right to cancel', () => {
+  it('prints the notice when accepting here is covered, and nothing when it is not', () => {
+    renderPage(
+      viewFixture({
+        cancellation: {
+          applies: true,
+          detail: null,
+          notice: {
+            heading: 'Notice of your right to cancel',
+            statement: 'You may cancel this sale within three business days.',
+            paragraphs: ['Send or deliver a signed and dated copy of this notice.'],
+            formLines: ['I hereby cancel this transaction.', 'Signature: ________'],
+            endsOnText: 'The right to cancel ends at midnight on March 9, 2026.',
+          },
+        },
+      }),
+    );
+    const notice = screen.getByRole('region', { name: 'Notice of your right to cancel' });
+    expect(notice.textContent).toContain('The right to cancel ends at midnight on March 9, 2026.');
+    expect(notice.textContent).toContain('I hereby cancel this transaction.');
+    cleanup();
+    renderPage();
+    expect(screen.queryByRole('region', { name: 'Notice of your right to cancel' })).toBeNull();
   });
 });
