@@ -28,6 +28,8 @@ interface PlanDrawingProps {
   title?: string;
   /** Size limits of the drawing; the default suits a page's main plan. */
   className?: string;
+  /** The units of the scale bar; signed-out pages (no session) pass the company's. */
+  units?: Units;
 }
 
 /** A walkway to draw: the centre line and its width, both in feet. */
@@ -56,10 +58,12 @@ export function PlanDrawing({
   walkways,
   title = 'Layout plan',
   className = 'max-h-[60vh] lg:max-h-[34rem] print:max-h-[18cm]',
+  units: givenUnits,
 }: PlanDrawingProps) {
   // useId's punctuation is not safe inside url(#…) references, so keep letters and digits only.
   const id = `plan${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
-  const units = useUnits();
+  const sessionUnits = useUnits();
+  const units = givenUnits ?? sessionUnits;
   const frame = drawingFrame(
     plan,
     rings,

@@ -35,6 +35,7 @@ export function AreaPlans({
                 rings={drawing.rings}
                 walkways={drawing.walkways}
                 title={`Plan of ${area.name}`}
+                units={words}
                 className="max-h-[70vh] lg:max-h-[30rem]"
               />
             ) : null}
