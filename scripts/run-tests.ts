@@ -1,7 +1,7 @@
 // Purpose: `npm test` — set up a separate test MariaDB, then typecheck, lint, unit tests, API
 // tests against the real database, and end-to-end tests in Debian's Chromium; exits non-zero on
 // any failure and ends with one summary line.
-// Usage: pnpm exec tsx scripts/run-tests.ts [--only=typecheck,lint,unit,api,bundle,e2e] (normally
+// Usage: pnpm exec tsx scripts/run-tests.ts [--only=typecheck,lint,unit,api,bundle,e2e] [--spec=name,…] (normally
 // through `npm test`; `--only` runs just the named steps, for a quick check while working).
 // Safe in production? It only touches the git-ignored .data/test and .tmp folders.
 import { rmSync } from 'node:fs';
@@ -45,6 +45,10 @@ for (const key of chosen) {
     process.exit(2);
   }
 }
+
+// `--spec=estimate-acceptance,job-areas` runs just those e2e specs (names as Playwright filters).
+const specArg = process.argv.find((arg) => arg.startsWith('--spec='));
+const specs = specArg ? specArg.slice('--spec='.length).split(',').filter(Boolean) : [];
 
 const results: { step: string; ok: boolean; seconds: number }[] = [];
 let counts: Counts = zeroCounts;
@@ -113,7 +117,7 @@ await step('e2e', 'end-to-end tests (Chromium)', async () => {
     const file = join(reportDir, 'e2e.json');
     const code = await runStepAsync(
       'pnpm',
-      ['--filter', '@seamwright/tests', 'run', 'e2e', '--reporter=list,json'],
+      ['--filter', '@seamwright/tests', 'run', 'e2e', '--reporter=list,json', ...specs],
       {
         ...process.env,
         E2E_BASE_URL: baseUrl,

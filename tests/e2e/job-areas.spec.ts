@@ -4,6 +4,7 @@
 // tablet.
 import { expect, test, type Page } from '@playwright/test';
 import { expectAccessible } from './support/a11y';
+import { typeLShapedYard } from './support/area-drawing';
 import { baseUrl } from './support/servers';
 import { emailFor, rail, runStamp, signUpCompany } from './support/people';
 
@@ -33,14 +34,6 @@ async function shoot(page: Page, name: string) {
   await page.setViewportSize({ width: 1280, height: 800 });
 }
 
-/** Types one side into the editor's "Add a side" form (direction from the list, length as typed). */
-async function addSide(page: Page, direction: string, length: string) {
-  const form = page.getByRole('form', { name: 'Add a side to the outline' });
-  await form.getByLabel('Direction').selectOption({ label: direction });
-  await form.getByLabel('Length (feet)').fill(length);
-  await form.getByLabel('Length (feet)').press('Enter');
-}
-
 test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees plan and takeoff', async ({
   page,
   browser,
@@ -67,14 +60,7 @@ test('owner draws an L-shaped yard, saves it with the cheapest grain, and sees p
   await page.getByRole('link', { name: 'Add area' }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'New area' })).toBeVisible();
 
-  // The L of tests/fixtures/areas.ts: 40 ft east, 18 north, 15 west, 12 north, 25 west; the
-  // closing side runs back south. 40 × 18 + 25 × 12 = 1,020 sq ft (arithmetic).
-  await addSide(page, 'East', `40'`);
-  await addSide(page, 'North', `18' 0"`);
-  await addSide(page, 'West', '15 ft');
-  await addSide(page, 'North', `12'`);
-  await addSide(page, 'West', `25' 0"`);
-  await expect(page.getByTestId('editor-area')).toHaveText('1,020 sq ft');
+  await typeLShapedYard(page);
 
   const form = page.getByRole('form', { name: 'New area' });
   await form.getByRole('button', { name: 'Save area' }).click();

@@ -30,6 +30,7 @@ export const router = createBrowserRouter([
       { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
       { path: '/reset-password/:token', lazy: () => import('./routes/reset-password') },
       { path: '/invitations/:token', lazy: () => import('./routes/invitation') },
+      { path: '/e/:token', lazy: () => import('./routes/customer-estimate') },
       { path: '/choose-company', lazy: () => import('./routes/choose-company') },
       {
         id: 'app',

@@ -7,6 +7,8 @@ export const paths = {
   forgotPassword: '/forgot-password',
   resetPassword: (token: string) => `/reset-password/${encodeURIComponent(token)}`,
   invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  /** The customer's estimate page; the API builds the same path into the e-mail. */
+  customerEstimate: (token: string) => `/e/${encodeURIComponent(token)}`,
   today: '/',
   customers: '/customers',
   newCustomer: '/customers/new',
@@ -35,6 +37,7 @@ export const publicPathPrefixes = [
   '/forgot-password',
   '/reset-password',
   '/invitations',
+  '/e/',
 ];
 
 /** Only same-site relative paths are accepted as a return path after sign-in. */

@@ -1,10 +1,11 @@
-import type { LayoutPlan, LayoutPoint } from '@seamwright/takeoff';
+import type { LayoutPoint } from '@seamwright/takeoff';
 import type { DrawingFrame } from './drawing-frame';
+import type { DrawablePlan } from './plan-drawing';
 import { pieceTint } from './piece-tints';
 import { GrainArrow } from './grain-arrow';
 
 interface CutShapesProps {
-  plan: LayoutPlan;
+  plan: DrawablePlan;
   frame: DrawingFrame;
   /** id of the clip path holding the area, so the laid turf shows inside the outline. */
   areaClipId: string;

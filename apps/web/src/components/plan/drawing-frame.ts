@@ -18,7 +18,7 @@ export interface DrawingFrame {
 
 /** A frame around every point the drawing shows: the area, the cuts (which may run past it) and any walkway. */
 export function drawingFrame(
-  plan: LayoutPlan,
+  plan: Pick<LayoutPlan, 'cuts'>,
   rings: readonly (readonly LayoutPoint[])[],
   extra: readonly LayoutPoint[],
 ): DrawingFrame {

@@ -9,8 +9,17 @@ import { ScaleAndNorth } from './scale-and-north';
 import { SeamPaths } from './seam-paths';
 import { WalkwayBand, WalkwayHatch } from './walkway-band';
 
+/**
+ * What the drawing reads of a plan: the planner's whole plan, or the fields an estimate keeps
+ * of it (the customer's page gets only those).
+ */
+export type DrawablePlan = Pick<
+  LayoutPlan,
+  'pieces' | 'cuts' | 'seamLines' | 'grainAngleDeg' | 'areaSqFt' | 'orderedSqFt'
+> & { seams: Pick<LayoutPlan['seams'], 'count'> };
+
 interface PlanDrawingProps {
-  plan: LayoutPlan;
+  plan: DrawablePlan;
   /** Outer ring first, then holes (feet). */
   rings: readonly (readonly LayoutPoint[])[];
   /** Walkways (traffic paths) as drawn, each at its width in feet. */
@@ -19,6 +28,8 @@ interface PlanDrawingProps {
   title?: string;
   /** Size limits of the drawing; the default suits a page's main plan. */
   className?: string;
+  /** The units of the scale bar; signed-out pages (no session) pass the company's. */
+  units?: Units;
 }
 
 /** A walkway to draw: the centre line and its width, both in feet. */
@@ -28,7 +39,7 @@ export interface PlanWalkway {
 }
 
 /** One sentence a screen reader gives for the drawing; the figures beside it carry the numbers too. */
-export function planSummary(plan: LayoutPlan, units: Units = unitsFor('imperial')): string {
+export function planSummary(plan: DrawablePlan, units: Units = unitsFor('imperial')): string {
   const pieces = plan.pieces.length === 1 ? '1 piece' : `${plan.pieces.length} pieces`;
   const seams = plan.seams.count === 1 ? '1 seam' : `${plan.seams.count} seams`;
   return (
@@ -47,10 +58,12 @@ export function PlanDrawing({
   walkways,
   title = 'Layout plan',
   className = 'max-h-[60vh] lg:max-h-[34rem] print:max-h-[18cm]',
+  units: givenUnits,
 }: PlanDrawingProps) {
   // useId's punctuation is not safe inside url(#…) references, so keep letters and digits only.
   const id = `plan${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
-  const units = useUnits();
+  const sessionUnits = useUnits();
+  const units = givenUnits ?? sessionUnits;
   const frame = drawingFrame(
     plan,
     rings,
