@@ -64,7 +64,10 @@ export function EstimatePage({
             className="rounded-lg border-2 border-caution-500 bg-caution-50 p-4"
           >
             <h2 id="estimate-warnings" className="font-bold text-caution-800">
-              Check before sending
+              {/* A sent version cannot change any more: say what the warnings are, not what to do. */}
+              {estimate.status === 'draft'
+                ? 'Check before sending'
+                : 'Lines priced at 0 in this version'}
             </h2>
             <ul className="mt-2 list-disc pl-5">
               {estimate.warnings.map((warning) => (
