@@ -68,11 +68,10 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   // The job checked (another company's is a 404) and its versions, read in parallel.
   '/api/jobs/:id/estimates': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/estimates`] },
   '/api/estimates/:id': { budget: 2, urls: (ids) => [`/api/estimates/${ids.estimateId}`] },
-  // The estimate, then its job, company, areas and takeoff (job, areas, settings) in parallel,
-  // then the customer and site (measured: 10; not tuned yet, the takeoff reads the job and its
-  // areas a second time).
+  // The estimate, then its job, company and areas in parallel, then the customer, the site and
+  // the estimating settings (for the cautions) in parallel.
   '/api/estimates/:id/pdf': {
-    budget: 10,
+    budget: 8,
     urls: (ids) => [`/api/estimates/${ids.estimateId}/pdf`],
   },
 };

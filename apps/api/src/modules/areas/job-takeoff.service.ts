@@ -65,6 +65,26 @@ async function jobAreas(ctx: RequestContext, jobId: string) {
  */
 export async function getJobTakeoff(ctx: RequestContext, jobId: string): Promise<JobTakeoffView> {
   const [areas, settings] = await Promise.all([jobAreas(ctx, jobId), companyTakeoffSettings(ctx)]);
+  return takeoffOf(jobId, areas, settings);
+}
+
+/**
+ * The same takeoff over areas the caller has already read (of a job it has already checked),
+ * so a caller that also needs the areas themselves reads them once.
+ */
+export async function getTakeoffOfAreas(
+  ctx: RequestContext,
+  jobId: string,
+  areas: readonly AreaRecord[],
+): Promise<JobTakeoffView> {
+  return takeoffOf(jobId, areas, await companyTakeoffSettings(ctx));
+}
+
+function takeoffOf(
+  jobId: string,
+  areas: readonly AreaRecord[],
+  settings: TakeoffSettings,
+): JobTakeoffView {
   const perArea = areas.map((area) => {
     const input = takeoffInputOfArea(area);
     const lines: TakeoffLine[] = computeTakeoff(input, settings);

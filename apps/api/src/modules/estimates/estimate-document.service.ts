@@ -6,7 +6,7 @@ import type { RequestContext } from '../../context.js';
 import { notFound } from '../../errors.js';
 import { listAreasOfJob } from '../areas/areas.repository.js';
 import { toAreaView } from '../areas/areas.service.js';
-import { getJobTakeoff } from '../areas/job-takeoff.service.js';
+import { getTakeoffOfAreas } from '../areas/job-takeoff.service.js';
 import { findOwnCompany } from '../company/company.repository.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import { findJob } from '../jobs/jobs.repository.js';
@@ -55,16 +55,16 @@ export async function getEstimateForDocument(
 ): Promise<EstimateDocument> {
   const record = await findEstimate(ctx, estimateId);
   if (!record) throw notFound('Estimate');
-  const [job, company, areas, takeoff] = await Promise.all([
+  const [job, company, areas] = await Promise.all([
     findJob(ctx, record.jobId),
     findOwnCompany(ctx),
     listAreasOfJob(ctx, record.jobId),
-    getJobTakeoff(ctx, record.jobId),
   ]);
   if (!job || !company) throw notFound('Estimate');
-  const [customer, site] = await Promise.all([
+  const [customer, site, takeoff] = await Promise.all([
     findCustomer(ctx, job.customerId),
     findSite(ctx, job.siteId),
+    getTakeoffOfAreas(ctx, record.jobId, areas),
   ]);
   if (!customer || !site) throw notFound('Estimate');
   return {
