@@ -355,6 +355,13 @@ const probes: Record<string, Probe> = {
     kind: 'public',
     why: 'the e-mailed token is the credential',
   },
+  // The processor's signature is the credential (tests/api/processor/webhook.test.ts: a wrong
+  // secret or a stale timestamp is 400 and records nothing). No session is read: the company an
+  // event concerns comes from the metadata our own API key put on the checkout session.
+  'post /api/webhooks/processor': {
+    kind: 'public',
+    why: "the processor's signature is the credential",
+  },
   'post /api/estimates/:id/links/revoke': {
     kind: 'tenant',
     run: (b, w) => notFound(b.post(`/api/estimates/${w.aEstimateId}/links/revoke`, {})),
