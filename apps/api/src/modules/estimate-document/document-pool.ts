@@ -9,8 +9,9 @@
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import { AppError } from '../../errors.js';
-import type { DocumentTask } from './document-task.js';
+import type { DocumentJob, DocumentTask } from './document-task.js';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
+import type { InvoiceDocumentInput } from './invoice-document.types.js';
 
 export interface DocumentPoolConfig {
   /** Worker threads. */
@@ -95,7 +96,16 @@ export class DocumentPool {
   }
 
   /** Renders one estimate PDF in a worker thread. */
-  async render(input: EstimateDocumentInput): Promise<Buffer> {
+  render(input: EstimateDocumentInput): Promise<Buffer> {
+    return this.#run({ kind: 'estimate', input });
+  }
+
+  /** Renders one invoice PDF in a worker thread (same pool, same limits). */
+  renderInvoice(input: InvoiceDocumentInput): Promise<Buffer> {
+    return this.#run({ kind: 'invoice', input });
+  }
+
+  async #run(job: DocumentJob): Promise<Buffer> {
     if (this.#closed || this.#inFlight >= this.config.threads + this.config.maxQueue)
       throw this.#busy();
     const { budgetMs } = this.config;
@@ -111,7 +121,7 @@ export class DocumentPool {
     this.#inFlight += 1;
     try {
       const bytes = await this.#pool().run(
-        { input, startedPort: port2 },
+        { job, startedPort: port2 },
         { signal: controller.signal, transferList: [port2] },
       );
       return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
@@ -120,7 +130,7 @@ export class DocumentPool {
       if (isAbort(error))
         throw new AppError(
           'INTERNAL',
-          `The estimate document took longer than ${budgetMs / 1000} s and was stopped`,
+          `The ${job.kind} document took longer than ${budgetMs / 1000} s and was stopped`,
         );
       throw error;
     } finally {
