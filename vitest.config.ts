@@ -13,6 +13,7 @@ export default defineConfig({
           include: [
             'packages/*/src/**/*.test.ts',
             'apps/api/src/**/*.test.ts',
+            'apps/fake-processor/src/**/*.test.ts',
             'tools/**/*.test.ts',
           ],
           environment: 'node',

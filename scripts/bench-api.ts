@@ -113,6 +113,11 @@ const api = startNode(
     // speaks plain HTTP and says `x-forwarded-proto: https`, as the proxy would.
     APP_URL: `https://127.0.0.1:${benchApiPort}`,
     TRUST_PROXY: '1',
+    // Production needs processor keys; the bench never pays, and a closed loopback port makes
+    // sure nothing could leave the machine if it did.
+    PROCESSOR_URL: 'http://127.0.0.1:9',
+    PROCESSOR_SECRET_KEY: 'sk_test_bench_never_used_0123',
+    PROCESSOR_WEBHOOK_SECRET: 'whsec_bench_never_used_0123',
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
   },
   cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],

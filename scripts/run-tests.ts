@@ -109,7 +109,10 @@ await step('e2e', 'end-to-end tests (Chromium)', async () => {
   const env = { ...apiEnv('test', { database: e2eDatabase }), RATE_LIMIT_SIGNUP_PER_IP: '1000' };
   if (runStep('pnpm', ['exec', 'tsx', 'scripts/migrate-db.ts', 'test'], env) !== 0) return false;
   const mail = await startMailSink('test-e2e', settings.smtpPort, settings.mailWebPort);
-  const processor = await startFakeProcessor(settings.processorPort);
+  const processor = await startFakeProcessor(settings.processorPort, {
+    webhookUrl: `http://127.0.0.1:${settings.apiPort}/api/webhooks/processor`,
+    retryDelaysMs: [100, 500, 2000],
+  });
   const api = startService('pnpm', ['exec', 'tsx', 'apps/api/src/server.ts'], env);
   const baseUrl = `http://127.0.0.1:${settings.apiPort}`;
   try {

@@ -24,7 +24,10 @@ if (runStep('pnpm', ['exec', 'tsx', 'scripts/seed-demo.ts', 'dev'], env) !== 0)
 if (!buildWebIfChanged()) fail('web', 'the web build failed');
 
 const mail = await startMailSink('dev', settings.smtpPort, settings.mailWebPort);
-const processor = await startFakeProcessor(settings.processorPort);
+// The keys are the API's development defaults; events go to the API's webhook route.
+const processor = await startFakeProcessor(settings.processorPort, {
+  webhookUrl: `http://127.0.0.1:${settings.apiPort}/api/webhooks/processor`,
+});
 say('pay', `payment-processor fake on ${processor.url}`);
 
 const api = startService('pnpm', ['exec', 'tsx', 'apps/api/src/server.ts'], env);

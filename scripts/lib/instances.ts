@@ -3,7 +3,7 @@
 //
 // SW_PORT_OFFSET (a whole number, default 0) shifts every port, so that several checkouts of
 // the project can run their own instances side by side on one machine. The ports of one
-// checkout span 1025–1091 and 3307–12112, so use multiples of 100 to keep checkouts apart.
+// checkout span 1025–1091 and 3307–12113, so use multiples of 100 to keep checkouts apart.
 function readPortOffset(raw: string | undefined): number {
   if (raw === undefined || raw === '') return 0;
   const offset = Number(raw);
@@ -42,6 +42,8 @@ export const instances = {
     /** The API suite's own maildev, apart from the e2e run's. */
     apiSuiteSmtpPort: 1036 + offset,
     apiSuiteMailWebPort: 1091 + offset,
+    /** The API suite's own processor fake (tests/api/global-setup.ts), apart from the e2e run's. */
+    apiSuiteProcessorPort: 12113 + offset,
     /** `pnpm bench:api`: the API under test and the bare-Express yardsticks beside it. */
     benchApiPort: 5178 + offset,
     benchBaselinePort: 5179 + offset,

@@ -1,5 +1,6 @@
 // createApp(): the whole HTTP application without listening. Order matters: request id and
-// logging first, security headers, body parsing (JSON only), session, CSRF, then routes, 404,
+// logging first, security headers, the raw-body routes (the processor's webhooks: no JSON
+// parsing, session or CSRF), body parsing (JSON only), session, CSRF, then routes, 404,
 // errors. The route table is built before the logger so the logger knows the token routes.
 import express from 'express';
 import type { Express } from 'express';
@@ -19,6 +20,7 @@ import { createSessionMiddleware, createSessionStore } from './http/session.js';
 import type { SessionStore } from './http/session.js';
 import { serveWebApp } from './http/web-app.js';
 import { createMailer } from './mail/mailer.js';
+import { registerProcessorWebhookRoutes } from './modules/processor/webhook.routes.js';
 import type { Mailer } from './mail/mailer.js';
 import type { PlannerPool } from './planner/planner-pool.js';
 import { registerApiRoutes } from './routes.js';
@@ -64,10 +66,16 @@ export function createApp(deps: AppDeps): Express {
   app.set('query parser', 'extended');
   const routes = new RouteTable('/api');
   registerApiRoutes(routes, services, csrf.issueToken);
-  app.locals.apiRoutes = routes.entries;
+  // Routes that read their own raw body and carry their own credential (a signature).
+  const rawRoutes = new RouteTable('/api');
+  registerProcessorWebhookRoutes(rawRoutes, services);
+  const allRoutes = [...rawRoutes.entries, ...routes.entries];
+  app.locals.apiRoutes = allRoutes;
 
-  app.use(createHttpLogger(logger, tokenRoutePatterns(routes.entries.map((r) => r.path))));
+  app.use(createHttpLogger(logger, tokenRoutePatterns(allRoutes.map((r) => r.path))));
   app.use(createSecurityHeaders(env.cookieSecure));
+
+  app.use('/api', rawRoutes.router);
 
   app.use(
     '/api',

@@ -50,3 +50,21 @@ export { sampleEstimateDocumentInput } from './modules/estimate-document/sample-
 export { markEstimateSent } from './modules/estimates/estimate-sending.service.js';
 export { getEstimateForDocument } from './modules/estimates/estimate-document.service.js';
 export type { EstimateDocument } from './modules/estimates/estimate-document.service.js';
+export {
+  createCheckoutSession,
+  refundPayment,
+  processorClient,
+  processorProblem,
+  ProcessorRefusedError,
+  ProcessorUnavailableError,
+  registerProcessorEventHandler,
+  verifyProcessorEvent,
+} from './modules/processor/index.js';
+export type {
+  CheckoutSessionInput,
+  CheckoutSessionRef,
+  ProcessorEventHandler,
+  RefundInput,
+  RefundRef,
+} from './modules/processor/index.js';
+export type { ProcessorConfig } from './config/env.js';

@@ -27,6 +27,8 @@ export const ErrorCode = {
   RequestTimeout: 'REQUEST_TIMEOUT',
   /** The server is busy (e.g. the layout planner's queue is full); try again after Retry-After. */
   ServiceBusy: 'SERVICE_BUSY',
+  /** The payment processor could not be reached or answered with an error; nothing was recorded. */
+  ProcessorUnavailable: 'PROCESSOR_UNAVAILABLE',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

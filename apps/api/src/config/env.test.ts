@@ -7,6 +7,8 @@ const production = {
   SESSION_SECRET: 'a-production-secret-of-our-own-0123',
   APP_URL: 'https://turf.example.test',
   TRUST_PROXY: '1',
+  PROCESSOR_SECRET_KEY: 'sk_live_our_own_key_0123456789',
+  PROCESSOR_WEBHOOK_SECRET: 'whsec_our_own_secret_0123456789',
 };
 
 function without(name: keyof typeof production): Record<string, string> {
@@ -22,14 +24,17 @@ describe('loadEnv in production', () => {
     expect(env.trustedOrigins).toEqual(['https://turf.example.test']);
   });
 
-  it.each(['SESSION_SECRET', 'APP_URL', 'TRUST_PROXY'] as const)(
-    'refuses to start without %s and names it',
-    (name) => {
-      expect(() => loadEnv(without(name))).toThrow(
-        new RegExp(`${name}: ${name} is required in production`),
-      );
-    },
-  );
+  it.each([
+    'SESSION_SECRET',
+    'APP_URL',
+    'TRUST_PROXY',
+    'PROCESSOR_SECRET_KEY',
+    'PROCESSOR_WEBHOOK_SECRET',
+  ] as const)('refuses to start without %s and names it', (name) => {
+    expect(() => loadEnv(without(name))).toThrow(
+      new RegExp(`${name}: ${name} is required in production`),
+    );
+  });
 
   it('names every missing variable at once', () => {
     let message = '';
@@ -110,5 +115,33 @@ describe('loadEnv planner settings', () => {
   it('refuses a zero thread count or a budget too small to plan anything', () => {
     expect(() => loadEnv({ PLANNER_THREADS: '0' })).toThrow(/PLANNER_THREADS/);
     expect(() => loadEnv({ PLANNER_BUDGET_MS: '10' })).toThrow(/PLANNER_BUDGET_MS/);
+  });
+});
+
+describe('loadEnv processor settings', () => {
+  it('points development at the local fake with its keys, and reads PROCESSOR_URL', () => {
+    const env = loadEnv({ NODE_ENV: 'development' });
+    expect(env.processor.api).toEqual({ host: '127.0.0.1', port: 12111, protocol: 'http' });
+    expect(env.processor.secretKey).toMatch(/^sk_test_/);
+    expect(env.processor.webhookToleranceSeconds).toBe(300);
+    const moved = loadEnv({ NODE_ENV: 'test', PROCESSOR_URL: 'http://127.0.0.1:12312' });
+    expect(moved.processor.api).toEqual({ host: '127.0.0.1', port: 12312, protocol: 'http' });
+  });
+
+  it("uses the SDK's own host in production unless PROCESSOR_URL says otherwise", () => {
+    expect(loadEnv(production).processor.api).toBeNull();
+    expect(
+      loadEnv({ ...production, PROCESSOR_URL: 'https://payments.example.test' }).processor.api,
+    ).toEqual({ host: 'payments.example.test', port: 443, protocol: 'https' });
+  });
+
+  it("refuses the local fake's keys in production", () => {
+    const local = loadEnv({ NODE_ENV: 'development' }).processor;
+    expect(() => loadEnv({ ...production, PROCESSOR_SECRET_KEY: local.secretKey })).toThrow(
+      /PROCESSOR_SECRET_KEY must be your own key/,
+    );
+    expect(() => loadEnv({ ...production, PROCESSOR_WEBHOOK_SECRET: local.webhookSecret })).toThrow(
+      /PROCESSOR_WEBHOOK_SECRET must be your own secret/,
+    );
   });
 });

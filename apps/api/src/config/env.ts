@@ -1,6 +1,7 @@
 // The only file that reads process.env. Everything else receives a typed `Env`.
 import { availableParallelism } from 'node:os';
 import { z } from 'zod';
+import { localProcessorDefaults } from '@seamwright/shared';
 
 const devSessionSecret = 'seamwright-dev-session-secret-not-for-production';
 
@@ -76,6 +77,20 @@ const envSchema = z
     PLANNER_BUDGET_MS: z.coerce.number().int().min(50).max(600_000).default(5000),
     /** Planner tasks allowed to wait for a thread; past it the API answers 503. */
     PLANNER_MAX_QUEUE: z.coerce.number().int().min(0).max(10_000).optional(),
+    /**
+     * The payment processor's API origin. Development and tests point it at the local fake
+     * (apps/fake-processor); in production leave it unset to use the SDK's own host.
+     */
+    PROCESSOR_URL: z.url().optional(),
+    /** The processor's secret key (`sk_…`); required in production. */
+    PROCESSOR_SECRET_KEY: z.string().min(8).optional(),
+    /** The webhook endpoint's signing secret (`whsec_…`); required in production. */
+    PROCESSOR_WEBHOOK_SECRET: z.string().min(8).optional(),
+    /** Short, so an unreachable processor is answered 503 quickly instead of hanging the page. */
+    PROCESSOR_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(4000),
+    PROCESSOR_MAX_RETRIES: z.coerce.number().int().min(0).max(5).default(1),
+    /** How old a webhook's signed timestamp may be; the processor's libraries use 300 s. */
+    PROCESSOR_WEBHOOK_TOLERANCE_S: z.coerce.number().int().min(1).max(3600).default(300),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV !== 'production') return;
@@ -97,6 +112,23 @@ const envSchema = z
     if (!value.APP_URL) missing('APP_URL', 'the origin state-changing requests must come from');
     if (value.TRUST_PROXY === undefined || value.TRUST_PROXY === '')
       missing('TRUST_PROXY', "set it explicitly, 'false' when no proxy is in front");
+    if (!value.PROCESSOR_SECRET_KEY)
+      missing('PROCESSOR_SECRET_KEY', 'the payment processor refuses calls without it');
+    else if (value.PROCESSOR_SECRET_KEY === localProcessorDefaults.secretKey)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['PROCESSOR_SECRET_KEY'],
+        message: "PROCESSOR_SECRET_KEY must be your own key in production, not the local fake's",
+      });
+    if (!value.PROCESSOR_WEBHOOK_SECRET)
+      missing('PROCESSOR_WEBHOOK_SECRET', 'it proves webhooks come from the processor');
+    else if (value.PROCESSOR_WEBHOOK_SECRET === localProcessorDefaults.webhookSecret)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['PROCESSOR_WEBHOOK_SECRET'],
+        message:
+          "PROCESSOR_WEBHOOK_SECRET must be your own secret in production, not the local fake's",
+      });
     if (value.COOKIE_SECURE === false)
       ctx.addIssue({
         code: 'custom',
@@ -125,6 +157,18 @@ export interface Env {
   /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
   trustedOrigins: string[];
   planner: { threads: number; budgetMs: number; maxQueue: number };
+  processor: ProcessorConfig;
+}
+
+/** How the API reaches the payment processor (modules/processor builds the SDK client from it). */
+export interface ProcessorConfig {
+  /** Null: the SDK's own host (production). */
+  api: { host: string; port: number; protocol: 'http' | 'https' } | null;
+  secretKey: string;
+  webhookSecret: string;
+  timeoutMs: number;
+  maxNetworkRetries: number;
+  webhookToleranceSeconds: number;
 }
 
 /** Allowed requests per window, per IP and per account (e-mail, token or user). */
@@ -189,6 +233,18 @@ function plannerConfig(
   return { threads: count, budgetMs, maxQueue: maxQueue ?? count * 4 };
 }
 
+/** The local fake's default port (scripts/lib/instances.ts, dev instance). */
+const localProcessorUrl = 'http://127.0.0.1:12111';
+
+function processorApiOf(raw: string | undefined, nodeEnv: Env['nodeEnv']): ProcessorConfig['api'] {
+  const text = raw ?? (nodeEnv === 'production' ? undefined : localProcessorUrl);
+  if (!text) return null;
+  const url = new URL(text);
+  const protocol = url.protocol === 'https:' ? 'https' : 'http';
+  const port = url.port ? Number(url.port) : protocol === 'https' ? 443 : 80;
+  return { host: url.hostname, port, protocol };
+}
+
 /**
  * Reads and validates the environment. Throws with every problem listed when it is invalid.
  * `source` defaults to `process.env`; tests and scripts may pass their own object.
@@ -248,5 +304,13 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     cookieNames: cookieNamesFor(appUrl, cookieSecure),
     trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
     planner: plannerConfig(e.PLANNER_THREADS, e.PLANNER_BUDGET_MS, e.PLANNER_MAX_QUEUE),
+    processor: {
+      api: processorApiOf(e.PROCESSOR_URL, e.NODE_ENV),
+      secretKey: e.PROCESSOR_SECRET_KEY ?? localProcessorDefaults.secretKey,
+      webhookSecret: e.PROCESSOR_WEBHOOK_SECRET ?? localProcessorDefaults.webhookSecret,
+      timeoutMs: e.PROCESSOR_TIMEOUT_MS,
+      maxNetworkRetries: e.PROCESSOR_MAX_RETRIES,
+      webhookToleranceSeconds: e.PROCESSOR_WEBHOOK_TOLERANCE_S,
+    },
   };
 }
