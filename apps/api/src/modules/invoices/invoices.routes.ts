@@ -1,6 +1,8 @@
 import type { ServiceDeps } from '../../deps.js';
 import type { RouteTable } from '../../http/route-table.js';
 import { byTokenParam, createFlowLimits } from '../auth/rate-limits.js';
+import { createInvoiceCheckoutHandler } from './invoice-checkout.handlers.js';
+import { registerInvoiceProcessorEvents } from './invoice-processor-events.js';
 import { createInvoicesHandlers } from './invoices.handlers.js';
 import { createInvoicesService } from './invoices.service.js';
 
@@ -33,4 +35,12 @@ export function registerInvoicesRoutes(routes: RouteTable, deps: ServiceDeps): v
     ...linkLimits,
     handlers.publicView,
   );
+  routes.add(
+    'post',
+    '/public/invoices/:token/checkout',
+    { access: 'public' },
+    ...linkLimits,
+    createInvoiceCheckoutHandler(deps),
+  );
+  registerInvoiceProcessorEvents();
 }
