@@ -20,3 +20,4 @@ export * from './estimates.js';
 export * from './estimate-sending.js';
 export * from './invoices.js';
 export * from './processor.js';
+export * from './refunds.js';

@@ -137,6 +137,59 @@ describe('paying an invoice online', () => {
     expect((await getInvoice(team.bookkeeper.client, invoice.id)).status).toBe('sent');
   });
 
+  it('lets the owner refund a card payment through the processor, recorded once', async () => {
+    const job = await acceptedJob(team.owner.client, team.office.client);
+    const { invoice, token } = await sentDeposit(team.bookkeeper.client, job);
+    const checkout = await customer.post(`/api/public/invoices/${token}/checkout`, {}).expect(200);
+    await fake(`/_test/checkout/${sessionIdOf(String(checkout.body.data.url))}/complete`, {
+      outcome: 'succeeded',
+      wait: true,
+    });
+    const paid = await getInvoice(team.bookkeeper.client, invoice.id);
+    const payment = paid.payments[0]!;
+    const refunds = `/api/invoices/${invoice.id}/payments/${payment.id}/refunds`;
+
+    // Owner only; more than was paid is refused naming the field; nothing is recorded.
+    await team.bookkeeper.client.post(refunds, { amountCents: 100, reason: 'x' }).expect(403);
+    const tooMuch = await team.owner.client
+      .post(refunds, { amountCents: job.depositCents + 1, reason: 'Too much' })
+      .expect(409);
+    expect(tooMuch.body.errors[0].path).toBe('amountCents');
+    await fake('/_test/down');
+    try {
+      await team.owner.client.post(refunds, { amountCents: 100, reason: 'Down' }).expect(503);
+    } finally {
+      await fake('/_test/up');
+    }
+    expect((await getInvoice(team.owner.client, invoice.id)).refundedCents).toBe(0);
+
+    const res = await team.owner.client
+      .post(refunds, { amountCents: 1_000, reason: 'Two pallets of stone were not needed' })
+      .expect(201);
+    expect(res.body.data).toMatchObject({ amountCents: 1_000, paymentId: payment.id });
+    await fake('/_test/settle');
+    // The processor's refund.created webhook arrived too (and again when replayed): one refund.
+    const events = (await (
+      await fetch(`${testProcessor.url}/_test/events?type=refund.created`)
+    ).json()) as { data: { id: string; objectId: string }[] };
+    const mine = events.data.find((e) => e.objectId === res.body.data.processorRefundId)!;
+    await fake(`/_test/events/${mine.id}/redeliver`, { wait: true });
+    const rows = await selectRows<{ amount_cents: number }>(
+      sequelize,
+      'SELECT amount_cents FROM refunds WHERE invoice_id = ?',
+      [invoice.id],
+    );
+    expect(rows.map((r) => Number(r.amount_cents))).toEqual([1_000]);
+    const after = await getInvoice(team.owner.client, invoice.id);
+    // What was given back is owed again unless a credit note says otherwise.
+    expect(after).toMatchObject({
+      refundedCents: 1_000,
+      balanceCents: 1_000,
+      status: 'partly_paid',
+    });
+    expect(after.payments[0]!.refundedCents).toBe(1_000);
+  });
+
   it('refuses unknown and tampered links with 404', async () => {
     await customer.post(`/api/public/invoices/${'x'.repeat(43)}/checkout`, {}).expect(404);
     await customer.post('/api/public/invoices/not-a-token/checkout', {}).expect(404);

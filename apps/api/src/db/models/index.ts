@@ -23,6 +23,7 @@ import { UserModel } from './user.model.js';
 import { InvoiceModel } from './invoice.model.js';
 import { InvoiceLineModel } from './invoice-line.model.js';
 import { PaymentModel } from './payment.model.js';
+import { RefundModel } from './refund.model.js';
 import { CreditNoteModel } from './credit-note.model.js';
 import { InvoiceLinkModel } from './invoice-link.model.js';
 import { guardTenantModels } from '../tenant-guard.js';
@@ -36,6 +37,7 @@ export {
   InvoiceLinkModel,
   InvoiceModel,
   PaymentModel,
+  RefundModel,
   CompanyModel,
   CustomerModel,
   EstimateAnswerModel,
@@ -83,6 +85,7 @@ const allModels = [
   PaymentModel,
   CreditNoteModel,
   InvoiceLinkModel,
+  RefundModel,
 ] as const;
 
 /**

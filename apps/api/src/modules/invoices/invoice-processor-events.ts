@@ -5,7 +5,9 @@
 import type Stripe from 'stripe';
 import { AppError } from '../../errors.js';
 import { registerProcessorEventHandler } from '../processor/index.js';
+import type { ProcessorEventHandler } from '../processor/index.js';
 import { recordProcessorPayment } from './invoice-payments.service.js';
+import { recordRefund } from './invoice-refunds.service.js';
 
 let registered = false;
 
@@ -17,6 +19,7 @@ function intentIdOf(session: Stripe.Checkout.Session): string | null {
 export function registerInvoiceProcessorEvents(): void {
   if (registered) return;
   registered = true;
+  registerProcessorEventHandler('refund.created', recordRefundEvent);
   registerProcessorEventHandler('checkout.session.completed', async (event, transaction, deps) => {
     const session = event.data.object as Stripe.Checkout.Session;
     const { companyId, invoiceId } = session.metadata ?? {};
@@ -53,3 +56,35 @@ export function registerInvoiceProcessorEvents(): void {
     );
   });
 }
+
+/**
+ * A refund made through our own route carries its ids in the metadata; the route has usually
+ * recorded it already (same processor refund id: nothing more happens). It is recorded here
+ * when the route's transaction failed after the processor said yes.
+ */
+const recordRefundEvent: ProcessorEventHandler = async (event, transaction, deps) => {
+  const refund = event.data.object as Stripe.Refund;
+  const { companyId, invoiceId, paymentId, refundId } = refund.metadata ?? {};
+  if (!companyId || !invoiceId || !paymentId || !refundId) {
+    deps.logger.info({ event: event.id }, 'refund event without our ids ignored');
+    return;
+  }
+  const ctx = { userId: '', companyId, role: 'owner' } as const;
+  const recorded = await recordRefund(
+    ctx,
+    {
+      id: refundId,
+      invoiceId,
+      paymentId,
+      amountCents: refund.amount,
+      reason: 'Refund recorded from the processor',
+      processorRefundId: refund.id,
+      createdBy: null,
+    },
+    transaction,
+  ).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === 'NOT_FOUND') return null;
+    throw error;
+  });
+  deps.logger.info({ event: event.id, created: recorded?.created ?? null }, 'refund event');
+};

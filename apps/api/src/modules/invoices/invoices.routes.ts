@@ -3,6 +3,7 @@ import type { RouteTable } from '../../http/route-table.js';
 import { byTokenParam, createFlowLimits } from '../auth/rate-limits.js';
 import { createInvoiceCheckoutHandler } from './invoice-checkout.handlers.js';
 import { registerInvoiceProcessorEvents } from './invoice-processor-events.js';
+import { createRefundHandler } from './invoice-refunds.handlers.js';
 import { createInvoicesHandlers } from './invoices.handlers.js';
 import { createInvoicesService } from './invoices.service.js';
 
@@ -19,6 +20,12 @@ export function registerInvoicesRoutes(routes: RouteTable, deps: ServiceDeps): v
   routes.add('post', '/invoices/:id/payments', pay, handlers.recordPayment);
   routes.add('post', '/invoices/:id/void', write, handlers.void);
   routes.add('post', '/invoices/:id/credit-notes', write, handlers.creditNote);
+  routes.add(
+    'post',
+    '/invoices/:id/payments/:paymentId/refunds',
+    { access: 'tenant', permission: 'payments.refund' },
+    createRefundHandler(deps),
+  );
   // Public: the token in the e-mailed link is the credential; limited per IP and per token with
   // the estimate links' allowances (counted apart from them).
   const linkLimits = createFlowLimits(deps.sequelize, {
