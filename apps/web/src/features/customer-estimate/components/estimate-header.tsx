@@ -38,7 +38,7 @@ export function EstimateHeader({ view }: { view: PublicEstimateView }) {
         </div>
         <div>
           <dt className="font-semibold">Where</dt>
-          <dd>{view.siteAddress}</dd>
+          <dd className="whitespace-pre-line">{view.siteAddress}</dd>
         </div>
         <div>
           <dt className="font-semibold">Estimate</dt>

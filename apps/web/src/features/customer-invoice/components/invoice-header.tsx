@@ -31,7 +31,7 @@ export function InvoiceHeader({ view }: { view: PublicInvoiceView }) {
         </div>
         <div>
           <dt className="font-semibold">Where</dt>
-          <dd>{view.siteAddress}</dd>
+          <dd className="whitespace-pre-line">{view.siteAddress}</dd>
         </div>
         <div>
           <dt className="font-semibold">Issued</dt>
