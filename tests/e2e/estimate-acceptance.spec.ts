@@ -2,7 +2,8 @@
 // options and e-mails it; the homeowner opens the link from the e-mail on a phone (no session),
 // picks an option, accepts by typing a name and sees the thank-you; the office then finds the
 // job accepted.
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
+import { call } from './support/api-call';
 import { expectAccessible } from './support/a11y';
 import { typeLShapedYard } from './support/area-drawing';
 import { linkFromMail } from './support/mail';
@@ -10,19 +11,6 @@ import { emailFor, runStamp, signUpCompany } from './support/people';
 import { baseUrl } from './support/servers';
 
 test.use({ bypassCSP: true });
-
-/** Calls the API with the page's session and CSRF token, as the web app does; returns `data`. */
-async function call<T>(page: Page, method: 'GET' | 'POST', path: string, data?: unknown) {
-  const csrf = await page.request.get('/api/auth/csrf');
-  const { data: token } = (await csrf.json()) as { data: { token: string } };
-  const res = await page.request.fetch(path, {
-    method,
-    data,
-    headers: { 'x-csrf-token': token.token },
-  });
-  expect(res.ok(), `${method} ${path}: ${res.status()} ${await res.text()}`).toBe(true);
-  return ((await res.json()) as { data: T }).data;
-}
 
 const phone = { width: 390, height: 844 };
 const tablet = { width: 820, height: 1180 };

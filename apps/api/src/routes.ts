@@ -11,6 +11,7 @@ import { registerEstimatesRoutes } from './modules/estimates/estimates.routes.js
 import { registerEstimatingSettingsRoutes } from './modules/estimating-settings/estimating-settings.routes.js';
 import { registerHealthRoutes } from './modules/health/health.routes.js';
 import { registerInvitationsRoutes } from './modules/invitations/invitations.routes.js';
+import { registerInvoicesRoutes } from './modules/invoices/invoices.routes.js';
 import { registerJobsRoutes } from './modules/jobs/jobs.routes.js';
 import { registerLocateRoutes } from './modules/locate/locate.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
@@ -42,4 +43,5 @@ export function registerApiRoutes(
   registerPriceBookRoutes(routes, deps);
   registerEstimatingSettingsRoutes(routes, deps);
   registerEstimatesRoutes(routes, deps);
+  registerInvoicesRoutes(routes, deps);
 }

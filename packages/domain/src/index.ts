@@ -4,4 +4,5 @@ export * from './calendar/index.js';
 export * from './cancellation/index.js';
 export * from './locate/index.js';
 export * from './estimates/index.js';
+export * from './invoices/index.js';
 export * from './receivables/index.js';

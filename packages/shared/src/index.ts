@@ -18,4 +18,6 @@ export * from './stock.js';
 export * from './locate.js';
 export * from './estimates.js';
 export * from './estimate-sending.js';
+export * from './invoices.js';
 export * from './processor.js';
+export * from './refunds.js';

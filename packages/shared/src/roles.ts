@@ -38,6 +38,10 @@ export const actions = [
   'estimates.read',
   'estimates.write',
   'estimates.send',
+  'invoices.read',
+  'invoices.write',
+  'payments.write',
+  'payments.refund',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -78,6 +82,13 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'estimates.write': ['owner', 'office'],
   // Sending to the customer, revoking links and recording a paper signature commit the company.
   'estimates.send': ['owner', 'office'],
+  // Invoices: the bookkeeper and the owner bill and record money; the office reads an invoice's
+  // status (to answer the customer's call); crew leads never see them.
+  'invoices.read': ['owner', 'bookkeeper', 'office'],
+  'invoices.write': ['owner', 'bookkeeper'],
+  'payments.write': ['owner', 'bookkeeper'],
+  // Money going back out: the owner alone.
+  'payments.refund': ['owner'],
 };
 
 /** Whether `role` may perform `action`. */

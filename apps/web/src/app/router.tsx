@@ -31,6 +31,7 @@ export const router = createBrowserRouter([
       { path: '/reset-password/:token', lazy: () => import('./routes/reset-password') },
       { path: '/invitations/:token', lazy: () => import('./routes/invitation') },
       { path: '/e/:token', lazy: () => import('./routes/customer-estimate') },
+      { path: '/i/:token', lazy: () => import('./routes/customer-invoice') },
       { path: '/choose-company', lazy: () => import('./routes/choose-company') },
       {
         id: 'app',

@@ -11,7 +11,9 @@ import { estimates } from './0010-estimates.js';
 import { estimateLinks } from './0011-estimate-links.js';
 import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
+import { invoices } from './0014-invoices.js';
 import { processorEvents } from './0015-processor-events.js';
+import { refunds } from './0021-refunds.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -26,6 +28,7 @@ export const migrations: Migration[] = [
   estimateLinks,
   locateTickets,
   rollStock,
-  // 0014 is the invoices' migration, on its own branch.
+  invoices,
   processorEvents,
+  refunds,
 ];

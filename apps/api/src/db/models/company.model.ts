@@ -20,6 +20,8 @@ export class CompanyModel extends Model<
   declare currency: CreationOptional<string>;
   declare measurementSystem: CreationOptional<'imperial' | 'metric'>;
   declare settings: CreationOptional<Record<string, unknown>>;
+  /** Payment terms: days from issue to the due day (migration 0014). */
+  declare invoiceDueDays: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -39,6 +41,7 @@ export class CompanyModel extends Model<
           defaultValue: 'imperial',
         },
         settings: { type: DataTypes.JSON, allowNull: false, defaultValue: {} },
+        invoiceDueDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 14 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

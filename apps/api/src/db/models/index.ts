@@ -20,12 +20,24 @@ import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { TurfReservationModel } from './turf-reservation.model.js';
 import { UserModel } from './user.model.js';
+import { InvoiceModel } from './invoice.model.js';
+import { InvoiceLineModel } from './invoice-line.model.js';
+import { PaymentModel } from './payment.model.js';
+import { RefundModel } from './refund.model.js';
+import { CreditNoteModel } from './credit-note.model.js';
+import { InvoiceLinkModel } from './invoice-link.model.js';
 import { guardTenantModels } from '../tenant-guard.js';
 // JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
 import tenantModelList from './tenant-models.json';
 
 export {
   AuditEventModel,
+  CreditNoteModel,
+  InvoiceLineModel,
+  InvoiceLinkModel,
+  InvoiceModel,
+  PaymentModel,
+  RefundModel,
   CompanyModel,
   CustomerModel,
   EstimateAnswerModel,
@@ -68,6 +80,12 @@ const allModels = [
   EstimateModel,
   EstimateLinkModel,
   EstimateAnswerModel,
+  InvoiceModel,
+  InvoiceLineModel,
+  PaymentModel,
+  CreditNoteModel,
+  InvoiceLinkModel,
+  RefundModel,
 ] as const;
 
 /**
@@ -99,5 +117,11 @@ function associateModels(): void {
     constraints: false,
   });
   JobModel.belongsTo(SiteModel, { as: 'site', foreignKey: 'siteId', constraints: false });
+  // An invoice's customer shares its company by the 0014 foreign key.
+  InvoiceModel.belongsTo(CustomerModel, {
+    as: 'customer',
+    foreignKey: 'customerId',
+    constraints: false,
+  });
   AuditEventModel.belongsTo(UserModel, { as: 'user', foreignKey: 'userId', constraints: false });
 }

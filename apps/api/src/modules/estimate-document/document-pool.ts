@@ -7,8 +7,9 @@
 // (run-time budget, counted queue, nice +10, heap limit) are BudgetedPool's.
 import { AppError } from '../../errors.js';
 import { BudgetedPool } from '../../workers/budgeted-pool.js';
-import type { DocumentTask } from './document-task.js';
+import type { DocumentJob, DocumentTask } from './document-task.js';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
+import type { InvoiceDocumentInput } from './invoice-document.types.js';
 
 export interface DocumentPoolConfig {
   /** Worker threads. */
@@ -64,17 +65,26 @@ export class DocumentPool {
         overBudget: (budgetMs) =>
           new AppError(
             'INTERNAL',
-            `The estimate document took longer than ${budgetMs / 1000} s and was stopped`,
+            `The document took longer than ${budgetMs / 1000} s and was stopped`,
           ),
         outOfMemory: (heapMb) =>
-          new AppError('INTERNAL', `The estimate document needed more than ${heapMb} MB`),
+          new AppError('INTERNAL', `The document needed more than ${heapMb} MB`),
       },
     );
   }
 
   /** Renders one estimate PDF in a worker thread. */
-  async render(input: EstimateDocumentInput): Promise<Buffer> {
-    const bytes = await this.#pool.run({ input });
+  render(input: EstimateDocumentInput): Promise<Buffer> {
+    return this.#run({ kind: 'estimate', input });
+  }
+
+  /** Renders one invoice PDF in a worker thread (same pool, same limits). */
+  renderInvoice(input: InvoiceDocumentInput): Promise<Buffer> {
+    return this.#run({ kind: 'invoice', input });
+  }
+
+  async #run(job: DocumentJob): Promise<Buffer> {
+    const bytes = await this.#pool.run({ job });
     return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 

@@ -3,12 +3,14 @@
 // adapter; this module knows nothing of the database or HTTP.
 import { DocumentPool } from './document-pool.js';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
+import type { InvoiceDocumentInput } from './invoice-document.types.js';
 
 export { DocumentPool, defaultDocumentPoolConfig } from './document-pool.js';
 export type { DocumentPoolConfig } from './document-pool.js';
 export { formatMoney, formatDocumentDate } from './document-format.js';
 export { documentCancellationNotice } from './cancellation-notice-input.js';
 export type * from './estimate-document.types.js';
+export type * from './invoice-document.types.js';
 
 /**
  * One pool per process for callers that pass none. It starts its thread on first use and
@@ -23,6 +25,14 @@ export function renderEstimatePdf(
   pool: DocumentPool = (defaultPool ??= new DocumentPool()),
 ): Promise<Buffer> {
   return pool.render(input);
+}
+
+/** Renders an invoice PDF in the same pool as the estimates. */
+export function renderInvoicePdf(
+  input: InvoiceDocumentInput,
+  pool: DocumentPool = (defaultPool ??= new DocumentPool()),
+): Promise<Buffer> {
+  return pool.renderInvoice(input);
 }
 
 export async function closeDefaultDocumentPool(): Promise<void> {

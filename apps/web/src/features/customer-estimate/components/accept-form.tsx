@@ -2,7 +2,7 @@ import type { EstimateAcceptanceView, PublicEstimateView } from '@seamwright/sha
 import { Form, SubmitButton, TextField } from '../../../components/ui/form';
 import { useAcceptEstimate } from '../api/public-estimate';
 import { acceptSchemaFor, deadLinkOf, type DeadLink } from '../utils/answer-state';
-import { formatMoney } from '../utils/words';
+import { formatMoney } from '../../../lib/plain-words';
 import { TierChoice } from './tier-choice';
 
 interface Props {

@@ -1,7 +1,7 @@
 import { useEffect, useRef } from 'react';
 import type { PublicEstimateView } from '@seamwright/shared';
 import type { EstimatePageState } from '../utils/answer-state';
-import { formatMoment } from '../utils/words';
+import { formatMoment } from '../../../lib/plain-words';
 
 /** What the page says once the estimate has an answer (or was replaced by a newer version). */
 export function AnswerPanel({

@@ -1,5 +1,5 @@
 import type { PublicEstimateView } from '@seamwright/shared';
-import { formatDay } from '../utils/words';
+import { formatDay } from '../../../lib/plain-words';
 
 /** Who the estimate is from, for whom and where, and how long its prices hold. */
 export function EstimateHeader({ view }: { view: PublicEstimateView }) {
@@ -38,7 +38,7 @@ export function EstimateHeader({ view }: { view: PublicEstimateView }) {
         </div>
         <div>
           <dt className="font-semibold">Where</dt>
-          <dd>{view.siteAddress}</dd>
+          <dd className="whitespace-pre-line">{view.siteAddress}</dd>
         </div>
         <div>
           <dt className="font-semibold">Estimate</dt>

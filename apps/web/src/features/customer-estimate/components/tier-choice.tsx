@@ -1,6 +1,6 @@
 import type { PublicEstimateTier } from '@seamwright/shared';
 import { useBoundField } from '../../../components/ui/form/fields';
-import { formatMoney } from '../utils/words';
+import { formatMoney } from '../../../lib/plain-words';
 
 /** The labelled radio group for the option the customer takes, bound to the form's `tierId`. */
 export function TierChoice({

@@ -1,5 +1,5 @@
 import type { PublicEstimateTier } from '@seamwright/shared';
-import { formatMoney, formatQuantity } from '../utils/words';
+import { formatMoney, formatQuantity } from '../../../lib/plain-words';
 
 /** One option: its lines as a list (a table does not fit a phone), then its totals. */
 export function TierPrice({ tier, currency }: { tier: PublicEstimateTier; currency: string }) {

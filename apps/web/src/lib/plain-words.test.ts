@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatDay, formatMoney, formatQuantity } from './words';
+import { formatDay, formatMoney, formatQuantity } from './plain-words';
 
 // Plain formatting (common practice, no published source).
 describe('customer page words', () => {

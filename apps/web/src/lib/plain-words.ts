@@ -1,4 +1,4 @@
-// Money and days as a homeowner reads them.
+// Money, days and quantities as a homeowner reads them (the customer pages have no session).
 
 /** 123456 cents → "$1,234.56" in the estimate's currency. */
 export function formatMoney(cents: number, currency: string): string {
