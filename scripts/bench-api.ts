@@ -2,8 +2,8 @@
  * bench-api — load-tests the signed-in API against two yardsticks on the same database.
  *
  * Starts (or reuses) the test MariaDB, recreates its own `seamwright_bench` database (never the
- * dev or test data), migrates it, seeds a company with 20,000 customers and their sites plus a
- * small one with 30, starts the API (`apps/api/src/server.ts`, production settings) and a bare
+ * dev or test data), migrates it, seeds a company with 20,000 customers, their sites and a job
+ * each, plus a small one with 30, starts the API (`apps/api/src/server.ts`, production settings) and a bare
  * Express process as separate processes, signs in, and drives autocannon at each route in turn.
  * Prints requests/s, p50 and p99 per route, the ratio to the one-query route, and the API's
  * peak resident memory. Stops everything it started.
@@ -81,7 +81,10 @@ const small = await seedBenchCompany(sequelize, {
   extraMembers: 3,
   passwordHash,
 });
-await selectRows(sequelize, 'ANALYZE TABLE customers, sites, memberships, sessions');
+await selectRows(
+  sequelize,
+  'ANALYZE TABLE customers, customer_search_words, sites, jobs, memberships, sessions',
+);
 await sequelize.close();
 say(
   'bench',
@@ -167,6 +170,12 @@ try {
       cookie: largeCookie,
     },
     { name: 'members', url: `${apiUrl}/api/members`, cookie: largeCookie },
+    { name: 'jobs p1', url: `${apiUrl}/api/jobs?page=1&pageSize=25`, cookie: largeCookie },
+    {
+      name: 'job detail',
+      url: `${apiUrl}/api/jobs/${large.sampleJobId}`,
+      cookie: largeCookie,
+    },
     {
       name: 'customers p1 (30)',
       url: `${apiUrl}/api/customers?page=1&pageSize=25`,
