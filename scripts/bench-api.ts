@@ -9,8 +9,10 @@
  * peak resident memory. Stops everything it started.
  *
  * Usage: pnpm bench:api [--duration 10] [--connections 50] [--customers 20000]
- *                       [--only name,name] [--cpu-prof]
+ *                       [--only name,name] [--cpu-prof] [--api-flags "--max-semi-space-size=4"]
  * `--cpu-prof` writes the API's V8 CPU profile to .tmp/bench/ (open it in Chrome DevTools).
+ * `--api-flags` adds Node flags to the API process (memory experiments). The API's
+ * process.memoryUsage() at start and at its resident peak is printed after the table.
  * Safe anywhere: local processes on loopback only.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
@@ -44,6 +46,7 @@ const connections = Number(flag('connections', '50'));
 const customerCount = Number(flag('customers', '20000'));
 const only = flag('only', '').split(',').filter(Boolean);
 const cpuProfile = process.argv.includes('--cpu-prof');
+const apiFlags = flag('api-flags', '').split(' ').filter(Boolean);
 if (!(durationSeconds > 0) || !(connections > 0) || !(customerCount > 0))
   fail('bench', '--duration, --connections and --customers take positive numbers');
 
@@ -57,6 +60,8 @@ const dbEnv = {
   DB_PASSWORD: db.password,
 };
 const profileDir = join(projectRoot, '.tmp', 'bench');
+const memoryFile = join(profileDir, 'api-memory.json');
+mkdirSync(profileDir, { recursive: true });
 
 const mariadb = await startMariadb('test', db.port);
 recreateDatabase(mariadb, database);
@@ -96,8 +101,10 @@ function startNode(
   port: number,
   extraEnv: Record<string, string>,
   nodeFlags: string[] = [],
+  imports: string[] = [],
 ) {
-  return spawn(process.execPath, [...nodeFlags, '--import', 'tsx', script], {
+  const preload = ['tsx', ...imports].flatMap((name) => ['--import', name]);
+  return spawn(process.execPath, [...nodeFlags, ...preload, script], {
     cwd: projectRoot,
     env: { ...process.env, ...dbEnv, PORT: String(port), ...extraEnv },
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -105,7 +112,6 @@ function startNode(
   });
 }
 
-if (cpuProfile) mkdirSync(profileDir, { recursive: true });
 const api = startNode(
   'apps/api/src/server.ts',
   benchApiPort,
@@ -117,8 +123,10 @@ const api = startNode(
     APP_URL: `https://127.0.0.1:${benchApiPort}`,
     TRUST_PROXY: '1',
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
+    BENCH_MEMORY_FILE: memoryFile,
   },
-  cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],
+  [...apiFlags, ...(cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [])],
+  ['./scripts/lib/bench-memory-probe.mjs'],
 );
 const baseline = startNode('scripts/lib/bench-baseline-server.ts', benchBaselinePort, {
   BENCH_COMPANY_ID: large.companyId,
@@ -133,6 +141,7 @@ const apiUrl = `http://127.0.0.1:${benchApiPort}`;
 const baselineUrl = `http://127.0.0.1:${benchBaselinePort}`;
 const results: RouteResult[] = [];
 let peakMb = NaN;
+let idleMb = NaN;
 try {
   await waitForHttp(`${apiUrl}/api/health`, 60_000, api);
   await waitForHttp(`${baselineUrl}/bare`, 60_000, baseline);
@@ -184,6 +193,7 @@ try {
     { name: 'GET /api/health', url: `${apiUrl}/api/health` },
   ];
   const memory = sampleResidentMemory(api.pid ?? 0);
+  idleMb = memory.currentMb();
   const status = await createConnection({ host: '127.0.0.1', port: db.port, ...database });
   const dbPid = Number(readFileSync(join(dataRoot, 'test', 'mariadb', 'mariadb.pid'), 'utf8'));
   const questions = async () => {
@@ -225,7 +235,18 @@ for (const r of results) {
       `${r.statementsPerRequest.toFixed(1)} | ${r.apiCpuMs.toFixed(2)} | ${r.dbCpuMs.toFixed(2)} | ${r.non2xx + r.errors} |`,
   );
 }
-console.log(`\nAPI peak resident memory: ${peakMb.toFixed(0)} MB`);
+console.log(
+  `\nAPI resident memory: ${idleMb.toFixed(0)} MB signed in and idle, ${peakMb.toFixed(0)} MB at its peak`,
+);
+try {
+  // MB, from the probe inside the API (scripts/lib/bench-memory-probe.mjs).
+  const usage = JSON.parse(readFileSync(memoryFile, 'utf8')) as Record<string, unknown>;
+  console.log(
+    `API process.memoryUsage() in MB, at start and at its peak: ${JSON.stringify(usage)}`,
+  );
+} catch {
+  console.log('API process.memoryUsage(): no sample written');
+}
 if (cpuProfile) console.log(`CPU profile written to ${profileDir}`);
 if (results.some((r) => r.non2xx + r.errors > 0 || r.requests === 0))
   fail('bench', 'some requests failed or none completed');

@@ -1,4 +1,4 @@
-// Customer search matches the beginnings of words (docs/api.md, "Customer search"), through the
+// Customer search matches the beginnings of words (DEVELOPERS.md, "Customer search"), through the
 // words table migration 0018 adds; the words follow every change in the change's transaction.
 import { describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';

@@ -157,7 +157,7 @@ describe('customers', () => {
       (await owner.client.get('/api/customers?q=014-7777').expect(200)).body.data[0].name,
     ).toBe('Fern Sallow');
     // % and _ are literal characters in a search, not wildcards: a search matches the
-    // beginnings of words (docs/api.md, "Customer search"), so a lone % finds no one.
+    // beginnings of words (DEVELOPERS.md, "Customer search"), so a lone % finds no one.
     expect(
       (await owner.client.get('/api/customers?q=100%25&status=all').expect(200)).body.data.map(
         (c: CustomerView) => c.name,

@@ -1,5 +1,5 @@
 // The words a customer is found by and the terms a query becomes (the decision is in
-// docs/api.md, "Customer search"; the behaviour is our own rule, no published source).
+// DEVELOPERS.md, "Customer search"; the behaviour is our own rule, no published source).
 import { describe, expect, it } from 'vitest';
 import { customerSearchWords, prefixPattern, searchTerms } from './customer-search-words.js';
 

@@ -3,7 +3,7 @@
 // (company_id, word) key, so it reads only the matching entries instead of testing a substring
 // against every customer of the company (docs/PERFORMANCE.md, "Search").
 //
-// Decision (docs/api.md, "Customer search"): every term of the query must be the beginning of a
+// Decision (DEVELOPERS.md, "Customer search"): every term of the query must be the beginning of a
 // word of the name or the e-mail, or of the phone's digits from one of its digit groups on.
 // A "word" is each space-separated piece, and also each of its tails that starts a run of
 // letters or digits, so "o'brien" is found by "brien" and "ash.wright@example.test" by
