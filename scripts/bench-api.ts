@@ -11,7 +11,8 @@
  * Usage: pnpm bench:api [--duration 10] [--connections 50] [--customers 20000]
  *                       [--only name,name] [--cpu-prof] [--api-flags "--max-semi-space-size=4"]
  * `--cpu-prof` writes the API's V8 CPU profile to .tmp/bench/ (open it in Chrome DevTools).
- * `--api-flags` adds Node flags to the API process (memory experiments). The API's
+ * `--api-flags` sets NODE_OPTIONS for the API process instead of the shipped `apiNodeOptions`
+ * (memory experiments; NODE_OPTIONS, because worker threads refuse V8 flags in execArgv). The API's
  * process.memoryUsage() at start and at its resident peak is printed after the table.
  * Safe anywhere: local processes on loopback only.
  */
@@ -28,6 +29,7 @@ import {
   signInOverHttp,
 } from './lib/bench-load.js';
 import type { RouteResult } from './lib/bench-load.js';
+import { apiNodeOptions } from './lib/api-env.js';
 import { benchPassword, seedBenchCompany } from './lib/bench-seed.js';
 import { instances } from './lib/instances.js';
 import { fail, say } from './lib/log.js';
@@ -46,7 +48,7 @@ const connections = Number(flag('connections', '50'));
 const customerCount = Number(flag('customers', '20000'));
 const only = flag('only', '').split(',').filter(Boolean);
 const cpuProfile = process.argv.includes('--cpu-prof');
-const apiFlags = flag('api-flags', '').split(' ').filter(Boolean);
+const apiFlags = flag('api-flags', '').trim();
 if (!(durationSeconds > 0) || !(connections > 0) || !(customerCount > 0))
   fail('bench', '--duration, --connections and --customers take positive numbers');
 
@@ -124,8 +126,10 @@ const api = startNode(
     TRUST_PROXY: '1',
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
     BENCH_MEMORY_FILE: memoryFile,
+    // As `npm start` runs it (scripts/lib/api-env.ts), unless an experiment says otherwise.
+    NODE_OPTIONS: apiFlags || apiNodeOptions,
   },
-  [...apiFlags, ...(cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [])],
+  cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],
   ['./scripts/lib/bench-memory-probe.mjs'],
 );
 const baseline = startNode('scripts/lib/bench-baseline-server.ts', benchBaselinePort, {
