@@ -26,9 +26,17 @@ function listFilter(query: CustomerListQuery): {
   const replacements: Record<string, unknown> = {};
   if (query.status === 'active') conditions.push('archived_at IS NULL');
   if (query.status === 'archived') conditions.push('archived_at IS NOT NULL');
+  const terms = searchTerms(query.q ?? '');
+  // One character: the name starts with it, a range of the name index in list order. As a word
+  // prefix it would match most of the company and read all of it (measured in PERFORMANCE.md).
+  if (terms.length === 1 && terms[0]!.length === 1) {
+    conditions.push('name LIKE :namePrefix');
+    replacements.namePrefix = prefixPattern(terms[0]!);
+    return { sql: conditions.map((c) => ` AND ${c}`).join(''), replacements };
+  }
   // Each term must begin one of the customer's words (customer-search-words.ts): a range of
   // the (company_id, word) key per term, never a scan of the company's customers.
-  searchTerms(query.q ?? '').forEach((term, i) => {
+  terms.forEach((term, i) => {
     conditions.push(
       `id IN (SELECT w.customer_id FROM customer_search_words w
               WHERE w.company_id = :companyId AND w.word LIKE :term${i})`,
