@@ -2,15 +2,18 @@
  * bench-api — load-tests the signed-in API against two yardsticks on the same database.
  *
  * Starts (or reuses) the test MariaDB, recreates its own `seamwright_bench` database (never the
- * dev or test data), migrates it, seeds a company with 20,000 customers and their sites plus a
- * small one with 30, starts the API (`apps/api/src/server.ts`, production settings) and a bare
+ * dev or test data), migrates it, seeds a company with 20,000 customers, their sites and a job
+ * each, plus a small one with 30, starts the API (`apps/api/src/server.ts`, production settings) and a bare
  * Express process as separate processes, signs in, and drives autocannon at each route in turn.
  * Prints requests/s, p50 and p99 per route, the ratio to the one-query route, and the API's
  * peak resident memory. Stops everything it started.
  *
  * Usage: pnpm bench:api [--duration 10] [--connections 50] [--customers 20000]
- *                       [--only name,name] [--cpu-prof]
+ *                       [--only name,name] [--cpu-prof] [--api-flags "--max-semi-space-size=4"]
  * `--cpu-prof` writes the API's V8 CPU profile to .tmp/bench/ (open it in Chrome DevTools).
+ * `--api-flags` sets NODE_OPTIONS for the API process instead of the shipped `apiNodeOptions`
+ * (memory experiments; NODE_OPTIONS, because worker threads refuse V8 flags in execArgv). The API's
+ * process.memoryUsage() at start and at its resident peak is printed after the table.
  * Safe anywhere: local processes on loopback only.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
@@ -26,6 +29,7 @@ import {
   signInOverHttp,
 } from './lib/bench-load.js';
 import type { RouteResult } from './lib/bench-load.js';
+import { apiNodeOptions } from './lib/api-env.js';
 import { benchPassword, seedBenchCompany } from './lib/bench-seed.js';
 import { instances } from './lib/instances.js';
 import { fail, say } from './lib/log.js';
@@ -44,6 +48,7 @@ const connections = Number(flag('connections', '50'));
 const customerCount = Number(flag('customers', '20000'));
 const only = flag('only', '').split(',').filter(Boolean);
 const cpuProfile = process.argv.includes('--cpu-prof');
+const apiFlags = flag('api-flags', '').trim();
 if (!(durationSeconds > 0) || !(connections > 0) || !(customerCount > 0))
   fail('bench', '--duration, --connections and --customers take positive numbers');
 
@@ -57,6 +62,8 @@ const dbEnv = {
   DB_PASSWORD: db.password,
 };
 const profileDir = join(projectRoot, '.tmp', 'bench');
+const memoryFile = join(profileDir, 'api-memory.json');
+mkdirSync(profileDir, { recursive: true });
 
 const mariadb = await startMariadb('test', db.port);
 recreateDatabase(mariadb, database);
@@ -81,7 +88,10 @@ const small = await seedBenchCompany(sequelize, {
   extraMembers: 3,
   passwordHash,
 });
-await selectRows(sequelize, 'ANALYZE TABLE customers, sites, memberships, sessions');
+await selectRows(
+  sequelize,
+  'ANALYZE TABLE customers, customer_search_words, sites, jobs, memberships, sessions',
+);
 await sequelize.close();
 say(
   'bench',
@@ -93,8 +103,10 @@ function startNode(
   port: number,
   extraEnv: Record<string, string>,
   nodeFlags: string[] = [],
+  imports: string[] = [],
 ) {
-  return spawn(process.execPath, [...nodeFlags, '--import', 'tsx', script], {
+  const preload = ['tsx', ...imports].flatMap((name) => ['--import', name]);
+  return spawn(process.execPath, [...nodeFlags, ...preload, script], {
     cwd: projectRoot,
     env: { ...process.env, ...dbEnv, PORT: String(port), ...extraEnv },
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -102,7 +114,6 @@ function startNode(
   });
 }
 
-if (cpuProfile) mkdirSync(profileDir, { recursive: true });
 const api = startNode(
   'apps/api/src/server.ts',
   benchApiPort,
@@ -119,8 +130,12 @@ const api = startNode(
     PROCESSOR_SECRET_KEY: 'sk_test_bench_never_used_0123',
     PROCESSOR_WEBHOOK_SECRET: 'whsec_bench_never_used_0123',
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
+    BENCH_MEMORY_FILE: memoryFile,
+    // As `npm start` runs it (scripts/lib/api-env.ts), unless an experiment says otherwise.
+    NODE_OPTIONS: apiFlags || apiNodeOptions,
   },
   cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],
+  ['./scripts/lib/bench-memory-probe.mjs'],
 );
 const baseline = startNode('scripts/lib/bench-baseline-server.ts', benchBaselinePort, {
   BENCH_COMPANY_ID: large.companyId,
@@ -135,6 +150,7 @@ const apiUrl = `http://127.0.0.1:${benchApiPort}`;
 const baselineUrl = `http://127.0.0.1:${benchBaselinePort}`;
 const results: RouteResult[] = [];
 let peakMb = NaN;
+let idleMb = NaN;
 try {
   await waitForHttp(`${apiUrl}/api/health`, 60_000, api);
   await waitForHttp(`${baselineUrl}/bare`, 60_000, baseline);
@@ -172,6 +188,12 @@ try {
       cookie: largeCookie,
     },
     { name: 'members', url: `${apiUrl}/api/members`, cookie: largeCookie },
+    { name: 'jobs p1', url: `${apiUrl}/api/jobs?page=1&pageSize=25`, cookie: largeCookie },
+    {
+      name: 'job detail',
+      url: `${apiUrl}/api/jobs/${large.sampleJobId}`,
+      cookie: largeCookie,
+    },
     {
       name: 'customers p1 (30)',
       url: `${apiUrl}/api/customers?page=1&pageSize=25`,
@@ -180,6 +202,7 @@ try {
     { name: 'GET /api/health', url: `${apiUrl}/api/health` },
   ];
   const memory = sampleResidentMemory(api.pid ?? 0);
+  idleMb = memory.currentMb();
   const status = await createConnection({ host: '127.0.0.1', port: db.port, ...database });
   const dbPid = Number(readFileSync(join(dataRoot, 'test', 'mariadb', 'mariadb.pid'), 'utf8'));
   const questions = async () => {
@@ -221,7 +244,18 @@ for (const r of results) {
       `${r.statementsPerRequest.toFixed(1)} | ${r.apiCpuMs.toFixed(2)} | ${r.dbCpuMs.toFixed(2)} | ${r.non2xx + r.errors} |`,
   );
 }
-console.log(`\nAPI peak resident memory: ${peakMb.toFixed(0)} MB`);
+console.log(
+  `\nAPI resident memory: ${idleMb.toFixed(0)} MB signed in and idle, ${peakMb.toFixed(0)} MB at its peak`,
+);
+try {
+  // MB, from the probe inside the API (scripts/lib/bench-memory-probe.mjs).
+  const usage = JSON.parse(readFileSync(memoryFile, 'utf8')) as Record<string, unknown>;
+  console.log(
+    `API process.memoryUsage() in MB, at start and at its peak: ${JSON.stringify(usage)}`,
+  );
+} catch {
+  console.log('API process.memoryUsage(): no sample written');
+}
 if (cpuProfile) console.log(`CPU profile written to ${profileDir}`);
 if (results.some((r) => r.non2xx + r.errors > 0 || r.requests === 0))
   fail('bench', 'some requests failed or none completed');

@@ -1,9 +1,11 @@
 // Data for the API benchmark: a large company (20,000 customers by default, most with one or two
 // sites, a few archived) and a small one (30 customers), each with an owner who can sign in, and
-// a handful of members in the large one. Bulk multi-row inserts, so seeding takes seconds.
+// a handful of members in the large one, and a job at the first site of every customer (so the
+// jobs list has as many rows as the customers list). Bulk multi-row inserts, so seeding takes
+// seconds. Estimates are not seeded yet (their lines and options need the price book).
 // Every name is invented from the syllables below.
 import { randomUUID } from 'node:crypto';
-import { executeSql } from '@seamwright/api';
+import { executeSql, unsafeInsertSearchWords } from '@seamwright/api';
 import type { createSequelize } from '@seamwright/api';
 
 type Sequelize = ReturnType<typeof createSequelize>;
@@ -15,12 +17,16 @@ export interface BenchCompany {
   ownerEmail: string;
   /** A customer in the middle of the list (for the detail route). */
   sampleCustomerId: string;
+  /** That customer's job (for the job detail route). */
+  sampleJobId: string;
   customers: number;
 }
 
 const firstNames = ['Odalys', 'Brannock', 'Ysolde', 'Tamsin', 'Corvin', 'Liesel', 'Oren', 'Pell'];
 const lastStems = ['Ash', 'Fen', 'Marl', 'Quill', 'Thorn', 'Wick', 'Bram', 'Hollin', 'Sedge'];
 const lastEnds = ['wright', 'grove', 'ridge', 'more', 'stead', 'field', 'brook', 'hart'];
+const jobStatuses = ['lead', 'estimated', 'accepted', 'scheduled', 'installed', 'paid', 'lost'];
+const jobTitles = ['Front lawn', 'Back yard putting green', 'Dog run', 'Side strip', 'Play area'];
 const streets = ['Larkspur Bend', 'Foundry Lane', 'Cinder Row', 'Tansy Court', 'Millrace Way'];
 const batchSize = 1000;
 
@@ -102,6 +108,7 @@ export async function seedBenchCompany(
 
   const customers: Record<string, unknown>[] = [];
   const sites: Record<string, unknown>[] = [];
+  const jobs: Record<string, unknown>[] = [];
   for (let i = 0; i < options.customerCount; i += 1) {
     const id = randomUUID();
     // Spread creation times over the past so created-at sorting has something to sort.
@@ -120,8 +127,20 @@ export async function seedBenchCompany(
       updated_at: created,
     });
     for (let s = 0; s < (i % 3 === 0 ? 2 : 1); s += 1) {
+      const siteId = randomUUID();
+      if (s === 0)
+        jobs.push({
+          id: randomUUID(),
+          company_id: companyId,
+          customer_id: id,
+          site_id: siteId,
+          title: `${pick(jobTitles, i)} ${String(i).padStart(5, '0')}`,
+          status: pick(jobStatuses, i),
+          created_at: created,
+          updated_at: created,
+        });
       sites.push({
-        id: randomUUID(),
+        id: siteId,
         company_id: companyId,
         customer_id: id,
         label: s === 0 ? 'Front yard' : 'Back yard',
@@ -141,6 +160,17 @@ export async function seedBenchCompany(
   }
   await insertInBatches(sequelize, 'customers', customers);
   await insertInBatches(sequelize, 'sites', sites);
+  await insertInBatches(sequelize, 'jobs', jobs);
+  await unsafeInsertSearchWords(
+    sequelize,
+    customers.map((c) => ({
+      id: String(c.id),
+      companyId,
+      name: String(c.name),
+      email: String(c.email),
+      phone: String(c.phone),
+    })),
+  );
   // The totals the service keeps on every change (migration 0006), for these bulk-loaded rows.
   await executeSql(
     sequelize,
@@ -149,11 +179,12 @@ export async function seedBenchCompany(
      FROM customers WHERE company_id = ? GROUP BY company_id`,
     [companyId],
   );
-  const middle = customers[Math.floor(customers.length / 2)];
+  const middle = Math.floor(customers.length / 2);
   return {
     companyId,
     ownerEmail,
-    sampleCustomerId: String(middle?.id),
+    sampleCustomerId: String(customers[middle]?.id),
+    sampleJobId: String(jobs.find((job) => job.customer_id === customers[middle]?.id)?.id),
     customers: options.customerCount,
   };
 }

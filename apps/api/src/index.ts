@@ -34,6 +34,7 @@ export { createLogger } from './http/logging.js';
 export { answerMalformedRequests } from './http/malformed-requests.js';
 export { createSessionStore } from './http/session.js';
 export { executeSql, selectRows } from './db/sql.js';
+export { unsafeInsertSearchWords } from './modules/customers/customer-search-words.js';
 export { getJobTakeoff, listJobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export type { JobTurfPiece, JobTurfPieces } from './modules/areas/job-takeoff.service.js';
 export { decoyPasswordFor, hashPassword } from './passwords.js';

@@ -156,12 +156,21 @@ describe('customers', () => {
     expect(
       (await owner.client.get('/api/customers?q=014-7777').expect(200)).body.data[0].name,
     ).toBe('Fern Sallow');
-    // % and _ are literal characters in a search, not wildcards.
+    // % and _ are literal characters in a search, not wildcards: a search matches the
+    // beginnings of words (DEVELOPERS.md, "Customer search"), so a lone % finds no one.
     expect(
-      (await owner.client.get('/api/customers?q=%25&status=all').expect(200)).body.data.map(
+      (await owner.client.get('/api/customers?q=100%25&status=all').expect(200)).body.data.map(
         (c: CustomerView) => c.name,
       ),
     ).toEqual(['Gorse 100% Tidy_Co']);
+    expect(
+      (await owner.client.get('/api/customers?q=tidy_&status=all').expect(200)).body.data.map(
+        (c: CustomerView) => c.name,
+      ),
+    ).toEqual(['Gorse 100% Tidy_Co']);
+    expect(
+      (await owner.client.get('/api/customers?q=%25&status=all').expect(200)).body.meta.total,
+    ).toBe(0);
 
     const onlyArchived = await owner.client.get('/api/customers?status=archived').expect(200);
     expect(onlyArchived.body.data.map((c: CustomerView) => c.name)).toEqual(['Gorse 100% Tidy_Co']);

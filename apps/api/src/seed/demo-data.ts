@@ -16,7 +16,10 @@ import { scoped } from '../db/tenant-scope.js';
 import type { Tx } from '../db/sequelize.js';
 import { planNewArea } from '../modules/areas/area-values.js';
 import { createArea } from '../modules/areas/areas.repository.js';
-import { unsafeRecountCustomers } from '../modules/customers/customers.repository.js';
+import {
+  unsafeIndexCustomerSearch,
+  unsafeRecountCustomers,
+} from '../modules/customers/customers.repository.js';
 import { findPriceBookItemByKey } from '../modules/price-book/price-book.repository.js';
 import { createStarterEstimating } from '../modules/price-book/starter-price-book.js';
 import type { PlannerPool } from '../planner/planner-pool.js';
@@ -165,6 +168,7 @@ async function createDemoCompany(
     }
     await seedDemoAreas(owner, jobIds, plannerPool, transaction);
     await unsafeRecountCustomers(company.id, transaction);
+    await unsafeIndexCustomerSearch(company.id, transaction);
     return owner;
   });
 }

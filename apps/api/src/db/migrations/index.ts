@@ -13,6 +13,7 @@ import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
 import { invoices } from './0014-invoices.js';
 import { processorEvents } from './0015-processor-events.js';
+import { customerSearchWordsMigration } from './0018-customer-search-words.js';
 import { refunds } from './0021-refunds.js';
 import type { Migration } from './types.js';
 
@@ -30,5 +31,6 @@ export const migrations: Migration[] = [
   rollStock,
   invoices,
   processorEvents,
+  customerSearchWordsMigration,
   refunds,
 ];

@@ -1,90 +1,14 @@
 import { QueryTypes } from 'sequelize';
-import type { CustomerListQuery } from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
 import { CustomerModel, SiteModel } from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
 import { scoped, scopedSql } from '../../db/tenant-scope.js';
+import { customerSearchWords, unsafeInsertSearchWords } from './customer-search-words.js';
+import type { SearchWordRow } from './customer-search-words.js';
 
 export type CustomerRow = Awaited<
   ReturnType<ReturnType<typeof scoped<CustomerModel>>['findAll']>
 >[number];
-
-/** `%` and `_` typed by the user are literal characters, not wildcards. */
-function containsPattern(text: string): string {
-  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-}
-
-const sortColumns = { name: 'name', createdAt: 'created_at', updatedAt: 'updated_at' } as const;
-
-/** The WHERE conditions of a list query (after the company), in SQL over `customers`. */
-function listFilter(query: CustomerListQuery): {
-  sql: string;
-  replacements: Record<string, unknown>;
-} {
-  const conditions: string[] = [];
-  if (query.status === 'active') conditions.push('archived_at IS NULL');
-  if (query.status === 'archived') conditions.push('archived_at IS NOT NULL');
-  if (query.q)
-    conditions.push('(name LIKE :pattern OR email LIKE :pattern OR phone LIKE :pattern)');
-  const sql = conditions.map((c) => ` AND ${c}`).join('');
-  return { sql, replacements: query.q ? { pattern: containsPattern(query.q) } : {} };
-}
-
-/** The list's total: the kept count when unfiltered by text, else a count through the index. */
-function totalSql(query: CustomerListQuery, filter: string): string {
-  if (query.q) return `SELECT COUNT(*) FROM customers WHERE company_id = :companyId${filter}`;
-  const column = { active: 'active', archived: 'archived', all: 'active + archived' }[query.status];
-  return `SELECT ${column} FROM customer_counts WHERE company_id = :companyId`;
-}
-
-const viewColumns = `c.id, c.name, c.email, c.phone, c.billing_address AS billingAddress, c.notes,
-  c.archived_at AS archivedAt, c.created_at AS createdAt, c.updated_at AS updatedAt,
-  (SELECT COUNT(*) FROM sites s WHERE s.company_id = :companyId AND s.customer_id = c.id) AS siteCount`;
-
-export type CustomerListRow = Omit<CustomerRow, 'companyId'> & { siteCount: number };
-type ListRow = Omit<CustomerListRow, 'id'> & { id: string | null; total: number | null };
-
-function toListRow({ total: _total, ...row }: ListRow & { id: string }): CustomerListRow {
-  return { ...row, siteCount: Number(row.siteCount) };
-}
-
-/**
- * One page of customers with their site counts and the list's total, in one statement: the
- * page's ids come from an index alone (so a late page skips index entries, not rows), then
- * only those rows are read. The total sits in a one-row table the page is left-joined to, so
- * it comes back even when the page is empty. See docs/PERFORMANCE.md for the plan.
- */
-export async function listCustomers(ctx: RequestContext, query: CustomerListQuery) {
-  const filter = listFilter(query);
-  const direction = query.sort.direction === 'desc' ? 'DESC' : 'ASC';
-  const column = sortColumns[query.sort.field];
-  // The id breaks ties in the same direction, so the index serves the order in both directions.
-  const order = (table: string) => `${table}${column} ${direction}, ${table}id ${direction}`;
-  const rows = await scopedSql(ctx, CustomerModel.sequelize!).select<ListRow>(
-    `SELECT t.total, ${viewColumns}
-     FROM (SELECT (${totalSql(query, filter.sql)}) AS total) t
-     LEFT JOIN (SELECT id FROM customers WHERE company_id = :companyId${filter.sql}
-                ORDER BY ${order('')} LIMIT :limit OFFSET :offset) page ON TRUE
-     LEFT JOIN customers c ON c.id = page.id AND c.company_id = :companyId
-     ORDER BY ${order('c.')}`,
-    { ...filter.replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize },
-  );
-  const onPage = rows.filter((row): row is ListRow & { id: string } => row.id !== null);
-  return { rows: onPage.map(toListRow), total: Number(rows[0]?.total ?? 0) };
-}
-
-/** One customer of this company with its site count, or null. */
-export async function findCustomerView(
-  ctx: RequestContext,
-  id: string,
-): Promise<CustomerListRow | null> {
-  const [row] = await scopedSql(ctx, CustomerModel.sequelize!).select<ListRow & { id: string }>(
-    `SELECT ${viewColumns}, NULL AS total FROM customers c
-     WHERE c.id = :id AND c.company_id = :companyId`,
-    { id },
-  );
-  return row ? toListRow(row) : null;
-}
 
 /**
  * Keeps `customer_counts` in step with a change to this company's customers, inside the
@@ -101,6 +25,36 @@ export function adjustCustomerCounts(
      ON DUPLICATE KEY UPDATE active = GREATEST(active + :active, 0),
        archived = GREATEST(archived + :archived, 0)`,
     change,
+    tx,
+  );
+}
+
+/**
+ * Rewrites the words this customer is found by (customer-search-words.ts), inside the
+ * change's transaction, so a search never sees a name or e-mail the row no longer has.
+ */
+export async function writeSearchWords(
+  ctx: RequestContext,
+  customer: { id: string; name: string; email: string | null; phone: string | null },
+  tx: Tx,
+  replace: boolean,
+): Promise<void> {
+  const sql = scopedSql(ctx, CustomerModel.sequelize!);
+  if (replace)
+    await sql.execute(
+      'DELETE FROM customer_search_words WHERE company_id = :companyId AND customer_id = :id',
+      { id: customer.id },
+      tx,
+    );
+  const words = customerSearchWords(customer);
+  if (words.length === 0) return;
+  const values = words.map((_, i) => `(:companyId, :w${i}, :id)`).join(', ');
+  // The key compares words by the column's collation (case and accents folded), so two words
+  // told apart here may be one key: the second is a no-op, not an error.
+  await sql.execute(
+    `INSERT INTO customer_search_words (company_id, word, customer_id) VALUES ${values}
+     ON DUPLICATE KEY UPDATE customer_id = customer_id`,
+    { id: customer.id, ...Object.fromEntries(words.map((w, n) => [`w${n}`, w])) },
     tx,
   );
 }
@@ -158,4 +112,16 @@ export async function unsafeRecountCustomers(companyId: string, tx?: Tx): Promis
       ...(tx ? { transaction: tx } : {}),
     },
   );
+}
+
+/**
+ * Writes the search words of every customer of one company. Unscoped by design, like the
+ * recount above: for loaders that insert customers without the service (the demo seed).
+ */
+export async function unsafeIndexCustomerSearch(companyId: string, tx?: Tx): Promise<void> {
+  const rows = await CustomerModel.sequelize!.query<SearchWordRow>(
+    'SELECT id, company_id AS companyId, name, email, phone FROM customers WHERE company_id = ?',
+    { replacements: [companyId], type: QueryTypes.SELECT, ...(tx ? { transaction: tx } : {}) },
+  );
+  await unsafeInsertSearchWords(CustomerModel.sequelize!, rows, tx);
 }

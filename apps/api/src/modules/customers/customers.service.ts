@@ -18,10 +18,10 @@ import {
   createCustomer,
   deleteCustomerWithSites,
   findCustomer,
-  findCustomerView,
-  listCustomers,
   updateCustomer,
+  writeSearchWords,
 } from './customers.repository.js';
+import { findCustomerView, listCustomers } from './customers-list.repository.js';
 
 /** Billing details are blanked for roles that may not read them. */
 function toView(
@@ -76,6 +76,7 @@ export function createCustomersService(sequelize: Sequelize) {
         tx,
       );
       await adjustCustomerCounts(ctx, { active: 1, archived: 0 }, tx);
+      await writeSearchWords(ctx, created, tx, false);
       await recordAuditEvent(
         ctx,
         {
@@ -114,6 +115,8 @@ export function createCustomersService(sequelize: Sequelize) {
         await adjustCustomerCounts(ctx, { active: 1, archived: -1 }, tx);
       }
       await updateCustomer(ctx, id, changes, tx);
+      if (changes.name !== undefined || changes.email !== undefined || changes.phone !== undefined)
+        await writeSearchWords(ctx, { ...current, ...changes }, tx, true);
       await recordAuditEvent(
         ctx,
         { action, entity: 'customer', entityId: id, data: { fields: Object.keys(changes) } },

@@ -62,20 +62,41 @@ function listWhere(query: JobListQuery): WhereOptions<JobModel['_attributes']> {
 }
 
 /**
- * One page of jobs and the total, in one statement: `COUNT(*) OVER ()` counts every matching row
- * before LIMIT (the joins are to-one, so rows are jobs). Only a page past the end, which has no
- * row to carry the total, costs a second statement.
+ * The list's total as a sub-select the page carries on each row. Without a search it counts
+ * the company's jobs through an index (`jobs_company_status_created` or `jobs_company_created`),
+ * evaluated once; `COUNT(*) OVER ()` instead made MariaDB join and sort every job of the
+ * company before the LIMIT (342 ms on 20,000 jobs, docs/PERFORMANCE.md). A search still counts
+ * with the window: its matches need the customer and site joins anyway.
+ */
+function totalColumn(ctx: RequestContext, query: JobListQuery) {
+  if (query.q) return literal('COUNT(*) OVER ()');
+  const sequelize = JobModel.sequelize!;
+  const conditions = [`j.company_id = ${sequelize.escape(ctx.companyId)}`];
+  if (query.status.length > 0)
+    conditions.push(`j.status IN (${query.status.map((s) => sequelize.escape(s)).join(', ')})`);
+  if (query.from)
+    conditions.push(`j.created_at >= ${sequelize.escape(new Date(`${query.from}T00:00:00.000Z`))}`);
+  if (query.to) conditions.push(`j.created_at < ${sequelize.escape(dayAfter(query.to))}`);
+  return literal(`(SELECT COUNT(*) FROM jobs j WHERE ${conditions.join(' AND ')})`);
+}
+
+/**
+ * One page of jobs and the total, in one statement. The id breaks ties in the sort's own
+ * direction, so the sort's index serves the order in both directions and the page stops after
+ * its rows. Only a page past the end, which has no row to carry the total, costs a second
+ * statement.
  */
 export async function listJobs(ctx: RequestContext, query: JobListQuery) {
   const jobs = scoped(ctx, JobModel);
   const where = listWhere(query);
+  const direction = query.sort.direction.toUpperCase();
   const rows = (await jobs.findAll({
     where,
     include: parents,
-    attributes: { include: [[literal('COUNT(*) OVER ()'), 'totalRows']] },
+    attributes: { include: [[totalColumn(ctx, query), 'totalRows']] },
     order: [
-      [query.sort.field, query.sort.direction.toUpperCase()],
-      ['id', 'ASC'],
+      [query.sort.field, direction],
+      ['id', direction],
     ],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
