@@ -113,6 +113,7 @@ const api = startNode(
     // speaks plain HTTP and says `x-forwarded-proto: https`, as the proxy would.
     APP_URL: `https://127.0.0.1:${benchApiPort}`,
     TRUST_PROXY: '1',
+    UPLOADS_DIR: join(dataRoot, 'uploads', 'bench'),
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
   },
   cpuProfile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [],

@@ -7,6 +7,7 @@ const production = {
   SESSION_SECRET: 'a-production-secret-of-our-own-0123',
   APP_URL: 'https://turf.example.test',
   TRUST_PROXY: '1',
+  UPLOADS_DIR: '/srv/seamwright/uploads',
 };
 
 function without(name: keyof typeof production): Record<string, string> {
@@ -22,7 +23,7 @@ describe('loadEnv in production', () => {
     expect(env.trustedOrigins).toEqual(['https://turf.example.test']);
   });
 
-  it.each(['SESSION_SECRET', 'APP_URL', 'TRUST_PROXY'] as const)(
+  it.each(['SESSION_SECRET', 'APP_URL', 'TRUST_PROXY', 'UPLOADS_DIR'] as const)(
     'refuses to start without %s and names it',
     (name) => {
       expect(() => loadEnv(without(name))).toThrow(
@@ -41,6 +42,7 @@ describe('loadEnv in production', () => {
     expect(message).toMatch(/SESSION_SECRET is required/);
     expect(message).toMatch(/APP_URL is required/);
     expect(message).toMatch(/TRUST_PROXY is required/);
+    expect(message).toMatch(/UPLOADS_DIR is required/);
   });
 
   it("accepts TRUST_PROXY 'false' and '0' as an explicit choice", () => {

@@ -1,5 +1,6 @@
 // The only file that reads process.env. Everything else receives a typed `Env`.
-import { availableParallelism } from 'node:os';
+import { availableParallelism, tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { z } from 'zod';
 
 const devSessionSecret = 'seamwright-dev-session-secret-not-for-production';
@@ -76,6 +77,8 @@ const envSchema = z
     PLANNER_BUDGET_MS: z.coerce.number().int().min(50).max(600_000).default(5000),
     /** Planner tasks allowed to wait for a thread; past it the API answers 503. */
     PLANNER_MAX_QUEUE: z.coerce.number().int().min(0).max(10_000).optional(),
+    /** Folder of the local-disk upload storage (required in production). */
+    UPLOADS_DIR: z.string().min(1).optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV !== 'production') return;
@@ -97,6 +100,7 @@ const envSchema = z
     if (!value.APP_URL) missing('APP_URL', 'the origin state-changing requests must come from');
     if (value.TRUST_PROXY === undefined || value.TRUST_PROXY === '')
       missing('TRUST_PROXY', "set it explicitly, 'false' when no proxy is in front");
+    if (!value.UPLOADS_DIR) missing('UPLOADS_DIR', 'where uploaded photos and sketches are kept');
     if (value.COOKIE_SECURE === false)
       ctx.addIssue({
         code: 'custom',
@@ -125,6 +129,8 @@ export interface Env {
   /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
   trustedOrigins: string[];
   planner: { threads: number; budgetMs: number; maxQueue: number };
+  /** Absolute folder of the local-disk upload storage. */
+  uploadsDir: string;
 }
 
 /** Allowed requests per window, per IP and per account (e-mail, token or user). */
@@ -190,6 +196,17 @@ function plannerConfig(
 }
 
 /**
+ * The scripts pass each instance's own git-ignored folder (`.data/uploads/<instance>`). Without
+ * one, tests keep files in a temporary folder of their process and development in `.data/uploads`
+ * under the working directory; production must say (checked above).
+ */
+function uploadsDirFor(raw: string | undefined, nodeEnv: Env['nodeEnv']): string {
+  if (raw) return resolve(raw);
+  if (nodeEnv === 'test') return join(tmpdir(), `seamwright-uploads-${process.pid}`);
+  return resolve('.data', 'uploads');
+}
+
+/**
  * Reads and validates the environment. Throws with every problem listed when it is invalid.
  * `source` defaults to `process.env`; tests and scripts may pass their own object.
  */
@@ -248,5 +265,6 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     cookieNames: cookieNamesFor(appUrl, cookieSecure),
     trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
     planner: plannerConfig(e.PLANNER_THREADS, e.PLANNER_BUDGET_MS, e.PLANNER_MAX_QUEUE),
+    uploadsDir: uploadsDirFor(e.UPLOADS_DIR, e.NODE_ENV),
   };
 }

@@ -19,6 +19,7 @@ import { RollModel } from './roll.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { TurfReservationModel } from './turf-reservation.model.js';
+import { UploadModel } from './upload.model.js';
 import { UserModel } from './user.model.js';
 import { guardTenantModels } from '../tenant-guard.js';
 // JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
@@ -44,6 +45,7 @@ export {
   SessionModel,
   SiteModel,
   TurfReservationModel,
+  UploadModel,
   UserModel,
 };
 
@@ -68,6 +70,7 @@ const allModels = [
   EstimateModel,
   EstimateLinkModel,
   EstimateAnswerModel,
+  UploadModel,
 ] as const;
 
 /**
