@@ -75,6 +75,8 @@ export function safeFileName(original: string, extension: string): string {
   const base = (original.split(/[\\/]/).pop() ?? '')
     .replace(/\.[^.]*$/, '')
     .normalize('NFKD')
+    // Accents come apart under NFKD; drop the marks so "Jardín" stays readable as "Jardin".
+    .replace(/[\u0300-\u036f]/g, '')
     .replace(/[^A-Za-z0-9._ -]+/g, '_')
     .replace(/^[.\s_]+/, '')
     .slice(0, 90)
