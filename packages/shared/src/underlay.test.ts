@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { feetPerPixel, underlayPixelToFeet, underlayScaleInputSchema } from './underlay.js';
+import {
+  feetPerPixel,
+  underlayFeetToPixel,
+  underlayPixelToFeet,
+  underlayScaleInputSchema,
+} from './underlay.js';
 
 // Plain geometry (from memory): feet per pixel is the known distance over the pixel distance.
 describe('feetPerPixel', () => {
@@ -32,6 +37,17 @@ describe('underlayPixelToFeet', () => {
     const p = underlayPixelToFeet(placement, { x: 10, y: 0 });
     expect(p.x).toBeCloseTo(0, 9);
     expect(p.y).toBeCloseTo(10, 9);
+  });
+});
+
+describe('underlayFeetToPixel', () => {
+  it('undoes underlayPixelToFeet, turned or not', () => {
+    for (const rotationDeg of [0, 30, -120]) {
+      const placement = { feetPerPixel: 0.04, offsetFt: { x: -3, y: 12 }, rotationDeg };
+      const back = underlayFeetToPixel(placement, underlayPixelToFeet(placement, { x: 77, y: 41 }));
+      expect(back.x).toBeCloseTo(77, 9);
+      expect(back.y).toBeCloseTo(41, 9);
+    }
   });
 });
 

@@ -110,3 +110,16 @@ export function underlayPixelToFeet(
     y: placement.offsetFt.y + u * Math.sin(t) + v * Math.cos(t),
   };
 }
+
+/** The image pixel under a point of the drawing (the inverse of `underlayPixelToFeet`). */
+export function underlayFeetToPixel(
+  placement: UnderlayPlacement,
+  point: { x: number; y: number },
+): PixelPoint {
+  const t = (placement.rotationDeg * Math.PI) / 180;
+  const dx = point.x - placement.offsetFt.x;
+  const dy = point.y - placement.offsetFt.y;
+  const u = dx * Math.cos(t) + dy * Math.sin(t);
+  const v = -dx * Math.sin(t) + dy * Math.cos(t);
+  return { x: u / placement.feetPerPixel, y: -v / placement.feetPerPixel };
+}
