@@ -107,6 +107,7 @@ export function useUnderlay(
     pendingSave.current = setTimeout(() => {
       void run(async () => {
         setView(await saveUnderlayScale(areaId, { ...scale, ...next }));
+        setStatus('Photo position saved.');
       });
     }, SAVE_DELAY_MS);
   };
