@@ -21,6 +21,7 @@ async function post(page: Page, path: string, data: unknown): Promise<string> {
 
 /** Clicks the sketch at one of its own pixels, wherever the drawing shows it. */
 async function clickSketchAt(page: Page, x: number, y: number) {
+  await page.getByRole('application').scrollIntoViewIfNeeded();
   const box = await page.getByTestId('underlay-image').boundingBox();
   if (!box) throw new Error('the sketch is not drawn');
   await page.mouse.click(box.x + (box.width * x) / 400, box.y + (box.height * y) / 300);
@@ -91,7 +92,7 @@ test('office puts a yard sketch under an area, scales it by two points, and find
   await expect(panel.getByText(`To scale: A to B is 30' 0".`)).toBeVisible();
   await expect(panel.getByLabel(/Photo strength \(70%\)/)).toBeVisible();
   const image = page.getByTestId('underlay-image');
-  await expect(image).toHaveAttribute('transform', /^translate\(-4 -20\) rotate\(0\) scale\(0\.09/);
+  await expect(image).toHaveAttribute('transform', /^translate\(-4 -17\) rotate\(0\) scale\(0\.09/);
   await expect(image).toHaveAttribute('opacity', '0.7');
 
   await page.setViewportSize({ width: 390, height: 844 });
