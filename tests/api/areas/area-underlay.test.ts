@@ -1,4 +1,3 @@
-/* eslint-disable @typescript-eslint/no-unsafe-call -- supertest response bodies are untyped JSON */
 // A photo or sketch under an area's drawing (issue 7 item 2): upload, scale by two points a
 // known distance apart, placement, removal, roles, and nothing half-saved.
 import { readdir } from 'node:fs/promises';

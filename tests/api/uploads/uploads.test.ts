@@ -1,4 +1,3 @@
-/* eslint-disable @typescript-eslint/no-unsafe-call -- supertest response bodies are untyped JSON */
 // Uploads are checked by their content and size (issue 11 item 4, ASVS V12 file upload) and
 // served with safe headers. Driven through the area underlay route, the first user of the module.
 import { readdir } from 'node:fs/promises';
