@@ -43,11 +43,7 @@ export function createAreaUnderlayService(deps: ServiceDeps) {
   }
 
   /** Inside `tx`: the job may change, and the area is read again under the job's lock. */
-  async function lockArea(
-    ctx: RequestContext,
-    area: AreaRecord,
-    tx: Tx,
-  ) {
+  async function lockArea(ctx: RequestContext, area: AreaRecord, tx: Tx) {
     await lockEditableJob(ctx, area.jobId, tx);
     const locked = await findArea(ctx, area.id, tx);
     if (!locked) throw notFound('Area');
