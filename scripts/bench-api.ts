@@ -129,6 +129,7 @@ const api = startNode(
     PROCESSOR_URL: 'http://127.0.0.1:9',
     PROCESSOR_SECRET_KEY: 'sk_test_bench_never_used_0123',
     PROCESSOR_WEBHOOK_SECRET: 'whsec_bench_never_used_0123',
+    UPLOADS_DIR: join(dataRoot, 'uploads', 'bench'),
     LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
     BENCH_MEMORY_FILE: memoryFile,
     // As `npm start` runs it (scripts/lib/api-env.ts), unless an experiment says otherwise.

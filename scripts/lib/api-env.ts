@@ -1,5 +1,7 @@
 // The environment the API process expects (see apps/api/src/config/env.ts), for one instance.
+import { join } from 'node:path';
 import { instances, type InstanceName } from './instances.js';
+import { dataRoot } from './paths.js';
 import { webDistDir } from './web-build.js';
 
 /**
@@ -32,6 +34,7 @@ export function apiEnv(
     MAIL_FROM: 'Seamwright <no-reply@seamwright.test>',
     PROCESSOR_URL: `http://127.0.0.1:${settings.processorPort}`,
     WEB_DIST_DIR: webDistDir,
+    UPLOADS_DIR: join(dataRoot, 'uploads', name),
     LOG_LEVEL: process.env.LOG_LEVEL ?? (name === 'test' ? 'warn' : 'info'),
     NODE_OPTIONS: [process.env.NODE_OPTIONS, apiNodeOptions].filter(Boolean).join(' '),
   };

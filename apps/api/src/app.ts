@@ -9,7 +9,7 @@ import type { Sequelize } from 'sequelize';
 import type { Env } from './config/env.js';
 import type { ServiceDeps } from './deps.js';
 import { createCsrf } from './http/csrf.js';
-import { requireJsonBody } from './http/client-errors.js';
+import { createRequireJsonBody } from './http/client-errors.js';
 import { apiNotFound, errorHandler } from './http/error-handler.js';
 import { tokenRoutePatterns } from './http/log-redaction.js';
 import { createHttpLogger, createLogger } from './http/logging.js';
@@ -24,6 +24,8 @@ import { registerProcessorWebhookRoutes } from './modules/processor/webhook.rout
 import type { Mailer } from './mail/mailer.js';
 import type { PlannerPool } from './planner/planner-pool.js';
 import { registerApiRoutes } from './routes.js';
+import { createLocalDiskStorage } from './modules/uploads/upload-storage.js';
+import type { FileStorage } from './modules/uploads/upload-storage.js';
 
 export interface AppDeps {
   env: Env;
@@ -35,6 +37,8 @@ export interface AppDeps {
   sessionStore?: SessionStore;
   /** Owned by the caller, who closes it on shutdown (`createPlannerPool(env.planner)`). */
   plannerPool: PlannerPool;
+  /** Defaults to the local disk under `env.uploadsDir`. */
+  storage?: FileStorage;
 }
 
 declare global {
@@ -56,6 +60,7 @@ export function createApp(deps: AppDeps): Express {
     logger,
     mailer: deps.mailer ?? createMailer(env.smtp),
     plannerPool: deps.plannerPool,
+    storage: deps.storage ?? createLocalDiskStorage(env.uploadsDir),
   };
   const store = deps.sessionStore ?? createSessionStore(sequelize, 0);
   const csrf = createCsrf(env);
@@ -80,7 +85,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api',
     express.json({ limit: '1mb' }),
-    requireJsonBody,
+    createRequireJsonBody(routes.multipartPaths),
     createSessionMiddleware(env, store),
     csrf.verify,
     routes.router,

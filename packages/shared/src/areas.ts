@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { requiredText } from './text.js';
+import type { AreaUnderlayView } from './underlay.js';
 
 /**
  * Areas of a job and their saved plans (`POST /api/jobs/:id/areas`, `GET|PATCH|DELETE
@@ -153,6 +154,8 @@ export interface AreaView<TPlan = Record<string, unknown>> {
   request: Record<string, unknown>;
   plan: TPlan & { engineVersion: string };
   alternatives: AreaAlternativeView<TPlan>[];
+  /** The photo or sketch under the drawing, or null (`/api/areas/:id/underlay`). */
+  underlay: AreaUnderlayView | null;
   createdAt: string;
   updatedAt: string;
 }

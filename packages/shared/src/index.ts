@@ -21,3 +21,4 @@ export * from './estimate-sending.js';
 export * from './invoices.js';
 export * from './processor.js';
 export * from './refunds.js';
+export * from './underlay.js';

@@ -1,5 +1,7 @@
 // The CSRF check also refuses writes a browser says came from another site, and in production
 // the cookies are Secure, `__Host-`-named on https, and scoped to the host.
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { createApp, createSequelize, loadEnv } from '@seamwright/api';
@@ -74,6 +76,7 @@ describe('cookies in production', () => {
     NODE_ENV: 'production',
     APP_URL: appUrl,
     TRUST_PROXY: '1',
+    UPLOADS_DIR: join(tmpdir(), `seamwright-uploads-${process.pid}`),
   });
   const sequelize = createSequelize(env.db);
   const app = createApp({ env, sequelize, plannerPool: testApp().plannerPool });

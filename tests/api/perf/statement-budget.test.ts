@@ -8,6 +8,7 @@ import type { Client } from '../../fixtures/client.js';
 import { addMember, createCustomer, createSite, signUpCompany } from '../../fixtures/factories.js';
 import { recordStatements } from '../../fixtures/statements.js';
 import { createArea, turfProducts } from '../../fixtures/areas.js';
+import { pngImage, uploadFile } from '../../fixtures/images.js';
 
 /** The default for a signed-in read: the session with the membership, then the data. */
 const defaultReadBudget = 2;
@@ -49,6 +50,11 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   // The job with its customer and site in one join, then its activity (audit events).
   '/api/jobs/:id': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}`] },
   '/api/areas/:id': { budget: 2, urls: (ids) => [`/api/areas/${ids.areaId}`] },
+  // The area, then its file's row in `uploads` (the one record of every stored file).
+  '/api/areas/:id/underlay': {
+    budget: 3,
+    urls: (ids) => [`/api/areas/${ids.areaId}/underlay`],
+  },
   // The job is checked first (another company's is a 404), then its areas.
   '/api/jobs/:id/areas': { budget: 3, urls: (ids) => [`/api/jobs/${ids.jobId}/areas`] },
   // The job, its areas and the company's estimating settings, read in parallel.
@@ -102,6 +108,9 @@ describe('statement budget of signed-in requests', () => {
       .expect(201);
     const jobId = (job.body as { data: { id: string } }).data.id;
     const area = await createArea(owner, jobId);
+    await uploadFile(owner, `/api/areas/${area.id}/underlay`, pngImage(20, 10), 'yard.png').expect(
+      201,
+    );
     const [turf] = await turfProducts(owner);
     const rolls = await owner
       .post('/api/rolls/deliveries', {
@@ -135,6 +144,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/audit-events',
       '/api/price-book',
       '/api/jobs/:id',
+      '/api/areas/:id/underlay',
       '/api/jobs/:id/areas',
       '/api/jobs/:id/takeoff',
       '/api/jobs/:id/reservations',

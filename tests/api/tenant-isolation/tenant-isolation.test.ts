@@ -6,6 +6,7 @@ import { selectRows } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
 import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
+import { pngImage, uploadFile } from '../../fixtures/images.js';
 import {
   addMember,
   createCustomer,
@@ -378,6 +379,30 @@ const probes: Record<string, Probe> = {
     kind: 'tenant',
     run: (b, w) => notFound(b.del(`/api/areas/${w.aAreaId}`)),
   },
+  'post /api/areas/:id/underlay': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(uploadFile(b, `/api/areas/${w.aAreaId}/underlay`, pngImage(6, 6), 'hijack.png')),
+  },
+  'put /api/areas/:id/underlay/scale': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.put(`/api/areas/${w.aAreaId}/underlay/scale`, {
+          a: { x: 0, y: 0 },
+          b: { x: 5, y: 0 },
+          distanceFt: 1,
+        }),
+      ),
+  },
+  'get /api/areas/:id/underlay': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/areas/${w.aAreaId}/underlay`)),
+  },
+  'delete /api/areas/:id/underlay': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/areas/${w.aAreaId}/underlay`)),
+  },
   'get /api/rolls': {
     kind: 'tenant',
     run: async (b, w) => {
@@ -588,7 +613,10 @@ async function snapshotOfA(w: World) {
       'SELECT id, item_key, price_millicents, updated_at FROM price_book_items WHERE company_id = ? ORDER BY id',
     ),
     areas: await q(
-      'SELECT id, name, plan, updated_at FROM job_areas WHERE company_id = ? ORDER BY id',
+      'SELECT id, name, plan, underlay_upload_id, underlay, updated_at FROM job_areas WHERE company_id = ? ORDER BY id',
+    ),
+    uploads: await q(
+      'SELECT id, sha256, storage_key FROM uploads WHERE company_id = ? ORDER BY id',
     ),
     rolls: await q(
       'SELECT id, remaining_ft, held_ft, location, updated_at FROM rolls WHERE company_id = ? ORDER BY id',
@@ -635,6 +663,9 @@ describe('tenant isolation', () => {
     const bSite = await createSite(b.client, bCustomer.id);
     const bJob = await createJob(b.client, bCustomer.id, bSite.id, 'Bravo job');
     const aArea = await createArea(a.client, aJob.id, areaBody({ name: 'Alpha area' }));
+    await uploadFile(a.client, `/api/areas/${aArea.id}/underlay`, pngImage(10, 10), 'a.png').expect(
+      201,
+    );
     const [aTurf] = await turfProducts(a.client);
     const aPriceItem = await a.client.post('/api/price-book', alphaPriceItem).expect(201);
     await a.client.patch('/api/estimating-settings', { markupBasisPoints: 1234 }).expect(200);
@@ -705,6 +736,7 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/sites/${world.aSiteId}`).expect(200);
     await world.a.client.get(`/api/jobs/${world.aJobId}`).expect(200);
     await world.a.client.get(`/api/areas/${world.aAreaId}`).expect(200);
+    await world.a.client.get(`/api/areas/${world.aAreaId}/underlay`).expect(200);
     await world.a.client.get(`/api/estimates/${world.aEstimateId}`).expect(200);
   });
 

@@ -9,6 +9,7 @@ const production = {
   TRUST_PROXY: '1',
   PROCESSOR_SECRET_KEY: 'sk_live_our_own_key_0123456789',
   PROCESSOR_WEBHOOK_SECRET: 'whsec_our_own_secret_0123456789',
+  UPLOADS_DIR: '/srv/seamwright/uploads',
 };
 
 function without(name: keyof typeof production): Record<string, string> {
@@ -30,6 +31,7 @@ describe('loadEnv in production', () => {
     'TRUST_PROXY',
     'PROCESSOR_SECRET_KEY',
     'PROCESSOR_WEBHOOK_SECRET',
+    'UPLOADS_DIR',
   ] as const)('refuses to start without %s and names it', (name) => {
     expect(() => loadEnv(without(name))).toThrow(
       new RegExp(`${name}: ${name} is required in production`),
@@ -46,6 +48,7 @@ describe('loadEnv in production', () => {
     expect(message).toMatch(/SESSION_SECRET is required/);
     expect(message).toMatch(/APP_URL is required/);
     expect(message).toMatch(/TRUST_PROXY is required/);
+    expect(message).toMatch(/UPLOADS_DIR is required/);
   });
 
   it("accepts TRUST_PROXY 'false' and '0' as an explicit choice", () => {

@@ -1,5 +1,6 @@
 // The only file that reads process.env. Everything else receives a typed `Env`.
-import { availableParallelism } from 'node:os';
+import { availableParallelism, tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { z } from 'zod';
 import { localProcessorDefaults } from '@seamwright/shared';
 
@@ -91,6 +92,8 @@ const envSchema = z
     PROCESSOR_MAX_RETRIES: z.coerce.number().int().min(0).max(5).default(1),
     /** How old a webhook's signed timestamp may be; the processor's libraries use 300 s. */
     PROCESSOR_WEBHOOK_TOLERANCE_S: z.coerce.number().int().min(1).max(3600).default(300),
+    /** Folder of the local-disk upload storage (required in production). */
+    UPLOADS_DIR: z.string().min(1).optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV !== 'production') return;
@@ -129,6 +132,7 @@ const envSchema = z
         message:
           "PROCESSOR_WEBHOOK_SECRET must be your own secret in production, not the local fake's",
       });
+    if (!value.UPLOADS_DIR) missing('UPLOADS_DIR', 'where uploaded photos and sketches are kept');
     if (value.COOKIE_SECURE === false)
       ctx.addIssue({
         code: 'custom',
@@ -158,6 +162,8 @@ export interface Env {
   trustedOrigins: string[];
   planner: { threads: number; budgetMs: number; maxQueue: number };
   processor: ProcessorConfig;
+  /** Absolute folder of the local-disk upload storage. */
+  uploadsDir: string;
 }
 
 /** How the API reaches the payment processor (modules/processor builds the SDK client from it). */
@@ -246,6 +252,17 @@ function processorApiOf(raw: string | undefined, nodeEnv: Env['nodeEnv']): Proce
 }
 
 /**
+ * The scripts pass each instance's own git-ignored folder (`.data/uploads/<instance>`). Without
+ * one, tests keep files in a temporary folder of their process and development in `.data/uploads`
+ * under the working directory; production must say (checked above).
+ */
+function uploadsDirFor(raw: string | undefined, nodeEnv: Env['nodeEnv']): string {
+  if (raw) return resolve(raw);
+  if (nodeEnv === 'test') return join(tmpdir(), `seamwright-uploads-${process.pid}`);
+  return resolve('.data', 'uploads');
+}
+
+/**
  * Reads and validates the environment. Throws with every problem listed when it is invalid.
  * `source` defaults to `process.env`; tests and scripts may pass their own object.
  */
@@ -312,5 +329,6 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       maxNetworkRetries: e.PROCESSOR_MAX_RETRIES,
       webhookToleranceSeconds: e.PROCESSOR_WEBHOOK_TOLERANCE_S,
     },
+    uploadsDir: uploadsDirFor(e.UPLOADS_DIR, e.NODE_ENV),
   };
 }

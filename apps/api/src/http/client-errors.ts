@@ -97,17 +97,34 @@ const methodsWithBody = new Set(['POST', 'PATCH', 'PUT', 'DELETE']);
 /**
  * After express.json(): a body in any other format would reach the handlers as "no body" and
  * be misreported as missing fields, so it is refused with 415 naming the type that was sent.
+ * The upload routes (router-relative `multipartPaths`, `:param` segments match any one
+ * segment) take multipart/form-data instead, read by their own multer step.
  */
-export const requireJsonBody: RequestHandler = (req, _res, next) => {
-  if (!methodsWithBody.has(req.method) || !hasBody(req.headers)) return next();
-  if (req.is('application/json')) return next();
-  next(
-    new AppError(
-      'UNSUPPORTED_MEDIA_TYPE',
-      `Content-Type "${(req.get('content-type') ?? '(none)').slice(0, 100)}" is not supported; send the body as application/json`,
-    ),
-  );
-};
+export function createRequireJsonBody(multipartPaths: readonly string[]): RequestHandler {
+  const patterns = multipartPaths.map((path) => path.split('/'));
+  const isUploadRoute = (path: string) => {
+    const segments = path.replace(/\/$/, '').split('/');
+    return patterns.some(
+      (pattern) =>
+        pattern.length === segments.length &&
+        pattern.every(
+          (p, i) => p.startsWith(':') || p.toLowerCase() === segments[i]?.toLowerCase(),
+        ),
+    );
+  };
+  return (req, _res, next) => {
+    if (!methodsWithBody.has(req.method) || !hasBody(req.headers)) return next();
+    if (req.is('application/json')) return next();
+    if (req.is('multipart/form-data') && isUploadRoute(req.path)) return next();
+    const expected = isUploadRoute(req.path) ? 'multipart/form-data' : 'application/json';
+    next(
+      new AppError(
+        'UNSUPPORTED_MEDIA_TYPE',
+        `Content-Type "${(req.get('content-type') ?? '(none)').slice(0, 100)}" is not supported; send the body as ${expected}`,
+      ),
+    );
+  };
+}
 
 /** Same test as type-is: a body is announced by Transfer-Encoding or a non-zero Content-Length. */
 function hasBody(headers: { 'transfer-encoding'?: string; 'content-length'?: string }): boolean {

@@ -25,11 +25,15 @@ export interface RouteEntry {
 export interface RouteOptions {
   access: Access;
   permission?: Action;
+  /** `multipart`: a file upload (multipart/form-data); every other write takes JSON. */
+  body?: 'json' | 'multipart';
 }
 
 export class RouteTable {
   readonly router = Router();
   readonly entries: RouteEntry[] = [];
+  /** Router-relative paths of the upload routes, for `createRequireJsonBody`. */
+  readonly multipartPaths: string[] = [];
 
   constructor(private readonly prefix: string) {}
 
@@ -44,6 +48,7 @@ export class RouteTable {
     if (options.access === 'signed-in') chain.push(requireSignedIn);
     if (options.permission) chain.push(requirePermission(options.permission));
     this.router[method](path, ...chain, ...handlers);
+    if (options.body === 'multipart') this.multipartPaths.push(path);
     this.entries.push({
       method,
       path: `${this.prefix}${path}`,

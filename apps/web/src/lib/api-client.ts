@@ -9,6 +9,8 @@ type QueryValue = string | number | boolean | null | undefined;
 
 export interface RequestOptions {
   body?: unknown;
+  /** A multipart body (a file upload); the browser writes its Content-Type and boundary. */
+  form?: FormData;
   query?: Record<string, QueryValue>;
   signal?: AbortSignal;
 }
@@ -70,14 +72,14 @@ function buildUrl(path: string, query?: Record<string, QueryValue>): string {
 
 async function send(method: Method, path: string, options: RequestOptions): Promise<Response> {
   const headers: Record<string, string> = { accept: 'application/json' };
-  if (options.body !== undefined) headers['content-type'] = 'application/json';
+  if (options.body !== undefined && !options.form) headers['content-type'] = 'application/json';
   if (unsafeMethods.has(method)) headers['x-csrf-token'] = await getCsrfToken();
   try {
     return await fetch(buildUrl(path, options.query), {
       method,
       headers,
       credentials: 'include',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.form ?? (options.body === undefined ? undefined : JSON.stringify(options.body)),
       signal: options.signal,
     });
   } catch (error) {
@@ -123,6 +125,9 @@ export const api = {
   get: <T>(path: string, options?: RequestOptions) => apiRequest<T>('GET', path, options),
   post: <T>(path: string, body?: unknown) => apiRequest<T>('POST', path, { body }),
   patch: <T>(path: string, body: unknown) => apiRequest<T>('PATCH', path, { body }),
+  put: <T>(path: string, body: unknown) => apiRequest<T>('PUT', path, { body }),
+  /** `POST` of a multipart form, for the upload routes. */
+  upload: <T>(path: string, form: FormData) => apiRequest<T>('POST', path, { form }),
   delete: <T = void>(path: string) => apiRequest<T>('DELETE', path),
 };
 

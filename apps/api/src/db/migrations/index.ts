@@ -15,6 +15,7 @@ import { invoices } from './0014-invoices.js';
 import { processorEvents } from './0015-processor-events.js';
 import { customerSearchWordsMigration } from './0018-customer-search-words.js';
 import { refunds } from './0021-refunds.js';
+import { uploads } from './0017-uploads.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -33,4 +34,5 @@ export const migrations: Migration[] = [
   processorEvents,
   customerSearchWordsMigration,
   refunds,
+  uploads,
 ];

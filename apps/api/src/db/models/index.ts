@@ -19,6 +19,7 @@ import { RollModel } from './roll.model.js';
 import { SessionModel } from './session.model.js';
 import { SiteModel } from './site.model.js';
 import { TurfReservationModel } from './turf-reservation.model.js';
+import { UploadModel } from './upload.model.js';
 import { UserModel } from './user.model.js';
 import { InvoiceModel } from './invoice.model.js';
 import { InvoiceLineModel } from './invoice-line.model.js';
@@ -56,6 +57,7 @@ export {
   SessionModel,
   SiteModel,
   TurfReservationModel,
+  UploadModel,
   UserModel,
 };
 
@@ -86,6 +88,7 @@ const allModels = [
   CreditNoteModel,
   InvoiceLinkModel,
   RefundModel,
+  UploadModel,
 ] as const;
 
 /**

@@ -30,6 +30,9 @@ export class JobAreaModel extends Model<
   declare engineVersion: string;
   declare areaSqFt: number;
   declare orderedSqFt: number;
+  /** The photo or sketch under the drawing (migration 0017), and its scale and placement. */
+  declare underlayUploadId: CreationOptional<string | null>;
+  declare underlay: CreationOptional<object | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -53,6 +56,8 @@ export class JobAreaModel extends Model<
         engineVersion: { type: DataTypes.STRING(40), allowNull: false },
         areaSqFt: { type: DataTypes.DOUBLE, allowNull: false },
         orderedSqFt: { type: DataTypes.DOUBLE, allowNull: false },
+        underlayUploadId: { type: DataTypes.UUID, allowNull: true },
+        underlay: { type: DataTypes.JSON, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -10,6 +10,7 @@ import { JobAreaModel } from '../../db/models/index.js';
 import type { Tx } from '../../db/sequelize.js';
 import { scoped } from '../../db/tenant-scope.js';
 import type { AreaPlannerInput } from './area-planning.js';
+import type { StoredUnderlay } from './area-underlay.js';
 
 /** An area row with its JSON columns read back as values. */
 export interface AreaRecord {
@@ -28,11 +29,18 @@ export interface AreaRecord {
   engineVersion: string;
   areaSqFt: number;
   orderedSqFt: number;
+  /** The upload shown under the drawing and its scale and placement (area-underlay.ts). */
+  underlayUploadId: string | null;
+  underlay: StoredUnderlay | null;
   createdAt: Date;
   updatedAt: Date;
 }
 
-export type AreaValues = Omit<AreaRecord, 'id' | 'jobId' | 'createdAt' | 'updatedAt'>;
+/** What a plan write sets; the underlay columns have writes of their own. */
+export type AreaValues = Omit<
+  AreaRecord,
+  'id' | 'jobId' | 'createdAt' | 'updatedAt' | 'underlayUploadId' | 'underlay'
+>;
 
 /** MariaDB hands JSON columns back as text; every value was validated before it was written. */
 const fromJson = (value: unknown): unknown =>
@@ -55,6 +63,8 @@ function toRecord(row: JobAreaModel['_attributes']): AreaRecord {
     engineVersion: row.engineVersion,
     areaSqFt: row.areaSqFt,
     orderedSqFt: row.orderedSqFt,
+    underlayUploadId: row.underlayUploadId ?? null,
+    underlay: (fromJson(row.underlay) as StoredUnderlay | null) ?? null,
     createdAt: row.createdAt,
     updatedAt: row.updatedAt,
   };
@@ -101,4 +111,15 @@ export async function updateArea(
 
 export async function deleteArea(ctx: RequestContext, id: string, tx: Tx): Promise<void> {
   await scoped(ctx, JobAreaModel).destroy({ id }, tx);
+}
+
+/** Sets or clears the area's underlay (the upload it shows and its placement). */
+export async function updateAreaUnderlay(
+  ctx: RequestContext,
+  id: string,
+  underlayUploadId: string | null,
+  underlay: StoredUnderlay | null,
+  tx: Tx,
+): Promise<void> {
+  await scoped(ctx, JobAreaModel).update(id, { underlayUploadId, underlay }, tx);
 }

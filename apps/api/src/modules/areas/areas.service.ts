@@ -19,6 +19,9 @@ import {
   updateArea,
 } from './areas.repository.js';
 import type { AreaRecord, AreaValues } from './areas.repository.js';
+import { underlayViewOf } from './area-underlay.js';
+import { createAreaUnderlayService } from './area-underlay.service.js';
+import { removeStoredFiles } from '../uploads/uploads.service.js';
 
 export function toAreaView(record: AreaRecord): AreaView<LayoutPlan> {
   return {
@@ -36,6 +39,7 @@ export function toAreaView(record: AreaRecord): AreaView<LayoutPlan> {
     request: record.request,
     plan: record.plan,
     alternatives: record.alternatives,
+    underlay: underlayViewOf(record),
     createdAt: record.createdAt.toISOString(),
     updatedAt: record.updatedAt.toISOString(),
   };
@@ -51,6 +55,7 @@ function auditData(record: { name: string }, id: string, values: Partial<AreaVal
 
 export function createAreasService(deps: ServiceDeps) {
   const { sequelize, plannerPool } = deps;
+  const underlays = createAreaUnderlayService(deps);
 
   async function get(ctx: RequestContext, id: string): Promise<AreaView<LayoutPlan>> {
     const record = await findArea(ctx, id);
@@ -135,10 +140,12 @@ export function createAreasService(deps: ServiceDeps) {
   async function remove(ctx: RequestContext, id: string): Promise<void> {
     const current = await findArea(ctx, id);
     if (!current) throw notFound('Area');
-    await inTransaction(sequelize, async (tx) => {
+    const files = await inTransaction(sequelize, async (tx) => {
       await lockEditableJob(ctx, current.jobId, tx);
-      if (!(await findArea(ctx, id, tx))) throw notFound('Area');
+      const locked = await findArea(ctx, id, tx);
+      if (!locked) throw notFound('Area');
       await deleteArea(ctx, id, tx);
+      const underlayFiles = await underlays.dropUpload(ctx, locked.underlayUploadId, tx);
       await recordAuditEvent(
         ctx,
         {
@@ -149,7 +156,11 @@ export function createAreasService(deps: ServiceDeps) {
         },
         tx,
       );
+      return underlayFiles;
     });
+    await removeStoredFiles(deps.storage, files, (error) =>
+      deps.logger.warn({ err: error }, 'a stored file could not be removed'),
+    );
   }
 
   return { get, listForJob, create, update, remove };

@@ -1,10 +1,14 @@
 import { useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { useUnits } from '../../lib/units';
 import { AreaEditor } from '../../features/area-editor/components/area-editor';
 import { useAreaEditor } from '../../features/area-editor/hooks/use-area-editor';
+import { useUnderlay } from '../../features/area-editor/hooks/use-underlay';
+import type { UnderlayControls } from '../../features/area-editor/hooks/use-underlay';
 import { drawingProblems } from '../../features/area-editor/model/measure';
 import { fromDrawingFields, toDrawingFields } from '../../features/area-editor/model/to-request';
 import { problemMessage } from '../../features/area-editor/model/words';
+import { areaKeys } from '../../features/areas/api/area-keys';
 import type { Area } from '../../features/areas/api/area-types';
 import { useTurfProducts } from '../../features/areas/api/get-turf-products';
 import { AreaForm } from '../../features/areas/components/area-form';
@@ -44,7 +48,11 @@ export function AreaEditorPage({
           Start from a shape or click the corners, then type each side’s length as you measured it.
           North is up.
         </p>
-        <AreaEditor state={state} dispatch={dispatch} />
+        {area ? (
+          <SavedAreaEditor area={area} state={state} dispatch={dispatch} />
+        ) : (
+          <AreaEditor state={state} dispatch={dispatch} underlay={null} />
+        )}
       </section>
       <section aria-labelledby="area-details-heading" className="flex flex-col gap-3">
         <h2 id="area-details-heading" className="text-xl font-bold">
@@ -64,4 +72,16 @@ export function AreaEditorPage({
       </section>
     </div>
   );
+}
+
+/** A saved area's editor also holds its photo or sketch (the upload needs the area's id). */
+function SavedAreaEditor({
+  area,
+  ...editor
+}: { area: Area } & Pick<Parameters<typeof AreaEditor>[0], 'state' | 'dispatch'>) {
+  const queryClient = useQueryClient();
+  const underlay: UnderlayControls = useUnderlay(area.id, area.underlay, () => {
+    void queryClient.invalidateQueries({ queryKey: areaKeys.detail(area.id) });
+  });
+  return <AreaEditor {...editor} underlay={underlay} />;
 }

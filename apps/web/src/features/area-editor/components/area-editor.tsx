@@ -12,6 +12,8 @@ import { LinesPanel } from './lines-panel';
 import { MeasureSummary, TagLegend } from './measure-summary';
 import { PointsTable } from './points-table';
 import { Shortcuts } from './shortcuts';
+import { UnderlayPanel } from './underlay-panel';
+import type { UnderlayControls } from '../hooks/use-underlay';
 
 /** Typing in a box keeps the browser's own undo; everywhere else Ctrl+Z undoes the drawing. */
 function isTextBox(target: EventTarget): boolean {
@@ -29,9 +31,12 @@ function isTextBox(target: EventTarget): boolean {
 export function AreaEditor({
   state,
   dispatch: send,
+  underlay,
 }: {
   state: EditorState;
   dispatch: Dispatch<EditorAction>;
+  /** The photo under the drawing; null for an area not saved yet, absent for no panel. */
+  underlay?: UnderlayControls | null;
 }) {
   const units = useUnits();
   const summaryId = useId();
@@ -44,6 +49,7 @@ export function AreaEditor({
       setFitSignal((n) => n + 1);
   };
   const problems = drawingProblems(state.doc);
+  const outline = state.doc.outer.points;
   const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
     if (!(event.ctrlKey || event.metaKey) || isTextBox(event.target)) return;
     const key = event.key.toLowerCase();
@@ -62,6 +68,8 @@ export function AreaEditor({
             dispatch={dispatch}
             fitSignal={fitSignal}
             describedBy={`${summaryId} ${shortcutsId}`}
+            underlay={underlay?.drawing(outline) ?? null}
+            onPick={underlay?.picking ? (point) => underlay.pick(point, outline) : null}
           />
           <TagLegend dispatch={dispatch} />
           <MeasureSummary state={state} id={summaryId} />
@@ -90,6 +98,7 @@ export function AreaEditor({
         <div className="flex min-w-0 flex-col gap-4">
           <LinesPanel state={state} dispatch={dispatch} />
           <AddSideForm state={state} dispatch={dispatch} />
+          {underlay !== undefined ? <UnderlayPanel controls={underlay} /> : null}
           <Shortcuts id={shortcutsId} />
         </div>
       </div>

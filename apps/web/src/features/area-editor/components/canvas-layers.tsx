@@ -61,12 +61,21 @@ export function GridLayer({ view, height, step }: { view: View; height: number; 
 }
 
 /** The turf: the outline filled, holes cut out (even-odd). */
-export function TurfLayer({ doc }: { doc: EditorDoc }) {
+/** `faint` when a photo is under it, so the photo shows through the turf. */
+export function TurfLayer({ doc, faint = false }: { doc: EditorDoc; faint?: boolean }) {
   const d = [doc.outer, ...doc.holes]
     .filter((ring) => ring.points.length >= 3)
     .map((ring) => ringPath(ring.points))
     .join('');
-  return <path d={d} fill="#c9dcca" fillOpacity={0.75} fillRule="evenodd" aria-hidden="true" />;
+  return (
+    <path
+      d={d}
+      fill="#c9dcca"
+      fillOpacity={faint ? 0.3 : 0.75}
+      fillRule="evenodd"
+      aria-hidden="true"
+    />
+  );
 }
 
 function RingSides({ ring, unit, label }: { ring: EditorRing; unit: number; label: boolean }) {

@@ -12,7 +12,9 @@ import type { EditorAction } from '../model/actions';
 import { lineOf } from '../model/lines';
 import type { EditorState, LineRef, Pt } from '../model/types';
 import { fitView, gridStepFor, panView, zoomView, type View } from '../model/view';
+import type { UnderlayDrawing } from '../model/underlay';
 import { GridLayer, HandlesLayer, OutlineLayers, TurfLayer, svgY } from './canvas-layers';
+import { UnderlayImage, UnderlayMarks } from './underlay-layer';
 
 /** Height ÷ width of the drawing; the CSS aspect ratio matches so clicks map exactly. */
 const ASPECT = 0.7;
@@ -38,12 +40,18 @@ export function EditorCanvas({
   dispatch,
   fitSignal,
   describedBy,
+  underlay = null,
+  onPick = null,
 }: {
   state: EditorState;
   dispatch: Dispatch<EditorAction>;
   /** Changes when the drawing should be fitted to the view again (a template, a load). */
   fitSignal: number;
   describedBy: string;
+  /** The photo or sketch drawn under the grid. */
+  underlay?: UnderlayDrawing | null;
+  /** While picking scale points, a click (or Enter at the cross) picks instead of drawing. */
+  onPick?: ((point: Pt) => void) | null;
 }) {
   const units = useUnits();
   const svgRef = useRef<SVGSVGElement>(null);
@@ -109,6 +117,7 @@ export function EditorCanvas({
       case 'Enter':
       case ' ':
         handled();
+        if (onPick) return onPick([view.cx, view.cy]);
         dispatch({ type: 'addPoint', point: [view.cx, view.cy], toleranceFt: SNAP_PX * ftPerPx() });
         return;
       case '[':
@@ -174,7 +183,11 @@ export function EditorCanvas({
         ref={svgRef}
         role="application"
         aria-roledescription="area drawing"
-        aria-label={`Area drawing, ${activePoints} points on the line being edited`}
+        aria-label={
+          onPick
+            ? 'Area drawing, picking a point on the photo: click it, or move the cross with Alt+arrows and press Enter'
+            : `Area drawing, ${activePoints} points on the line being edited`
+        }
         aria-describedby={describedBy}
         tabIndex={0}
         viewBox={`${view.cx - view.widthFt / 2} ${svgY(view.cy + height / 2)} ${view.widthFt} ${height}`}
@@ -205,6 +218,7 @@ export function EditorCanvas({
         }}
         onPointerUp={(event) => {
           if (press?.kind === 'handle') dispatch({ type: 'dragEnd' });
+          else if (press && !press.moved && onPick) onPick(yardAt(event));
           else if (press && !press.moved)
             dispatch({ type: 'addPoint', point: yardAt(event), toleranceFt: SNAP_PX * ftPerPx() });
           setPress(null);
@@ -214,9 +228,11 @@ export function EditorCanvas({
           setPress(null);
         }}
       >
+        {underlay ? <UnderlayImage drawing={underlay} /> : null}
         <GridLayer view={view} height={height} step={gridStepFor(view, state.snapping.gridFt)} />
-        <TurfLayer doc={state.doc} />
+        <TurfLayer doc={state.doc} faint={underlay !== null} />
         <OutlineLayers doc={state.doc} unit={unit} />
+        {underlay ? <UnderlayMarks drawing={underlay} unit={unit} /> : null}
         <HandlesLayer
           doc={state.doc}
           active={state.active}

@@ -70,6 +70,7 @@ export function sampleArea(): Area {
     request: lYardRequest,
     plan: { ...chosen.plan, engineVersion: 'test' },
     alternatives: [chosen, other],
+    underlay: null,
     createdAt: '2026-12-01T10:00:00.000Z',
     updatedAt: '2026-12-01T10:00:00.000Z',
   };
