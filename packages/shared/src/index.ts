@@ -18,3 +18,4 @@ export * from './stock.js';
 export * from './locate.js';
 export * from './estimates.js';
 export * from './estimate-sending.js';
+export * from './access-matrix.js';
