@@ -4,7 +4,7 @@
 // data table, which must be equal; then the allowed cells, which must get past the access check.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { expectedAnswer, matrixColumns, roles } from '@seamwright/shared';
-import type { ExpectedAnswer, MatrixColumn } from '@seamwright/shared';
+import type { ExpectedAnswer, MatrixColumn, MatrixRoute } from '@seamwright/shared';
 import type { RouteEntry } from '@seamwright/api';
 import { testApp } from '../../fixtures/app.js';
 import { columnClient, createGuardWorld, creators } from './guard-world.js';
@@ -64,7 +64,7 @@ describe('access matrix', () => {
   });
 
   it('derives the expected answers from the permission table', () => {
-    const route = (permission: RouteEntry['permission'], path = '/api/x/:id'): RouteEntry => ({
+    const route = (permission: MatrixRoute['permission'], path = '/api/x/:id'): MatrixRoute => ({
       method: 'get',
       path,
       access: 'tenant',
@@ -75,7 +75,7 @@ describe('access matrix', () => {
     expect(expectedAnswer(route('members.read'), 'other-company')).toBe('not-found');
     expect(expectedAnswer(route('customers.read', '/api/x'), 'other-company')).toBe('own-company');
     expect(expectedAnswer(route(null), 'crew_lead')).toBe('allowed');
-    const open: RouteEntry = {
+    const open: MatrixRoute = {
       method: 'get',
       path: '/api/p/:token',
       access: 'public',
