@@ -125,7 +125,7 @@ const op: fc.Arbitrary<Op> = fc.oneof(
 
 /** Applies one or two mutations; `fields` are the schema's own top-level names. */
 export function mutate(base: Json, ops: Op[], fields: string[]): Json {
-  let value = clone(base ?? {}) ?? {};
+  let value: Json = clone(base ?? {}) ?? {};
   for (const o of ops) {
     const paths = pathsOf(value);
     if (o.kind === 'root') value = clone(o.value);

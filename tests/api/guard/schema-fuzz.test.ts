@@ -6,7 +6,6 @@
 // list routes and the path ids of write routes are fuzzed too. SW_FUZZ_RUNS (default 200) sets
 // the cases per route; a nightly run can use 5000.
 import fc from 'fast-check';
-import type { z } from 'zod';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RouteEntry } from '@seamwright/api';
 import { testAppWith } from '../../fixtures/app.js';
@@ -19,6 +18,7 @@ import { asSent, badValue, mutate, mutations } from './mutations.js';
 import { fillPath, paramKinds, routeCases } from './route-cases.js';
 import { tableChecksums } from './table-snapshot.js';
 import { topLevelKeys, validValues } from './zod-arbitrary.js';
+import type { Schema } from './zod-arbitrary.js';
 
 const runs = Number(process.env.SW_FUZZ_RUNS ?? 200);
 const huge = '1000000000';
@@ -56,7 +56,7 @@ function expectProblem(res: FetchAnswer, where: string) {
 }
 
 /** A 400 naming exactly the fields `schema` names for `sent`. */
-function expectFieldErrors(res: FetchAnswer, schema: z.ZodType, sent: unknown, where: string) {
+function expectFieldErrors(res: FetchAnswer, schema: Schema, sent: unknown, where: string) {
   if (res.bytes > bodyLimit) {
     expect({ status: res.status, code: res.body.code }, where).toEqual({
       status: 413,

@@ -4,22 +4,25 @@
 // can still fail its schema; `validValues` falls back to a known-good seed then.
 // (zod-fast-check, the npm package, targets zod 3; these schemas are zod 4.)
 import fc from 'fast-check';
-import type { z } from 'zod';
+import type { RouteEntry } from '@seamwright/api';
+
+/** A zod schema as the API declares it (the tests package does not depend on zod itself). */
+export type Schema = NonNullable<NonNullable<RouteEntry['inputs']>['body']>;
 
 /** The parts of zod 4's internal definition the walker reads. */
 interface Def {
   type: string;
   checks?: { _zod: { def: CheckDef } }[];
   format?: string;
-  shape?: Record<string, z.ZodType>;
-  innerType?: z.ZodType;
-  in?: z.ZodType;
-  element?: z.ZodType;
-  valueType?: z.ZodType;
-  options?: z.ZodType[];
+  shape?: Record<string, Schema>;
+  innerType?: Schema;
+  in?: Schema;
+  element?: Schema;
+  valueType?: Schema;
+  options?: Schema[];
   entries?: Record<string, string | number>;
   values?: unknown[];
-  getter?: () => z.ZodType;
+  getter?: () => Schema;
   pattern?: RegExp;
 }
 
@@ -33,9 +36,9 @@ interface CheckDef {
   pattern?: RegExp;
 }
 
-export const defOf = (schema: z.ZodType): Def =>
+export const defOf = (schema: Schema): Def =>
   (schema as unknown as { _zod: { def: Def } })._zod.def;
-const isOptional = (schema: z.ZodType) =>
+const isOptional = (schema: Schema) =>
   (schema as unknown as { _zod: { optin?: string } })._zod.optin === 'optional';
 
 function checks(def: Def): CheckDef[] {
@@ -81,10 +84,10 @@ function numberArbitrary(def: Def): fc.Arbitrary<number> {
 }
 
 /** Values shaped like `schema` (most of them valid). */
-export function arbitraryFor(schema: z.ZodType, depth = 0): fc.Arbitrary<unknown> {
+export function arbitraryFor(schema: Schema, depth = 0): fc.Arbitrary<unknown> {
   const def = defOf(schema);
   if (depth > 8) return fc.constant(undefined);
-  const inner = (s: z.ZodType) => arbitraryFor(s, depth + 1);
+  const inner = (s: Schema) => arbitraryFor(s, depth + 1);
   switch (def.type) {
     case 'object': {
       const shape = def.shape ?? {};
@@ -133,7 +136,7 @@ export function arbitraryFor(schema: z.ZodType, depth = 0): fc.Arbitrary<unknown
 }
 
 /** The top-level field names of an object schema (through optional, pipe and the like). */
-export function topLevelKeys(schema: z.ZodType): string[] {
+export function topLevelKeys(schema: Schema): string[] {
   const def = defOf(schema);
   if (def.type === 'object') return Object.keys(def.shape ?? {});
   const next = def.innerType ?? def.in;
@@ -143,6 +146,6 @@ export function topLevelKeys(schema: z.ZodType): string[] {
 }
 
 /** Generated values that pass `schema`, else `seed` (refinements the walker cannot see). */
-export function validValues(schema: z.ZodType, seed: unknown): fc.Arbitrary<unknown> {
+export function validValues(schema: Schema, seed: unknown): fc.Arbitrary<unknown> {
   return arbitraryFor(schema).map((v) => (schema.safeParse(v).success ? v : seed));
 }
