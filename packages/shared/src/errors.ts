@@ -27,6 +27,8 @@ export const ErrorCode = {
   RequestTimeout: 'REQUEST_TIMEOUT',
   /** The server is busy (e.g. the layout planner's queue is full); try again after Retry-After. */
   ServiceBusy: 'SERVICE_BUSY',
+  /** The database cannot be reached; nothing was changed. Try again after Retry-After. */
+  DatabaseUnavailable: 'DATABASE_UNAVAILABLE',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

@@ -23,6 +23,7 @@ export const statusByCode: Record<ErrorCode, number> = {
   HEADERS_TOO_LARGE: 431,
   REQUEST_TIMEOUT: 408,
   SERVICE_BUSY: 503,
+  DATABASE_UNAVAILABLE: 503,
   INTERNAL: 500,
 };
 
@@ -45,6 +46,7 @@ const titles: Record<ErrorCode, string> = {
   HEADERS_TOO_LARGE: 'The request headers are too large',
   REQUEST_TIMEOUT: 'The request took too long',
   SERVICE_BUSY: 'The server is busy; try again shortly',
+  DATABASE_UNAVAILABLE: 'The database is unavailable; try again shortly',
   INTERNAL: 'Something went wrong on our side',
 };
 
