@@ -47,6 +47,18 @@ export const instances = {
     /** `pnpm bench:api`: the API under test and the bare-Express yardsticks beside it. */
     benchApiPort: 5178 + offset,
     benchBaselinePort: 5179 + offset,
+    /** tests/api/guard/two-processes.test.ts: two API processes on the test database. */
+    scaleOutApiPorts: [5174 + offset, 5175 + offset],
+    /**
+     * A scratch MariaDB of its own (.data/fault) that tests/api/guard/database-faults.test.ts
+     * stops and kills under a running API, so the other suites' database is never disturbed.
+     */
+    faultDb: {
+      port: 3309 + offset,
+      database: 'seamwright_fault',
+      user: 'seamwright',
+      password: 'seamwright-local',
+    },
   },
 } as const;
 

@@ -15,7 +15,7 @@ import { tokenRoutePatterns } from './http/log-redaction.js';
 import { createHttpLogger, createLogger } from './http/logging.js';
 import { RouteTable } from './http/route-table.js';
 import type { RouteEntry } from './http/route-table.js';
-import { createSecurityHeaders } from './http/security.js';
+import { apiNoStore, createSecurityHeaders } from './http/security.js';
 import { createSessionMiddleware, createSessionStore } from './http/session.js';
 import type { SessionStore } from './http/session.js';
 import { serveWebApp } from './http/web-app.js';
@@ -84,6 +84,7 @@ export function createApp(deps: AppDeps): Express {
 
   app.use(
     '/api',
+    apiNoStore,
     express.json({ limit: '1mb' }),
     createRequireJsonBody(routes.multipartPaths),
     createSessionMiddleware(env, store),

@@ -29,6 +29,8 @@ export const ErrorCode = {
   ServiceBusy: 'SERVICE_BUSY',
   /** The payment processor could not be reached or answered with an error; nothing was recorded. */
   ProcessorUnavailable: 'PROCESSOR_UNAVAILABLE',
+  /** The database cannot be reached; nothing was changed. Try again after Retry-After. */
+  DatabaseUnavailable: 'DATABASE_UNAVAILABLE',
   Internal: 'INTERNAL',
 } as const;
 export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];

@@ -22,3 +22,4 @@ export * from './invoices.js';
 export * from './processor.js';
 export * from './refunds.js';
 export * from './underlay.js';
+export * from './access-matrix.js';

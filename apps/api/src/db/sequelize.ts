@@ -16,8 +16,11 @@ export function createSequelize(db: DbOptions): Sequelize {
     logging: db.logging ? console.log : false,
     // Store and read every DATETIME as UTC.
     timezone: '+00:00',
-    dialectOptions: { connectTimeout: 5000 },
-    pool: { max: 10, min: 0, idle: 10_000, acquire: 10_000 },
+    // A database that is down or unreachable must fail a request fast (503 DATABASE_UNAVAILABLE
+    // within 2 s, http/database-errors.ts), not hold it: a refused connection fails at once, one
+    // that hangs after 1.5 s, and a request waiting for a free pooled connection after 2 s.
+    dialectOptions: { connectTimeout: 1500 },
+    pool: { max: 10, min: 0, idle: 10_000, acquire: 2000 },
     define: { underscored: true },
   });
   initModels(sequelize);

@@ -2,6 +2,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors.js';
 import { clientErrorFrom } from './client-errors.js';
+import { databaseUnavailableFrom } from './database-errors.js';
 import { sendProblem } from './problem.js';
 
 /**
@@ -11,6 +12,11 @@ import { sendProblem } from './problem.js';
 export const errorHandler: ErrorRequestHandler = (error: unknown, req, res, _next) => {
   const requestId = typeof req.id === 'string' ? req.id : undefined;
   let appError = error instanceof AppError ? error : clientErrorFrom(error);
+  if (!appError) {
+    appError = databaseUnavailableFrom(error);
+    // An outage is logged once per request without a stack: it is not a bug in this code.
+    if (appError) req.log.warn({ requestId, reason: String(error) }, 'database unavailable');
+  }
   if (!appError) {
     req.log.error({ err: error, requestId }, 'unhandled error');
     appError = new AppError(

@@ -24,6 +24,7 @@ export const statusByCode: Record<ErrorCode, number> = {
   REQUEST_TIMEOUT: 408,
   SERVICE_BUSY: 503,
   PROCESSOR_UNAVAILABLE: 503,
+  DATABASE_UNAVAILABLE: 503,
   INTERNAL: 500,
 };
 
@@ -47,6 +48,7 @@ const titles: Record<ErrorCode, string> = {
   REQUEST_TIMEOUT: 'The request took too long',
   SERVICE_BUSY: 'The server is busy; try again shortly',
   PROCESSOR_UNAVAILABLE: 'The payment processor cannot be reached',
+  DATABASE_UNAVAILABLE: 'The database is unavailable; try again shortly',
   INTERNAL: 'Something went wrong on our side',
 };
 

@@ -4,6 +4,8 @@
 import { Router } from 'express';
 import type { RequestHandler } from 'express';
 import type { Action } from '@seamwright/shared';
+import { routeInputs } from './route-inputs.js';
+import type { RouteInputs } from './route-inputs.js';
 import { requirePermission, requireSignedIn, requireTenant } from './tenant-context.js';
 
 export type HttpMethod = 'get' | 'post' | 'patch' | 'put' | 'delete';
@@ -20,6 +22,8 @@ export interface RouteEntry {
   path: string;
   access: Access;
   permission: Action | null;
+  /** The schemas its handler parses input with (route-inputs.ts), or null when not declared. */
+  inputs: RouteInputs | null;
 }
 
 export interface RouteOptions {
@@ -49,11 +53,13 @@ export class RouteTable {
     if (options.permission) chain.push(requirePermission(options.permission));
     this.router[method](path, ...chain, ...handlers);
     if (options.body === 'multipart') this.multipartPaths.push(path);
+    const fullPath = `${this.prefix}${path}`;
     this.entries.push({
       method,
-      path: `${this.prefix}${path}`,
+      path: fullPath,
       access: options.access,
       permission: options.permission ?? null,
+      inputs: routeInputs[`${method} ${fullPath}`] ?? null,
     });
   }
 }

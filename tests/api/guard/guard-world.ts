@@ -1,0 +1,142 @@
+// Two companies set up once for the guard suites: company A with a person in every role and one
+// row of every kind the routes name by id, and company B's owner (the "other company").
+import { randomUUID } from 'node:crypto';
+import type { Role } from '@seamwright/shared';
+import type { App } from '../../fixtures/app.js';
+import type { Client } from '../../fixtures/client.js';
+import { areaBody, createArea } from '../../fixtures/areas.js';
+import {
+  addMember,
+  createCustomer,
+  createJob,
+  createSite,
+  signUpCompany,
+  signUpTeam,
+  uniqueEmail,
+} from '../../fixtures/factories.js';
+import type { SignedIn } from '../../fixtures/factories.js';
+import { landscapeTurfId } from '../../fixtures/stock.js';
+
+/** The kinds of rows a path parameter can name. A new kind needs a line in `creators`. */
+export type RowKind =
+  | 'customer'
+  | 'site'
+  | 'job'
+  | 'area'
+  | 'estimate'
+  | 'roll'
+  | 'priceItem'
+  | 'member'
+  | 'invitation'
+  | 'locateTicket';
+
+export interface GuardWorld {
+  app: App;
+  /** Company A's people by role. */
+  people: Record<Role, SignedIn>;
+  /** Company B's owner. */
+  other: SignedIn;
+  companyId: string;
+  turfProductId: string;
+  /** One row of company A of every kind. */
+  ids: Record<RowKind, string>;
+}
+
+const dataOf = (body: unknown) => (body as { data: { id: string } }).data;
+
+/** Makes a new row of `kind` in company A (for DELETE cells, which use up their row). */
+export const creators: Record<RowKind, (w: GuardWorld) => Promise<string>> = {
+  customer: async (w) => (await createCustomer(w.people.owner.client)).id,
+  site: async (w) => (await createSite(w.people.owner.client, w.ids.customer)).id,
+  job: async (w) => (await createJob(w.people.owner.client, w.ids.customer, w.ids.site)).id,
+  area: async (w) => (await createArea(w.people.owner.client, w.ids.job, areaBody())).id,
+  estimate: async (w) =>
+    dataOf((await w.people.owner.client.post(`/api/jobs/${w.ids.job}/estimates`, {})).body).id,
+  roll: async (w) =>
+    dataOf(
+      (
+        await w.people.owner.client.post('/api/rolls', {
+          turfProductId: w.turfProductId,
+          dyeLot: 'GUARD-1',
+          widthFt: 15,
+          lengthFt: 60,
+        })
+      ).body,
+    ).id,
+  priceItem: async (w) =>
+    dataOf(
+      (
+        await w.people.owner.client.post('/api/price-book', {
+          kind: 'material',
+          key: `guard-${randomUUID().slice(0, 8)}`,
+          name: 'Guard material',
+          unit: 'bag',
+          packSize: 50,
+          priceMillicents: 100_000,
+        })
+      ).body,
+    ).id,
+  member: async (w) => {
+    const spare = await addMember(w.app, w.people.owner.client, 'bookkeeper');
+    const res = await w.people.owner.client.get('/api/members?pageSize=100');
+    const rows = (res.body as { data: { id: string; userId: string }[] }).data;
+    return rows.find((m) => m.userId === spare.me.user.id)!.id;
+  },
+  invitation: async (w) =>
+    dataOf(
+      (
+        await w.people.owner.client.post('/api/invitations', {
+          email: uniqueEmail('guard-invite'),
+          role: 'office',
+        })
+      ).body,
+    ).id,
+  locateTicket: async (w) =>
+    dataOf(
+      (
+        await w.people.owner.client.post(`/api/jobs/${w.ids.job}/locate-tickets`, {
+          number: `GUARD-${randomUUID().slice(0, 6)}`,
+          calledAt: new Date(Date.now() - 60_000).toISOString(),
+        })
+      ).body,
+    ).id,
+};
+
+/** Builds the world: about 30 requests, one area plan. */
+export async function createGuardWorld(app: App): Promise<GuardWorld> {
+  const team = await signUpTeam(app);
+  const other = await signUpCompany(app, 'Guard Other Company');
+  const w: GuardWorld = {
+    app,
+    people: {
+      owner: team.owner,
+      office: team.office,
+      bookkeeper: team.bookkeeper,
+      crew_lead: team.crew,
+    },
+    other,
+    companyId: team.owner.me.company.id,
+    turfProductId: await landscapeTurfId(team.owner.client),
+    ids: {} as Record<RowKind, string>,
+  };
+  // In dependency order: a site needs the customer, a job the site, and so on.
+  const order: RowKind[] = [
+    'customer',
+    'site',
+    'job',
+    'area',
+    'estimate',
+    'roll',
+    'priceItem',
+    'member',
+    'invitation',
+    'locateTicket',
+  ];
+  for (const kind of order) w.ids[kind] = await creators[kind](w);
+  return w;
+}
+
+/** Everyone the matrix walks, each with the client to send as. */
+export function columnClient(w: GuardWorld, column: Role | 'other-company'): Client {
+  return column === 'other-company' ? w.other.client : w.people[column].client;
+}
