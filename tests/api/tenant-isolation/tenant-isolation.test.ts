@@ -35,6 +35,7 @@ interface World {
   aRollId: string;
   aLocateTicketId: string;
   aEstimateId: string;
+  aInvoiceId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -590,6 +591,67 @@ const probes: Record<string, Probe> = {
       expect(a.body.data.markupBasisPoints).toBe(1234);
     },
   },
+  'get /api/invoices': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const all = await b.get('/api/invoices').expect(200);
+      expect(idsOf(all.body)).not.toContain(w.aInvoiceId);
+      const byCustomer = await b.get(`/api/invoices?customerId=${w.aCustomerId}`).expect(200);
+      expect(idsOf(byCustomer.body)).toEqual([]);
+    },
+  },
+  'post /api/invoices': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post('/api/invoices', {
+          jobId: w.aJobId,
+          kind: 'progress',
+          lines: [{ label: 'Hijack', quantity: 1, unitPriceCents: 100 }],
+        }),
+      ),
+  },
+  'get /api/invoices/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/invoices/${w.aInvoiceId}`)),
+  },
+  'get /api/invoices/:id/pdf': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/invoices/${w.aInvoiceId}/pdf`)),
+  },
+  'post /api/invoices/:id/send': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.post(`/api/invoices/${w.aInvoiceId}/send`, { to: 'thief@example.test' })),
+  },
+  'post /api/invoices/:id/payments': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/invoices/${w.aInvoiceId}/payments`, {
+          amountCents: 100,
+          method: 'cash',
+          receivedOn: '2026-01-05',
+        }),
+      ),
+  },
+  'post /api/invoices/:id/void': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/invoices/${w.aInvoiceId}/void`, { reason: 'Hijack' })),
+  },
+  'post /api/invoices/:id/credit-notes': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/invoices/${w.aInvoiceId}/credit-notes`, { amountCents: 1, reason: 'Hijack' }),
+      ),
+  },
+  // The e-mailed token is the credential and names one invoice of one company; the token
+  // tests (tests/api/invoices/send-and-public.test.ts) prove tampered ones are 404.
+  'get /api/public/invoices/:token': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
 };
 
 async function snapshotOfA(w: World) {
@@ -632,6 +694,12 @@ async function snapshotOfA(w: World) {
       'SELECT id, revoked_at FROM estimate_links WHERE company_id = ? ORDER BY id',
     ),
     estimateAnswers: await q('SELECT id FROM estimate_answers WHERE company_id = ? ORDER BY id'),
+    invoices: await q(
+      'SELECT id, number, status, paid_cents, credited_cents, voided_at, updated_at FROM invoices WHERE company_id = ? ORDER BY id',
+    ),
+    invoiceLinks: await q('SELECT id FROM invoice_links WHERE company_id = ? ORDER BY id'),
+    payments: await q('SELECT id FROM payments WHERE company_id = ? ORDER BY id'),
+    creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -683,6 +751,13 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
+    const aInvoice = await a.client
+      .post('/api/invoices', {
+        jobId: aJob.id,
+        kind: 'progress',
+        lines: [{ label: 'Alpha work', quantity: 1, unitPriceCents: 10_000 }],
+      })
+      .expect(201);
     world = {
       a,
       b,
@@ -700,6 +775,7 @@ describe('tenant isolation', () => {
       aRollId: (aRolls.body as { data: { id: string }[] }).data[0]!.id,
       aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
       aEstimateId: aEstimate.body.data.id,
+      aInvoiceId: aInvoice.body.data.id,
     };
   });
 
@@ -738,6 +814,7 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/areas/${world.aAreaId}`).expect(200);
     await world.a.client.get(`/api/areas/${world.aAreaId}/underlay`).expect(200);
     await world.a.client.get(`/api/estimates/${world.aEstimateId}`).expect(200);
+    await world.a.client.get(`/api/invoices/${world.aInvoiceId}`).expect(200);
   });
 
   it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {
