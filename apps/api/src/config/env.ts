@@ -76,6 +76,17 @@ const envSchema = z
     PLANNER_BUDGET_MS: z.coerce.number().int().min(50).max(600_000).default(5000),
     /** Planner tasks allowed to wait for a thread; past it the API answers 503. */
     PLANNER_MAX_QUEUE: z.coerce.number().int().min(0).max(10_000).optional(),
+    /** The payment-reminder worker in this API process (on unless switched off). */
+    REMINDER_WORKER: booleanish.default(true),
+    /** Pause between the worker's passes. */
+    REMINDER_INTERVAL_MS: z.coerce.number().int().min(50).max(86_400_000).default(60_000),
+    /** Invoices one worker transaction claims at most. */
+    REMINDER_BATCH_SIZE: z.coerce.number().int().min(1).max(500).default(20),
+    /**
+     * Tests only: the worker's clock, fixed at this instant (`2027-01-01` or a full ISO time),
+     * so a test can run reminders weeks ahead. Refused in production.
+     */
+    SW_REMINDER_CLOCK: z.iso.datetime({ offset: true }).or(z.iso.date()).optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV !== 'production') return;
@@ -97,6 +108,12 @@ const envSchema = z
     if (!value.APP_URL) missing('APP_URL', 'the origin state-changing requests must come from');
     if (value.TRUST_PROXY === undefined || value.TRUST_PROXY === '')
       missing('TRUST_PROXY', "set it explicitly, 'false' when no proxy is in front");
+    if (value.SW_REMINDER_CLOCK)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SW_REMINDER_CLOCK'],
+        message: 'SW_REMINDER_CLOCK is for tests and cannot be set in production',
+      });
     if (value.COOKIE_SECURE === false)
       ctx.addIssue({
         code: 'custom',
@@ -125,6 +142,8 @@ export interface Env {
   /** Origins a state-changing request may come from (APP_URL's, plus Vite's in development). */
   trustedOrigins: string[];
   planner: { threads: number; budgetMs: number; maxQueue: number };
+  /** The payment-reminder worker; `fixedClock` is a test's frozen "now". */
+  reminders: { worker: boolean; intervalMs: number; batchSize: number; fixedClock: Date | null };
 }
 
 /** Allowed requests per window, per IP and per account (e-mail, token or user). */
@@ -248,5 +267,11 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
     cookieNames: cookieNamesFor(appUrl, cookieSecure),
     trustedOrigins: trustedOriginsFor(appUrl, e.NODE_ENV),
     planner: plannerConfig(e.PLANNER_THREADS, e.PLANNER_BUDGET_MS, e.PLANNER_MAX_QUEUE),
+    reminders: {
+      worker: e.REMINDER_WORKER,
+      intervalMs: e.REMINDER_INTERVAL_MS,
+      batchSize: e.REMINDER_BATCH_SIZE,
+      fixedClock: e.SW_REMINDER_CLOCK ? new Date(e.SW_REMINDER_CLOCK) : null,
+    },
   };
 }

@@ -26,7 +26,10 @@ const values = {
 describe('reminder templates', () => {
   it('swaps every known placeholder, each time it appears', () => {
     expect(
-      renderReminderTemplate('{customerName}, {amountDue} on {invoiceNumber} ({amountDue})', values),
+      renderReminderTemplate(
+        '{customerName}, {amountDue} on {invoiceNumber} ({amountDue})',
+        values,
+      ),
     ).toBe('Ada Quill, $1,250.00 on INV-0042 ($1,250.00)');
   });
 
@@ -40,9 +43,9 @@ describe('reminder templates', () => {
   });
 
   it('does not re-read a value that itself contains braces', () => {
-    expect(
-      renderReminderTemplate('{customerName}', { ...values, customerName: '{payLink}' }),
-    ).toBe('{payLink}');
+    expect(renderReminderTemplate('{customerName}', { ...values, customerName: '{payLink}' })).toBe(
+      '{payLink}',
+    );
   });
 
   it('names unknown placeholders once each, in order', () => {
@@ -51,7 +54,9 @@ describe('reminder templates', () => {
       'total',
     ]);
     expect(unknownPlaceholders('{{literal}} {}')).toEqual(['']);
-    expect(reminderTemplateProblem('Hi {custmerName}')).toMatch(/Unknown placeholder \{custmerName\}/);
+    expect(reminderTemplateProblem('Hi {custmerName}')).toMatch(
+      /Unknown placeholder \{custmerName\}/,
+    );
     expect(reminderTemplateProblem('Hi {customerName}')).toBeNull();
   });
 

@@ -25,6 +25,8 @@ import { InvoiceLineModel } from './invoice-line.model.js';
 import { PaymentModel } from './payment.model.js';
 import { CreditNoteModel } from './credit-note.model.js';
 import { InvoiceLinkModel } from './invoice-link.model.js';
+import { InvoiceReminderModel } from './invoice-reminder.model.js';
+import { ReminderSettingsModel } from './reminder-settings.model.js';
 import { guardTenantModels } from '../tenant-guard.js';
 // JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
 import tenantModelList from './tenant-models.json';
@@ -35,7 +37,9 @@ export {
   InvoiceLineModel,
   InvoiceLinkModel,
   InvoiceModel,
+  InvoiceReminderModel,
   PaymentModel,
+  ReminderSettingsModel,
   CompanyModel,
   CustomerModel,
   EstimateAnswerModel,
@@ -83,6 +87,8 @@ const allModels = [
   PaymentModel,
   CreditNoteModel,
   InvoiceLinkModel,
+  ReminderSettingsModel,
+  InvoiceReminderModel,
 ] as const;
 
 /**
