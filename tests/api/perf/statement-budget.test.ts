@@ -75,6 +75,12 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 10,
     urls: (ids) => [`/api/estimates/${ids.estimateId}/pdf`],
   },
+  '/api/settings/reminders': { budget: 2, urls: () => ['/api/settings/reminders'] },
+  // The invoice (another company's is a 404) and its reminder log, read in parallel.
+  '/api/invoices/:id/reminders': {
+    budget: 3,
+    urls: (ids) => [`/api/invoices/${ids.invoiceId}/reminders`],
+  },
 };
 
 interface Ids {
@@ -84,6 +90,7 @@ interface Ids {
   areaId: string;
   rollId: string;
   estimateId: string;
+  invoiceId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -120,7 +127,23 @@ describe('statement budget of signed-in requests', () => {
       .expect(201);
     const estimate = await owner.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
     const estimateId = (estimate.body as { data: { id: string } }).data.id;
-    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId, estimateId };
+    const invoice = await owner
+      .post('/api/invoices', {
+        jobId,
+        kind: 'progress',
+        lines: [{ label: 'Budget work', quantity: 1, unitPriceCents: 10_000 }],
+      })
+      .expect(201);
+    const invoiceId = (invoice.body as { data: { id: string } }).data.id;
+    ids = {
+      customerId: customer.id,
+      siteId: site.id,
+      jobId,
+      areaId: area.id,
+      rollId,
+      estimateId,
+      invoiceId,
+    };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -142,6 +165,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id/locate-tickets',
       '/api/jobs/:id/estimates',
       '/api/estimates/:id/pdf',
+      '/api/invoices/:id/reminders',
     ]);
   });
 

@@ -34,6 +34,7 @@ interface World {
   aRollId: string;
   aLocateTicketId: string;
   aEstimateId: string;
+  aInvoiceId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -560,6 +561,34 @@ const probes: Record<string, Probe> = {
   },
 };
 
+// Payment reminders (modules/reminders): A's settings, log and schedule stay A's.
+Object.assign(probes, {
+  'get /api/settings/reminders': {
+    kind: 'tenant',
+    run: async (b: Client) => {
+      const res = await b.get('/api/settings/reminders').expect(200);
+      expect(res.body.data.senderName).toBeNull();
+      expect(JSON.stringify(res.body)).not.toContain('Alpha Accounts');
+    },
+  },
+  'put /api/settings/reminders': {
+    kind: 'tenant',
+    run: async (b: Client) => {
+      await b
+        .put('/api/settings/reminders', { enabled: false, offsets: [1], senderName: 'Bravo' })
+        .expect(200);
+    },
+  },
+  'get /api/invoices/:id/reminders': {
+    kind: 'tenant',
+    run: (b: Client, w: World) => notFound(b.get(`/api/invoices/${w.aInvoiceId}/reminders`)),
+  },
+  'post /api/invoices/:id/reminders': {
+    kind: 'tenant',
+    run: (b: Client, w: World) => notFound(b.post(`/api/invoices/${w.aInvoiceId}/reminders`, {})),
+  },
+} satisfies Record<string, Probe>);
+
 async function snapshotOfA(w: World) {
   const { sequelize } = testApp();
   const company = w.a.me.company.id;
@@ -599,6 +628,13 @@ async function snapshotOfA(w: World) {
     estimateAnswers: await q('SELECT id FROM estimate_answers WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
+    ),
+    reminderSettings: await q(
+      'SELECT enabled, offsets, sender_name, templates, updated_at FROM reminder_settings WHERE company_id = ?',
+    ),
+    invoiceReminders: await q('SELECT id FROM invoice_reminders WHERE company_id = ? ORDER BY id'),
+    invoiceSchedule: await q(
+      'SELECT id, next_reminder_on FROM invoices WHERE company_id = ? ORDER BY id',
     ),
   };
 }
@@ -645,6 +681,21 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
+    const aInvoice = await a.client
+      .post('/api/invoices', {
+        jobId: aJob.id,
+        kind: 'progress',
+        lines: [{ label: 'Alpha work', quantity: 1, unitPriceCents: 10_000 }],
+      })
+      .expect(201);
+    await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
+    await a.client
+      .put('/api/settings/reminders', {
+        enabled: true,
+        offsets: [-3, 0, 7],
+        senderName: 'Alpha Accounts',
+      })
+      .expect(200);
     world = {
       a,
       b,
@@ -662,6 +713,7 @@ describe('tenant isolation', () => {
       aRollId: (aRolls.body as { data: { id: string }[] }).data[0]!.id,
       aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
       aEstimateId: aEstimate.body.data.id,
+      aInvoiceId: aInvoice.body.data.id,
     };
   });
 

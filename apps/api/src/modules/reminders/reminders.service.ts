@@ -1,6 +1,7 @@
 // The reminder routes' work: the settings (GET/PUT), an invoice's log, and "send a reminder now".
 import {
   localDateOf,
+  remindableInvoiceStatuses,
   reminderScheduleProblem,
   reminderTemplateKinds,
   reminderTemplateProblem,
@@ -18,7 +19,6 @@ import { describeFieldErrors } from '../../http/validate.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findOwnCompany } from '../company/company.repository.js';
 import { findInvoice, lockInvoice } from '../invoices/invoices.repository.js';
-import { remindableInvoiceStatuses } from '@seamwright/domain';
 import { deliverReminder } from './reminder-delivery.js';
 import { computeNextReminderOn, isRemindable, sentOnOf } from './reminder-hooks.js';
 import { effectiveReminderSettings, toReminderSettingsView } from './reminder-settings.js';
@@ -115,8 +115,13 @@ export function createRemindersService(deps: ServiceDeps) {
   }
 
   async function listLog(ctx: RequestContext, invoiceId: string): Promise<InvoiceReminderView[]> {
-    if (!(await findInvoice(ctx, invoiceId))) throw notFound('Invoice');
-    return (await listRemindersOfInvoice(ctx, invoiceId)).map(toLogView);
+    // In parallel: another company's invoice id finds no rows in either.
+    const [invoice, rows] = await Promise.all([
+      findInvoice(ctx, invoiceId),
+      listRemindersOfInvoice(ctx, invoiceId),
+    ]);
+    if (!invoice) throw notFound('Invoice');
+    return rows.map(toLogView);
   }
 
   /** A reminder sent by hand, logged with its message id; the schedule is left as it is. */
