@@ -95,6 +95,12 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
   // The invoice read whole (as above), then the company, customer, job and site for the
   // document (not tuned yet).
   '/api/invoices/:id/pdf': { budget: 12, urls: (ids) => [`/api/invoices/${ids.invoiceId}/pdf`] },
+  '/api/settings/reminders': { budget: 2, urls: () => ['/api/settings/reminders'] },
+  // The invoice (another company's is a 404) and its reminder log, read in parallel.
+  '/api/invoices/:id/reminders': {
+    budget: 3,
+    urls: (ids) => [`/api/invoices/${ids.invoiceId}/reminders`],
+  },
 };
 
 interface Ids {
@@ -186,6 +192,7 @@ describe('statement budget of signed-in requests', () => {
       '/api/invoices',
       '/api/invoices/:id',
       '/api/invoices/:id/pdf',
+      '/api/invoices/:id/reminders',
     ]);
   });
 

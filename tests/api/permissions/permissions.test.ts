@@ -243,4 +243,39 @@ describe('permissions per role', () => {
     );
     expect(rows.map((r) => [r.status, Number(r.paid_cents)])).toEqual([['partly_paid', 100]]);
   });
+
+  it('payment reminders: owners and bookkeepers manage them, office reads the log, crew leads nothing', async () => {
+    expect(permissionTable['reminders.manage']).toEqual(['owner', 'bookkeeper']);
+    const email = 'reminded@example.test';
+    const payer = await createCustomer(owner.client, { name: 'Reminded payer', email });
+    const site = await createSite(owner.client, payer.id);
+    const jobId = (await createJob(owner.client, payer.id, site.id)).id;
+    const made = await bookkeeper.client
+      .post('/api/invoices', {
+        jobId,
+        kind: 'progress',
+        lines: [{ label: 'Work', quantity: 1, unitPriceCents: 5_000 }],
+      })
+      .expect(201);
+    const invoiceId = (made.body as { data: { id: string } }).data.id;
+    await bookkeeper.client.post(`/api/invoices/${invoiceId}/send`, {}).expect(200);
+    const settings = { enabled: true, offsets: [-3, 0, 7, 14, 30] };
+    for (const who of [office, crew]) {
+      for (const res of [
+        await who.client.get('/api/settings/reminders'),
+        await who.client.put('/api/settings/reminders', settings),
+        await who.client.post(`/api/invoices/${invoiceId}/reminders`, {}),
+      ]) {
+        expect(res.status).toBe(403);
+        expect(res.body.code).toBe('FORBIDDEN');
+      }
+    }
+    expect((await crew.client.get(`/api/invoices/${invoiceId}/reminders`)).status).toBe(403);
+    await office.client.get(`/api/invoices/${invoiceId}/reminders`).expect(200);
+    for (const who of [owner, bookkeeper]) {
+      await who.client.get('/api/settings/reminders').expect(200);
+      await who.client.put('/api/settings/reminders', settings).expect(200);
+      await who.client.post(`/api/invoices/${invoiceId}/reminders`, {}).expect(201);
+    }
+  });
 });

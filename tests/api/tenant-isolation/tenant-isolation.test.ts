@@ -654,6 +654,34 @@ const probes: Record<string, Probe> = {
   },
 };
 
+// Payment reminders (modules/reminders): A's settings, log and schedule stay A's.
+Object.assign(probes, {
+  'get /api/settings/reminders': {
+    kind: 'tenant',
+    run: async (b: Client) => {
+      const res = await b.get('/api/settings/reminders').expect(200);
+      expect(res.body.data.senderName).toBeNull();
+      expect(JSON.stringify(res.body)).not.toContain('Alpha Accounts');
+    },
+  },
+  'put /api/settings/reminders': {
+    kind: 'tenant',
+    run: async (b: Client) => {
+      await b
+        .put('/api/settings/reminders', { enabled: false, offsets: [1], senderName: 'Bravo' })
+        .expect(200);
+    },
+  },
+  'get /api/invoices/:id/reminders': {
+    kind: 'tenant',
+    run: (b: Client, w: World) => notFound(b.get(`/api/invoices/${w.aInvoiceId}/reminders`)),
+  },
+  'post /api/invoices/:id/reminders': {
+    kind: 'tenant',
+    run: (b: Client, w: World) => notFound(b.post(`/api/invoices/${w.aInvoiceId}/reminders`, {})),
+  },
+} satisfies Record<string, Probe>);
+
 async function snapshotOfA(w: World) {
   const { sequelize } = testApp();
   const company = w.a.me.company.id;
@@ -702,6 +730,13 @@ async function snapshotOfA(w: World) {
     creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
+    ),
+    reminderSettings: await q(
+      'SELECT enabled, offsets, sender_name, templates, updated_at FROM reminder_settings WHERE company_id = ?',
+    ),
+    invoiceReminders: await q('SELECT id FROM invoice_reminders WHERE company_id = ? ORDER BY id'),
+    invoiceSchedule: await q(
+      'SELECT id, next_reminder_on FROM invoices WHERE company_id = ? ORDER BY id',
     ),
   };
 }
@@ -758,6 +793,14 @@ describe('tenant isolation', () => {
         lines: [{ label: 'Alpha work', quantity: 1, unitPriceCents: 10_000 }],
       })
       .expect(201);
+    await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
+    await a.client
+      .put('/api/settings/reminders', {
+        enabled: true,
+        offsets: [-3, 0, 7],
+        senderName: 'Alpha Accounts',
+      })
+      .expect(200);
     world = {
       a,
       b,
