@@ -4,3 +4,4 @@ export * from './calendar/index.js';
 export * from './cancellation/index.js';
 export * from './locate/index.js';
 export * from './estimates/index.js';
+export * from './scheduling/index.js';
