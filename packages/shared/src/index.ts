@@ -18,3 +18,6 @@ export * from './stock.js';
 export * from './locate.js';
 export * from './estimates.js';
 export * from './estimate-sending.js';
+export * from './crew-colours.js';
+export * from './crews.js';
+export * from './bookings.js';

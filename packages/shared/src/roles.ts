@@ -38,6 +38,10 @@ export const actions = [
   'estimates.read',
   'estimates.write',
   'estimates.send',
+  'crews.read',
+  'crews.manage',
+  'bookings.read',
+  'bookings.write',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -78,6 +82,12 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'estimates.write': ['owner', 'office'],
   // Sending to the customer, revoking links and recording a paper signature commit the company.
   'estimates.send': ['owner', 'office'],
+  // Crews carry no money: everyone sees who is on which crew.
+  'crews.read': everyone,
+  'crews.manage': ['owner', 'office'],
+  // Crew leads read only their own crews' bookings (the service filters), never money.
+  'bookings.read': ['owner', 'office', 'crew_lead'],
+  'bookings.write': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

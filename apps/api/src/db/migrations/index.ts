@@ -11,6 +11,7 @@ import { estimates } from './0010-estimates.js';
 import { estimateLinks } from './0011-estimate-links.js';
 import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
+import { crewsBookings } from './0016-crews-bookings.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -25,4 +26,5 @@ export const migrations: Migration[] = [
   estimateLinks,
   locateTickets,
   rollStock,
+  crewsBookings,
 ];
