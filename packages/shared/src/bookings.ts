@@ -1,6 +1,6 @@
 // Bookings of a crew on a job: an inclusive range of calendar days in the company's zone and
 // the phase of the work. The rules live in @seamwright/domain (scheduling); no money here.
-import { bookingPhaseLabels, bookingPhases, isCalendarDate } from '@seamwright/domain';
+import { bookingPhaseLabels, bookingPhases } from '@seamwright/domain';
 import type { BookingIssueCode, BookingPhase } from '@seamwright/domain';
 import { z } from 'zod';
 import { optionalText } from './text.js';
@@ -10,10 +10,8 @@ export type { BookingPhase };
 
 const uuid = (label: string) =>
   z.uuid(`${label} must be an id`).transform((value) => value.toLowerCase());
-const day = (label: string) =>
-  z
-    .string({ error: `${label} is required (YYYY-MM-DD)` })
-    .refine(isCalendarDate, `${label}: use a real date like 2026-03-14`);
+/** zod's ISO date checks the days of each month, leap years included. */
+const day = (label: string) => z.iso.date({ error: `${label}: use a real date like 2026-03-14` });
 const phase = z.enum(bookingPhases, {
   error: 'Phase is tear_out_base, turf_seams_infill or finishing',
 });

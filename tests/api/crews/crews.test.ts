@@ -2,6 +2,7 @@
 // Crews through the API: the contract routes, members (crew-lead accounts and named helpers),
 // the palette, who may manage them, and delete that archives a crew with bookings.
 import { beforeAll, describe, expect, it } from 'vitest';
+import { selectRows } from '@seamwright/api';
 import type { CrewView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import {
@@ -79,8 +80,9 @@ describe('crews', () => {
     expect(stranger.body.errors).toEqual([
       { path: 'members.0.userId', message: 'No such member in this company' },
     ]);
-    const { sequelize } = testApp();
-    const [rows] = await sequelize.query("SELECT id FROM crews WHERE name = 'Stranger crew'");
+    const rows = await selectRows(testApp().sequelize, 'SELECT id FROM crews WHERE name = ?', [
+      'Stranger crew',
+    ]);
     expect(rows).toEqual([]);
   });
 

@@ -2,7 +2,7 @@
 // transaction that holds the crew's row lock (then the job's), so two requests filling the
 // same crew-day cannot both pass. Booking an accepted job moves it to scheduled; deleting its
 // last booking leaves it scheduled (the lifecycle has no way back to accepted).
-import { bookingPhaseLabels, canTransition } from '@seamwright/domain';
+import { bookingPhaseLabels, canTransition, checkBookingRange } from '@seamwright/domain';
 import type { BookingIssue, BookingPhase } from '@seamwright/domain';
 import { crewColourHex } from '@seamwright/shared';
 import type {
@@ -38,6 +38,15 @@ const missing = (what: string, path: string) =>
   new AppError('NOT_FOUND', `${what} not found`, {
     errors: [{ path, message: `No such ${what.toLowerCase()} in this company` }],
   });
+
+/** A range that runs backwards or is too long is bad input (400), not a refusal. */
+function assertRange(range: { startDate: string; endDate: string }): void {
+  const issue = checkBookingRange(range);
+  if (issue)
+    throw new AppError('VALIDATION_FAILED', `${issue.path}: ${issue.message}`, {
+      errors: [{ path: issue.path, message: issue.message }],
+    });
+}
 
 const conflict = (path: string, message: string) =>
   new AppError('CONFLICT', message, { errors: [{ path, message }] });
@@ -138,6 +147,7 @@ export function createBookingsService(deps: ServiceDeps) {
   }
 
   async function create(ctx: RequestContext, input: CreateBookingData): Promise<BookingSaved> {
+    assertRange(input);
     const timeZone = await companyZone(ctx);
     return inTransaction(sequelize, async (tx) => {
       const [crew] = await lockCrews(ctx, [input.crewId], tx);
@@ -225,6 +235,7 @@ export function createBookingsService(deps: ServiceDeps) {
         phase: (input.phase ?? locked.phase) as BookingPhase,
         notes: input.notes === undefined ? locked.notes : input.notes,
       };
+      assertRange(next);
       const evaluation = await checkCandidate(
         ctx,
         { bookingId: id, crew, job, ...next },
