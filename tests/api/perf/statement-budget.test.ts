@@ -8,6 +8,7 @@ import type { Client } from '../../fixtures/client.js';
 import { addMember, createCustomer, createSite, signUpCompany } from '../../fixtures/factories.js';
 import { recordStatements } from '../../fixtures/statements.js';
 import { createArea, turfProducts } from '../../fixtures/areas.js';
+import { acceptedJob, createCrew } from '../../fixtures/bookings.js';
 
 /** The default for a signed-in read: the session with the membership, then the data. */
 const defaultReadBudget = 2;
@@ -75,6 +76,18 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 10,
     urls: (ids) => [`/api/estimates/${ids.estimateId}/pdf`],
   },
+  // The crews and every crew's people, read in parallel.
+  '/api/crews': { budget: 3, urls: () => ['/api/crews', '/api/crews?includeArchived=true'] },
+  '/api/crews/:id': { budget: 3, urls: (ids) => [`/api/crews/${ids.crewId}`] },
+  // The bookings with crew, job, customer and site in one join and the company's zone in
+  // parallel, then the jobs' tickets, reservations and areas in parallel for the warnings.
+  '/api/bookings': {
+    budget: 6,
+    urls: (ids) => [
+      '/api/bookings?from=2031-06-01&to=2031-06-30',
+      `/api/bookings?from=2031-06-01&to=2031-06-30&crewId=${ids.crewId}`,
+    ],
+  },
 };
 
 interface Ids {
@@ -84,6 +97,7 @@ interface Ids {
   areaId: string;
   rollId: string;
   estimateId: string;
+  crewId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -120,7 +134,26 @@ describe('statement budget of signed-in requests', () => {
       .expect(201);
     const estimate = await owner.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
     const estimateId = (estimate.body as { data: { id: string } }).data.id;
-    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId, estimateId };
+    const crewId = await createCrew(owner, { members: [{ name: 'Budget helper' }] });
+    const bookedJobId = await acceptedJob(owner, 'Budget booked job');
+    await owner
+      .post('/api/bookings', {
+        crewId,
+        jobId: bookedJobId,
+        startDate: '2031-06-02',
+        endDate: '2031-06-03',
+        phase: 'finishing',
+      })
+      .expect(201);
+    ids = {
+      customerId: customer.id,
+      siteId: site.id,
+      jobId,
+      areaId: area.id,
+      rollId,
+      estimateId,
+      crewId,
+    };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -142,6 +175,9 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id/locate-tickets',
       '/api/jobs/:id/estimates',
       '/api/estimates/:id/pdf',
+      '/api/crews',
+      '/api/crews/:id',
+      '/api/bookings',
     ]);
   });
 
