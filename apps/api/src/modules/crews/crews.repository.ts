@@ -23,7 +23,8 @@ export type CrewMemberRow = MemberAttributes & { user: { name: string } | null }
 
 /** MariaDB hands JSON columns back as text; we wrote the list ourselves. */
 function toCrew(row: CrewAttributes): CrewRow {
-  const days = typeof row.workingDays === 'string' ? JSON.parse(row.workingDays) : row.workingDays;
+  const days: unknown =
+    typeof row.workingDays === 'string' ? JSON.parse(row.workingDays) : row.workingDays;
   return { ...row, workingDays: (days as number[]).map(Number) };
 }
 
