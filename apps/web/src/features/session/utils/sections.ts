@@ -1,6 +1,7 @@
 import type { ComponentType } from 'react';
 import { can, type Action, type Role } from '@seamwright/shared';
 import {
+  CalendarIcon,
   CustomersIcon,
   JobsIcon,
   ProfileIcon,
@@ -25,7 +26,7 @@ export interface Section {
   phoneNames?: Partial<Record<Role, { label: string; Icon: Icon }>>;
 }
 
-/** Only sections that exist are listed; later work adds Calendar, Inventory, Invoices, Reports. */
+/** Only sections that exist are listed; later work adds Invoices and Reports. */
 const sections: Section[] = [
   {
     to: paths.today,
@@ -47,6 +48,15 @@ const sections: Section[] = [
     Icon: JobsIcon,
     needs: 'jobs.read',
     phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
+  // Crew leads see their own crews' bookings (no money); bookkeepers have no bookings access.
+  // Not on the phone bar yet: the crew lead's day (later work) is their phone view of it.
+  {
+    to: paths.calendar,
+    label: 'Calendar',
+    Icon: CalendarIcon,
+    needs: 'bookings.read',
+    phoneRoles: [],
   },
   // Shows no prices, so every role sees it; crew leads check cuts and seams with it on site.
   {
