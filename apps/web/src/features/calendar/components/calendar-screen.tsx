@@ -137,40 +137,43 @@ export function CalendarScreen() {
           />
         </div>
       ) : null}
-      <div className="rounded-lg border border-line bg-white p-3">
-        <Suspense fallback={<Loading label="Loading the calendar…" />}>
-          <CrewCalendarGrid
-            bookings={bookings.data ?? []}
-            canEdit={canEdit}
-            view={view}
-            date={date}
-            onRangeChange={(next, nextView, nextDate) => {
-              setRange((current) =>
-                current?.from === next.from && current.to === next.to ? current : next,
-              );
-              if (nextView !== view || nextDate !== date)
-                setParam({ view: nextView === 'month' ? '' : nextView, date: nextDate });
-            }}
-            onChangeDays={(booking, days, revert) => {
-              update.mutate(
-                { id: booking.id, version: booking.version, ...days },
-                {
-                  onSuccess: (result) =>
-                    afterSave(
-                      result,
-                      `${booking.job.title} moved to ${days.startDate}${days.endDate === days.startDate ? '' : ` to ${days.endDate}`}.`,
-                    ),
-                  onError: (error) => {
-                    revert();
-                    setSaved(null);
-                    setRefused(reasonOf(error));
+      {/* On a phone the grid keeps readable day columns and scrolls sideways. */}
+      <div className="overflow-x-auto rounded-lg border border-line bg-white p-3">
+        <div className="min-w-[40rem]">
+          <Suspense fallback={<Loading label="Loading the calendar…" />}>
+            <CrewCalendarGrid
+              bookings={bookings.data ?? []}
+              canEdit={canEdit}
+              view={view}
+              date={date}
+              onRangeChange={(next, nextView, nextDate) => {
+                setRange((current) =>
+                  current?.from === next.from && current.to === next.to ? current : next,
+                );
+                if (nextView !== view || nextDate !== date)
+                  setParam({ view: nextView === 'month' ? '' : nextView, date: nextDate });
+              }}
+              onChangeDays={(booking, days, revert) => {
+                update.mutate(
+                  { id: booking.id, version: booking.version, ...days },
+                  {
+                    onSuccess: (result) =>
+                      afterSave(
+                        result,
+                        `${booking.job.title} moved to ${days.startDate}${days.endDate === days.startDate ? '' : ` to ${days.endDate}`}.`,
+                      ),
+                    onError: (error) => {
+                      revert();
+                      setSaved(null);
+                      setRefused(reasonOf(error));
+                    },
                   },
-                },
-              );
-            }}
-            onSelectDays={(days) => setEditing({ booking: null, days })}
-          />
-        </Suspense>
+                );
+              }}
+              onSelectDays={(days) => setEditing({ booking: null, days })}
+            />
+          </Suspense>
+        </div>
       </div>
       <section aria-labelledby="bookings-in-view" className="flex flex-col gap-2">
         <h2 id="bookings-in-view" className="text-xl font-bold">
