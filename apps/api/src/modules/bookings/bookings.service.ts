@@ -124,7 +124,7 @@ async function scheduleJob(
   return null;
 }
 
-export function createBookingsService(deps: ServiceDeps) {
+export function createBookingsService(deps: Pick<ServiceDeps, 'sequelize'>) {
   const { sequelize } = deps;
 
   async function list(ctx: RequestContext, query: BookingListQuery): Promise<BookingView[]> {

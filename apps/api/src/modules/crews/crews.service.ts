@@ -71,7 +71,7 @@ async function checkMembers(ctx: RequestContext, members: CrewMemberInput[], tx:
   }
 }
 
-export function createCrewsService(deps: ServiceDeps) {
+export function createCrewsService(deps: Pick<ServiceDeps, 'sequelize'>) {
   const { sequelize } = deps;
 
   async function list(ctx: RequestContext, includeArchived: boolean): Promise<CrewView[]> {
