@@ -6,6 +6,8 @@ import { registerAreasRoutes } from './modules/areas/areas.routes.js';
 import { registerAuditRoutes } from './modules/audit/audit.routes.js';
 import { registerAuthRoutes } from './modules/auth/auth.routes.js';
 import { registerCompanyRoutes } from './modules/company/company.routes.js';
+import { registerBookingsRoutes } from './modules/bookings/bookings.routes.js';
+import { registerCrewsRoutes } from './modules/crews/crews.routes.js';
 import { registerCustomersRoutes } from './modules/customers/customers.routes.js';
 import { registerEstimatesRoutes } from './modules/estimates/estimates.routes.js';
 import { registerEstimatingSettingsRoutes } from './modules/estimating-settings/estimating-settings.routes.js';
@@ -46,4 +48,6 @@ export function registerApiRoutes(
   registerEstimatesRoutes(routes, deps);
   registerInvoicesRoutes(routes, deps);
   registerRemindersRoutes(routes, deps);
+  registerCrewsRoutes(routes, deps);
+  registerBookingsRoutes(routes, deps);
 }

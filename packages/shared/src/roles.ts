@@ -43,6 +43,10 @@ export const actions = [
   'payments.write',
   'payments.refund',
   'reminders.manage',
+  'crews.read',
+  'crews.manage',
+  'bookings.read',
+  'bookings.write',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -93,6 +97,12 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // Payment reminders speak to customers about money: the schedule, the wording and a reminder
   // sent by hand are the bookkeeper's and the owner's (the log follows invoices.read).
   'reminders.manage': ['owner', 'bookkeeper'],
+  // Crews carry no money: everyone sees who is on which crew.
+  'crews.read': everyone,
+  'crews.manage': ['owner', 'office'],
+  // Crew leads read only their own crews' bookings (the service filters), never money.
+  'bookings.read': ['owner', 'office', 'crew_lead'],
+  'bookings.write': ['owner', 'office'],
 };
 
 /** Whether `role` may perform `action`. */

@@ -9,6 +9,7 @@ import { addMember, createCustomer, createSite, signUpCompany } from '../../fixt
 import { recordStatements } from '../../fixtures/statements.js';
 import { createArea, turfProducts } from '../../fixtures/areas.js';
 import { pngImage, uploadFile } from '../../fixtures/images.js';
+import { acceptedJob, createCrew } from '../../fixtures/bookings.js';
 
 /** The default for a signed-in read: the session with the membership, then the data. */
 const defaultReadBudget = 2;
@@ -101,6 +102,18 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 3,
     urls: (ids) => [`/api/invoices/${ids.invoiceId}/reminders`],
   },
+  // The crews and every crew's people, read in parallel.
+  '/api/crews': { budget: 3, urls: () => ['/api/crews', '/api/crews?includeArchived=true'] },
+  '/api/crews/:id': { budget: 3, urls: (ids) => [`/api/crews/${ids.crewId}`] },
+  // The bookings with crew, job, customer and site in one join and the company's zone in
+  // parallel, then the jobs' tickets, reservations and areas in parallel for the warnings.
+  '/api/bookings': {
+    budget: 6,
+    urls: (ids) => [
+      '/api/bookings?from=2031-06-01&to=2031-06-30',
+      `/api/bookings?from=2031-06-01&to=2031-06-30&crewId=${ids.crewId}`,
+    ],
+  },
 };
 
 interface Ids {
@@ -111,6 +124,7 @@ interface Ids {
   rollId: string;
   estimateId: string;
   invoiceId: string;
+  crewId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -158,6 +172,17 @@ describe('statement budget of signed-in requests', () => {
       })
       .expect(201);
     const invoiceId = (invoice.body as { data: { id: string } }).data.id;
+    const crewId = await createCrew(owner, { members: [{ name: 'Budget helper' }] });
+    const bookedJobId = await acceptedJob(owner, 'Budget booked job');
+    await owner
+      .post('/api/bookings', {
+        crewId,
+        jobId: bookedJobId,
+        startDate: '2031-06-02',
+        endDate: '2031-06-03',
+        phase: 'finishing',
+      })
+      .expect(201);
     ids = {
       customerId: customer.id,
       siteId: site.id,
@@ -166,6 +191,7 @@ describe('statement budget of signed-in requests', () => {
       rollId,
       estimateId,
       invoiceId,
+      crewId,
     };
   });
 
@@ -193,6 +219,9 @@ describe('statement budget of signed-in requests', () => {
       '/api/invoices/:id',
       '/api/invoices/:id/pdf',
       '/api/invoices/:id/reminders',
+      '/api/crews',
+      '/api/crews/:id',
+      '/api/bookings',
     ]);
   });
 

@@ -7,6 +7,7 @@ import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
 import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
 import { pngImage, uploadFile } from '../../fixtures/images.js';
+import { acceptedJob, createCrew } from '../../fixtures/bookings.js';
 import {
   addMember,
   createCustomer,
@@ -36,6 +37,10 @@ interface World {
   aLocateTicketId: string;
   aEstimateId: string;
   aInvoiceId: string;
+  aCrewId: string;
+  aBookedJobId: string;
+  aBookingId: string;
+  bCrewId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -487,6 +492,68 @@ const probes: Record<string, Probe> = {
     run: (b, w) =>
       notFound(b.patch(`/api/locate-tickets/${w.aLocateTicketId}`, { status: 'clear' })),
   },
+  'get /api/crews': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/crews?includeArchived=true').expect(200);
+      expect(idsOf(res.body)).not.toContain(w.aCrewId);
+    },
+  },
+  'post /api/crews': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      // A's people cannot be put on B's crew.
+      const res = await b
+        .post('/api/crews', {
+          name: 'B poach',
+          colour: 'pine',
+          members: [{ userId: w.a.me.user.id }],
+        })
+        .expect(400);
+      expect(res.body.errors[0].path).toBe('members.0.userId');
+    },
+  },
+  'get /api/crews/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/crews/${w.aCrewId}`)),
+  },
+  'patch /api/crews/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/crews/${w.aCrewId}`, { name: 'B renamed' })),
+  },
+  'delete /api/crews/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/crews/${w.aCrewId}`)),
+  },
+  'get /api/bookings': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const all = await b.get('/api/bookings?from=2031-06-01&to=2031-06-30').expect(200);
+      expect(all.body.data).toEqual([]);
+      const aCrew = await b
+        .get(`/api/bookings?from=2031-06-01&to=2031-06-30&crewId=${w.aCrewId}`)
+        .expect(200);
+      expect(aCrew.body.data).toEqual([]);
+    },
+  },
+  'post /api/bookings': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const days = { startDate: '2031-06-10', endDate: '2031-06-10', phase: 'finishing' };
+      await notFound(b.post('/api/bookings', { ...days, crewId: w.aCrewId, jobId: w.bJobId }));
+      await notFound(
+        b.post('/api/bookings', { ...days, crewId: w.bCrewId, jobId: w.aBookedJobId }),
+      );
+    },
+  },
+  'patch /api/bookings/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/bookings/${w.aBookingId}`, { startDate: '2031-06-20' })),
+  },
+  'delete /api/bookings/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/bookings/${w.aBookingId}`)),
+  },
   'post /api/plans/preview': {
     kind: 'tenant',
     run: async (b) => {
@@ -728,6 +795,13 @@ async function snapshotOfA(w: World) {
     invoiceLinks: await q('SELECT id FROM invoice_links WHERE company_id = ? ORDER BY id'),
     payments: await q('SELECT id FROM payments WHERE company_id = ? ORDER BY id'),
     creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
+    crews: await q('SELECT id, name, updated_at FROM crews WHERE company_id = ? ORDER BY id'),
+    crewMembers: await q(
+      'SELECT id, user_id, name FROM crew_members WHERE company_id = ? ORDER BY id',
+    ),
+    bookings: await q(
+      'SELECT id, start_date, end_date, version FROM bookings WHERE company_id = ? ORDER BY id',
+    ),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -801,8 +875,27 @@ describe('tenant isolation', () => {
         senderName: 'Alpha Accounts',
       })
       .expect(200);
+    const aCrewId = await createCrew(a.client, {
+      name: 'Alpha crew',
+      members: [{ userId: a.me.user.id }, { name: 'Alpha helper' }],
+    });
+    const bCrewId = await createCrew(b.client, { name: 'Bravo crew' });
+    const aBookedJobId = await acceptedJob(a.client, 'Alpha booked job');
+    const aBooking = await a.client
+      .post('/api/bookings', {
+        crewId: aCrewId,
+        jobId: aBookedJobId,
+        startDate: '2031-06-02',
+        endDate: '2031-06-03',
+        phase: 'finishing',
+      })
+      .expect(201);
     world = {
       a,
+      aCrewId,
+      bCrewId,
+      aBookedJobId,
+      aBookingId: aBooking.body.data.id,
       b,
       aCustomerId: aCustomer.id,
       aSiteId: aSite.id,

@@ -29,6 +29,9 @@ export const paths = {
   receiveStock: '/stock/receive',
   roll: (id: string) => `/stock/${encodeURIComponent(id)}`,
   settings: '/settings',
+  crews: '/settings/crews',
+  /** The crew calendar; `crew` filters it to one crew, `view` is month or week. */
+  calendar: '/calendar',
   profile: '/profile',
 } as const;
 

@@ -38,7 +38,6 @@ export function JobsIcon({ className = 'h-6 w-6' }: { className?: string }) {
   );
 }
 
-/** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
 /** A sheet with a few lines and a total: an invoice. */
 export function InvoicesIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
@@ -49,6 +48,17 @@ export function InvoicesIcon({ className = 'h-6 w-6' }: { className?: string }) 
   );
 }
 
+/** A wall calendar with a booked span across it. */
+export function CalendarIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <rect x="3.5" y="5" width="17" height="15" rx="2" />
+      <path d="M3.5 10h17M8 3v4M16 3v4M7 14h10" />
+    </svg>
+  );
+}
+
+/** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
 export function StockIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
     <svg {...base} className={className}>
