@@ -5,3 +5,4 @@ export * from './cancellation/index.js';
 export * from './locate/index.js';
 export * from './estimates/index.js';
 export * from './invoices/index.js';
+export * from './receivables/index.js';

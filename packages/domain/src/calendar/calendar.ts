@@ -2,7 +2,7 @@
 // runs on calendar dates in UTC, where every day has 24 hours, so summer time cannot shift a
 // count; only the last step turns a day into an instant in the company's zone.
 import { TZDate, tz } from '@date-fns/tz';
-import { addDays, format, getDay, parseISO } from 'date-fns';
+import { addDays, differenceInCalendarDays, format, getDay, parseISO } from 'date-fns';
 
 /** A calendar day written `YYYY-MM-DD`. */
 export type CalendarDate = string;
@@ -17,6 +17,11 @@ export function localDateOf(instant: Date, timeZone: string): CalendarDate {
 /** The calendar day `days` after `date` (negative counts back). */
 export function addCalendarDays(date: CalendarDate, days: number): CalendarDate {
   return format(addDays(parseISO(date, { in: utc }), days, { in: utc }), 'yyyy-MM-dd');
+}
+
+/** Whole calendar days from `from` to `to` (negative when `to` is earlier). */
+export function calendarDaysBetween(from: CalendarDate, to: CalendarDate): number {
+  return differenceInCalendarDays(parseISO(to, { in: utc }), parseISO(from, { in: utc }));
 }
 
 /** 0 = Sunday … 6 = Saturday. */

@@ -5,6 +5,7 @@ export type { BusinessCalendar, HolidayLookup } from './business-days.js';
 export type { CalendarDate } from './calendar.js';
 export {
   addCalendarDays,
+  calendarDaysBetween,
   isCalendarDate,
   localDateOf,
   localInstantAt,
