@@ -17,6 +17,8 @@ import { registerLocateRoutes } from './modules/locate/locate.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
+import { registerReceivablesRoutes } from './modules/receivables/receivables.routes.js';
+import { registerDashboardRoutes } from './modules/dashboard/dashboard.routes.js';
 import { registerPriceBookRoutes } from './modules/price-book/price-book.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
 import { registerStockRoutes } from './modules/stock/stock.routes.js';
@@ -44,4 +46,6 @@ export function registerApiRoutes(
   registerEstimatingSettingsRoutes(routes, deps);
   registerEstimatesRoutes(routes, deps);
   registerInvoicesRoutes(routes, deps);
+  registerReceivablesRoutes(routes, deps);
+  registerDashboardRoutes(routes, deps);
 }

@@ -19,3 +19,4 @@ export * from './locate.js';
 export * from './estimates.js';
 export * from './estimate-sending.js';
 export * from './invoices.js';
+export * from './reports.js';

@@ -42,6 +42,10 @@ export const actions = [
   'invoices.write',
   'payments.write',
   'payments.refund',
+  'receivables.read',
+  'statements.send',
+  'exports.read',
+  'dashboard.read',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -89,6 +93,13 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'payments.write': ['owner', 'bookkeeper'],
   // Money going back out: the owner alone.
   'payments.refund': ['owner'],
+  // Receivables (aging, customer statements) and the accountant's CSV exports: the bookkeeper
+  // and the owner. The office reads an invoice's status only (invoices.read), never these.
+  'receivables.read': ['owner', 'bookkeeper'],
+  'statements.send': ['owner', 'bookkeeper'],
+  'exports.read': ['owner', 'bookkeeper'],
+  // The owner's numbers (pipeline, win rate, margins, crew use): the owner alone.
+  'dashboard.read': ['owner'],
 };
 
 /** Whether `role` may perform `action`. */

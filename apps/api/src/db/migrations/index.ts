@@ -12,6 +12,7 @@ import { estimateLinks } from './0011-estimate-links.js';
 import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
 import { invoices } from './0014-invoices.js';
+import { reportIndexes } from './0020-report-indexes.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -27,4 +28,5 @@ export const migrations: Migration[] = [
   locateTickets,
   rollStock,
   invoices,
+  reportIndexes,
 ];
