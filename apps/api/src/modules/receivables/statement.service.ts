@@ -2,7 +2,7 @@
 // notes recorded against it, in date order with the running balance, the customer's aging line
 // and the balance due. The balance it ends on is the aging report's total for the customer:
 // both come from the same invoices and the invoices module's `invoiceBalanceCents`.
-import { agingBucketNames, invoiceBalanceCents } from '@seamwright/domain';
+import { agingBucketNames, invoiceBalanceCents, localDateOf } from '@seamwright/domain';
 import type { AgingBucketName } from '@seamwright/domain';
 import type { Sequelize } from 'sequelize';
 import type { RequestContext } from '../../context.js';
@@ -11,7 +11,7 @@ import { findOwnCompany } from '../company/company.repository.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import type { StatementDocumentEntry, StatementDocumentInput } from '../estimate-document/index.js';
 import { creditNoteReference, invoiceReference } from '../invoices/invoice-view.js';
-import { agingReport, resolveAsOf } from './aging.service.js';
+import { agingReport } from './aging.service.js';
 import { selectStatementInvoices, selectStatementMovements } from './receivables.repository.js';
 
 export const agingBucketLabels: Record<AgingBucketName, string> = {
@@ -45,7 +45,7 @@ export async function buildStatement(
     findCustomer(ctx, customerId),
   ]);
   if (!company || !customer) throw notFound('Customer');
-  const asOf = await resolveAsOf(ctx, undefined, now);
+  const asOf = localDateOf(now, company.timeZone);
   const [invoices, movements, aging] = await Promise.all([
     selectStatementInvoices(ctx, sequelize, customerId, asOf),
     selectStatementMovements(ctx, sequelize, customerId, asOf),
