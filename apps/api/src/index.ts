@@ -50,3 +50,12 @@ export { sampleEstimateDocumentInput } from './modules/estimate-document/sample-
 export { markEstimateSent } from './modules/estimates/estimate-sending.service.js';
 export { getEstimateForDocument } from './modules/estimates/estimate-document.service.js';
 export type { EstimateDocument } from './modules/estimates/estimate-document.service.js';
+export { agingReport } from './modules/receivables/aging.service.js';
+export { getDashboard } from './modules/dashboard/dashboard.service.js';
+export { dashboardRange } from './modules/dashboard/dashboard-range.js';
+export { collectedByMonth, invoicedByMonth } from './modules/dashboard/dashboard-money.queries.js';
+export {
+  installedFigures,
+  pipelineByStatus,
+  winRate,
+} from './modules/dashboard/dashboard-jobs.queries.js';
