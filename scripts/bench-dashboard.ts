@@ -8,9 +8,10 @@
  * slowest run per query. `--explain` also prints MariaDB's EXPLAIN of each statement.
  *
  * Usage: pnpm bench:dashboard [--runs 20] [--jobs 20000] [--invoices 200000] [--explain]
+ *                             [--reuse]  (time the data seeded by the previous run again)
  * Safe anywhere: a database of its own on the local test instance.
  */
-import { createSequelize, migrateDatabase } from '@seamwright/api';
+import { createSequelize, migrateDatabase, selectRows } from '@seamwright/api';
 import {
   agingReport,
   collectedByMonth,
@@ -37,13 +38,14 @@ const runs = Number(flag('runs', '20'));
 const jobCount = Number(flag('jobs', '20000'));
 const invoiceCount = Number(flag('invoices', '200000'));
 const explain = process.argv.includes('--explain');
+const reuse = process.argv.includes('--reuse');
 if (!(runs > 0) || !(jobCount > 0) || !(invoiceCount > 0))
   fail('bench', '--runs, --jobs and --invoices take positive numbers');
 
 const { db } = instances.test;
 const database = { database: 'seamwright_bench_dashboard', user: db.user, password: db.password };
 const mariadb = await startMariadb('test', db.port);
-recreateDatabase(mariadb, database);
+if (!reuse) recreateDatabase(mariadb, database);
 const sequelize = createSequelize({
   host: '127.0.0.1',
   port: db.port,
@@ -52,18 +54,27 @@ const sequelize = createSequelize({
 });
 await migrateDatabase(sequelize);
 
-const seedStart = Date.now();
-const conn = await createConnection({ host: '127.0.0.1', port: db.port, ...database });
-const { companyId, userId } = await seedDashboardCompany(conn, {
-  customers: Math.max(1, Math.round(jobCount / 4)),
-  jobs: jobCount,
-  invoices: invoiceCount,
-});
-await conn.end();
-say(
-  'bench',
-  `seeded ${jobCount} jobs and ${invoiceCount} invoices in ${((Date.now() - seedStart) / 1000).toFixed(1)} s`,
-);
+let companyId: string;
+let userId: string;
+if (reuse) {
+  const [row] = await selectRows<{ companyId: string; userId: string }>(
+    sequelize,
+    'SELECT company_id AS companyId, user_id AS userId FROM memberships LIMIT 1',
+  );
+  if (!row) fail('bench', 'nothing to reuse: run without --reuse first');
+  ({ companyId, userId } = row);
+} else {
+  const seedStart = Date.now();
+  const conn = await createConnection({ host: '127.0.0.1', port: db.port, ...database });
+  ({ companyId, userId } = await seedDashboardCompany(conn, {
+    customers: Math.max(1, Math.round(jobCount / 4)),
+    jobs: jobCount,
+    invoices: invoiceCount,
+  }));
+  await conn.end();
+  const seconds = ((Date.now() - seedStart) / 1000).toFixed(1);
+  say('bench', `seeded ${jobCount} jobs and ${invoiceCount} invoices in ${seconds} s`);
+}
 
 const ctx = { companyId, userId, role: 'owner' as const };
 const range = dashboardRange('America/Los_Angeles', {});

@@ -51,6 +51,7 @@ export const router = createBrowserRouter([
           { path: '/stock', lazy: () => import('./routes/stock') },
           { path: '/stock/receive', lazy: () => import('./routes/stock-receive') },
           { path: '/stock/:rollId', lazy: () => import('./routes/stock-roll') },
+          { path: '/reports', lazy: () => import('./routes/reports') },
           { path: '/settings', lazy: () => import('./routes/settings') },
           { path: '/profile', lazy: () => import('./routes/profile') },
           { path: '*', lazy: () => import('./routes/not-found') },

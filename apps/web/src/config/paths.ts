@@ -26,6 +26,7 @@ export const paths = {
   stock: '/stock',
   receiveStock: '/stock/receive',
   roll: (id: string) => `/stock/${encodeURIComponent(id)}`,
+  reports: '/reports',
   settings: '/settings',
   profile: '/profile',
 } as const;

@@ -1,7 +1,12 @@
 // The aging report: the SQL sums what is owed per customer and due day, the pure
 // `ageReceivables` (packages/domain) buckets it, and the balance is the invoices module's own
 // `invoiceBalanceCents`, so nothing is counted or rounded differently in two places.
-import { ageReceivables, invoiceBalanceCents, localDateOf } from '@seamwright/domain';
+import {
+  addCalendarDays,
+  ageReceivables,
+  invoiceBalanceCents,
+  localDateOf,
+} from '@seamwright/domain';
 import type { AgingReportView } from '@seamwright/shared';
 import type { Sequelize } from 'sequelize';
 import type { RequestContext } from '../../context.js';
@@ -30,7 +35,8 @@ export async function agingReport(
     groups.map((g) => ({
       customerId: g.customerId,
       customerName: g.customerName,
-      dueDate: g.dueDate,
+      // The due day that is `daysPastDue` before asOf: ageReceivables counts the days again.
+      dueDate: addCalendarDays(asOf, -g.daysPastDue),
       balanceCents: invoiceBalanceCents(g),
     })),
     asOf,

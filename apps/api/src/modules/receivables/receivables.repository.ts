@@ -7,11 +7,19 @@ import { scopedSql } from '../../db/tenant-scope.js';
 /** Stored statuses that can still owe money; `settledStatus` makes any invoice owing nothing `paid`. */
 export const owingStatuses = ['sent', 'partly_paid'] as const;
 
-/** Kept totals of one customer's owing invoices that fall due on one day. */
+/**
+ * Days past due are capped to [0, agingDaysCap]: every bucket edge of `agingBucketFor` lies
+ * inside that span (0 is the last current day, 91 the first of over 90; a unit test beside the
+ * aging service checks both), so the cap never moves an invoice to another bucket, and an old
+ * debt folds into one row per customer instead of one per due day.
+ */
+export const agingDaysCap = 91;
+
+/** Kept totals of one customer's owing invoices that are `daysPastDue` (capped) late. */
 export interface OwingGroup {
   customerId: string;
   customerName: string;
-  dueDate: string;
+  daysPastDue: number;
   totalCents: number;
   paidCents: number;
   refundedCents: number;
@@ -21,7 +29,7 @@ export interface OwingGroup {
 interface OwingGroupRow {
   customerId: string;
   customerName: string;
-  dueDate: string;
+  daysPastDue: number | string;
   totalCents: string | number;
   paidCents: string | number;
   refundedCents: string | number;
@@ -29,11 +37,11 @@ interface OwingGroupRow {
 }
 
 /**
- * What each customer owes per due day, on invoices issued by `asOf`. The kept totals are summed
- * per (customer, due day), not per invoice: the balance is linear in them, and every summed
- * invoice owes more than 0 (`settledStatus` turns one that owes nothing into `paid`), so the
- * balance of the sums is exactly the sum of the invoices' balances, and the rows stay few.
- * Uses the covering index `invoices_company_owing` (migration 0020).
+ * What each customer owes per (capped) day count past due, on invoices issued by `asOf`. The
+ * kept totals are summed per group, not per invoice: the balance is linear in them, and every
+ * summed invoice owes more than 0 (`settledStatus` turns one that owes nothing into `paid`), so
+ * the balance of the sums is exactly the sum of the invoices' balances. Grouped first on the
+ * covering index `invoices_company_owing` (migration 0020), then joined to the customers.
  */
 export async function selectOwingGroups(
   ctx: RequestContext,
@@ -42,21 +50,25 @@ export async function selectOwingGroups(
   customerId?: string,
 ): Promise<OwingGroup[]> {
   const rows = await scopedSql(ctx, sequelize).select<OwingGroupRow>(
-    `SELECT i.customer_id AS customerId, MIN(c.name) AS customerName,
-            DATE_FORMAT(i.due_date, '%Y-%m-%d') AS dueDate,
-            SUM(i.total_cents) AS totalCents, SUM(i.paid_cents) AS paidCents,
-            SUM(i.refunded_cents) AS refundedCents, SUM(i.credited_cents) AS creditedCents
-       FROM invoices i
-       JOIN customers c ON c.company_id = i.company_id AND c.id = i.customer_id
-      WHERE i.company_id = :companyId AND i.status IN (:statuses) AND i.issued_on <= :asOf
-        ${customerId ? 'AND i.customer_id = :customerId' : ''}
-      GROUP BY i.customer_id, i.due_date`,
-    { statuses: [...owingStatuses], asOf, customerId },
+    `SELECT g.customer_id AS customerId, c.name AS customerName, g.days AS daysPastDue,
+            g.total AS totalCents, g.paid AS paidCents, g.refunded AS refundedCents,
+            g.credited AS creditedCents
+       FROM (SELECT i.customer_id,
+                    LEAST(GREATEST(DATEDIFF(:asOf, i.due_date), 0), :cap) AS days,
+                    SUM(i.total_cents) AS total, SUM(i.paid_cents) AS paid,
+                    SUM(i.refunded_cents) AS refunded, SUM(i.credited_cents) AS credited
+               FROM invoices i
+              WHERE i.company_id = :companyId AND i.status IN (:statuses)
+                AND i.issued_on <= :asOf
+                ${customerId ? 'AND i.customer_id = :customerId' : ''}
+              GROUP BY i.customer_id, days) g
+       JOIN customers c ON c.company_id = :companyId AND c.id = g.customer_id`,
+    { statuses: [...owingStatuses], asOf, customerId, cap: agingDaysCap },
   );
   return rows.map((r) => ({
     customerId: r.customerId,
     customerName: r.customerName,
-    dueDate: r.dueDate,
+    daysPastDue: Number(r.daysPastDue),
     totalCents: Number(r.totalCents),
     paidCents: Number(r.paidCents),
     refundedCents: Number(r.refundedCents),

@@ -32,4 +32,12 @@ describe('sections', () => {
       'Settings',
     ]);
   });
+
+  it('gives Reports to the owner and the bookkeeper only, never on the phone bar', () => {
+    expect(labels(sectionsFor('owner'))).toContain('Reports');
+    expect(labels(sectionsFor('bookkeeper'))).toContain('Reports');
+    expect(labels(sectionsFor('office'))).not.toContain('Reports');
+    expect(labels(sectionsFor('crew_lead'))).not.toContain('Reports');
+    expect(labels(phoneSectionsFor('owner'))).not.toContain('Reports');
+  });
 });
