@@ -18,7 +18,8 @@ describe('GET /api/reports/dashboard', () => {
   let leadEstimateTotal: number;
 
   const dashboard = async (query = ''): Promise<DashboardView> =>
-    (await team.owner.client.get(`/api/reports/dashboard${query}`).expect(200)).body.data;
+    (await team.owner.client.get(`/api/reports/dashboard${query}`).expect(200)).body
+      .data as DashboardView;
 
   beforeAll(async () => {
     team = await signUpTeam(testApp().app);

@@ -24,7 +24,8 @@ describe('GET /api/reports/aging', () => {
   let dueToday: InvoiceSummaryView;
 
   const aging = async (asOf: string): Promise<AgingReportView> =>
-    (await team.bookkeeper.client.get(`/api/reports/aging?asOf=${asOf}`).expect(200)).body.data;
+    (await team.bookkeeper.client.get(`/api/reports/aging?asOf=${asOf}`).expect(200)).body
+      .data as AgingReportView;
 
   beforeAll(async () => {
     team = await signUpTeam(testApp().app);

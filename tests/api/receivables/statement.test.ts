@@ -1,5 +1,6 @@
 // The customer statement: GET …/statement.pdf parsed back with pdf-parse and compared with the
 // aging report; POST …/statement e-mails it (maildev).
+import type { AgingReportView } from '@seamwright/shared';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { testApp } from '../../fixtures/app.js';
 import { errorPaths } from '../../fixtures/estimates.js';
@@ -28,10 +29,9 @@ describe('customer statements', () => {
 
   it('prints the owing invoices, payments and credits with the aging total as the balance', async () => {
     const aging = await team.bookkeeper.client.get('/api/reports/aging').expect(200);
-    const mine = aging.body.data.customers.find(
-      (c: { customerId: string }) => c.customerId === customer.customerId,
-    );
-    expect(mine.totalCents).toBe(35_000);
+    const report = aging.body.data as AgingReportView;
+    const mine = report.customers.find((c) => c.customerId === customer.customerId);
+    expect(mine?.totalCents).toBe(35_000);
     const res = await team.bookkeeper.client
       .get(`/api/customers/${customer.customerId}/statement.pdf`)
       .buffer(true)
@@ -44,7 +44,7 @@ describe('customer statements', () => {
     const { text } = await pdfText(res.body as Buffer);
     expect(text).toContain('Statement');
     expect(text).toContain('Quillmere Greens');
-    expect(text).toContain(`Balance due: ${dollars(mine.totalCents)}`);
+    expect(text).toContain(`Balance due: ${dollars(mine?.totalCents ?? NaN)}`);
     for (const amount of [40_000, 15_000, 12_550, 2_550]) expect(text).toContain(dollars(amount));
     expect(text).toContain(`Current: ${dollars(35_000)}`);
     expect(text).toContain('Over 90 days: $0.00');
