@@ -19,6 +19,8 @@ import { registerLocateRoutes } from './modules/locate/locate.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
+import { registerReceivablesRoutes } from './modules/receivables/receivables.routes.js';
+import { registerDashboardRoutes } from './modules/dashboard/dashboard.routes.js';
 import { registerPriceBookRoutes } from './modules/price-book/price-book.routes.js';
 import { registerRemindersRoutes } from './modules/reminders/reminders.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
@@ -50,4 +52,6 @@ export function registerApiRoutes(
   registerRemindersRoutes(routes, deps);
   registerCrewsRoutes(routes, deps);
   registerBookingsRoutes(routes, deps);
+  registerReceivablesRoutes(routes, deps);
+  registerDashboardRoutes(routes, deps);
 }

@@ -27,3 +27,4 @@ export * from './reminders.js';
 export * from './crew-colours.js';
 export * from './crews.js';
 export * from './bookings.js';
+export * from './reports.js';

@@ -47,6 +47,10 @@ export const actions = [
   'crews.manage',
   'bookings.read',
   'bookings.write',
+  'receivables.read',
+  'statements.send',
+  'exports.read',
+  'dashboard.read',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -103,6 +107,13 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // Crew leads read only their own crews' bookings (the service filters), never money.
   'bookings.read': ['owner', 'office', 'crew_lead'],
   'bookings.write': ['owner', 'office'],
+  // Receivables (aging, customer statements) and the accountant's CSV exports: the bookkeeper
+  // and the owner. The office reads an invoice's status only (invoices.read), never these.
+  'receivables.read': ['owner', 'bookkeeper'],
+  'statements.send': ['owner', 'bookkeeper'],
+  'exports.read': ['owner', 'bookkeeper'],
+  // The owner's numbers (pipeline, win rate, margins, crew use): the owner alone.
+  'dashboard.read': ['owner'],
 };
 
 /** Whether `role` may perform `action`. */

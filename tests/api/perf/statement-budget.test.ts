@@ -114,6 +114,28 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
       `/api/bookings?from=2031-06-01&to=2031-06-30&crewId=${ids.crewId}`,
     ],
   },
+  // The company (its time zone gives today) when `asOf` is not given, then one grouped SELECT.
+  '/api/reports/aging': {
+    budget: 3,
+    urls: () => ['/api/reports/aging', '/api/reports/aging?asOf=2026-03-31'],
+  },
+  // Company and customer in parallel, then the owing invoices, their payments and credits, and
+  // the customer's aging in parallel.
+  '/api/customers/:id/statement.pdf': {
+    budget: 6,
+    urls: (ids) => [`/api/customers/${ids.customerId}/statement.pdf`],
+  },
+  // The rows and the company (today, for overdue) in parallel.
+  '/api/exports/invoices.csv': {
+    budget: 3,
+    urls: () => ['/api/exports/invoices.csv', '/api/exports/invoices.csv?from=2026-01-01'],
+  },
+  '/api/exports/payments.csv': { budget: 2, urls: () => ['/api/exports/payments.csv'] },
+  // The company (time zone and region), then one statement per figure, in parallel.
+  '/api/reports/dashboard': {
+    budget: 7,
+    urls: () => ['/api/reports/dashboard', '/api/reports/dashboard?from=2026-01-01&to=2026-06-30'],
+  },
 };
 
 interface Ids {
@@ -222,6 +244,10 @@ describe('statement budget of signed-in requests', () => {
       '/api/crews',
       '/api/crews/:id',
       '/api/bookings',
+      '/api/reports/aging',
+      '/api/customers/:id/statement.pdf',
+      '/api/exports/invoices.csv',
+      '/api/reports/dashboard',
     ]);
   });
 

@@ -619,6 +619,48 @@ const probes: Record<string, Probe> = {
       await b.post('/api/price-book', { ...alphaPriceItem, name: 'Bravo copy' }).expect(201);
     },
   },
+  'get /api/reports/aging': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/reports/aging').expect(200);
+      expect(JSON.stringify(res.body)).not.toContain(w.aCustomerId);
+      expect(res.body.data.totalCents).toBe(0);
+    },
+  },
+  'get /api/reports/dashboard': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/reports/dashboard').expect(200);
+      const invoiced = (res.body.data.invoicedByMonth as { cents: number }[]).reduce(
+        (sum, m) => sum + m.cents,
+        0,
+      );
+      expect(invoiced).toBe(0);
+    },
+  },
+  'get /api/customers/:id/statement.pdf': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}/statement.pdf`)),
+  },
+  'post /api/customers/:id/statement': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.post(`/api/customers/${w.aCustomerId}/statement`, { to: 'thief@example.test' })),
+  },
+  'get /api/exports/invoices.csv': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/exports/invoices.csv').expect(200);
+      expect(res.text).not.toContain('Alpha Customer');
+    },
+  },
+  'get /api/exports/payments.csv': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/exports/payments.csv').expect(200);
+      expect(res.text).not.toContain('Alpha Customer');
+    },
+  },
   'get /api/price-book/export.csv': {
     kind: 'tenant',
     run: async (b) => {
@@ -860,14 +902,30 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
+    // A sent and partly paid invoice of A's, for the receivables probes (aging, exports).
     const aInvoice = await a.client
       .post('/api/invoices', {
         jobId: aJob.id,
         kind: 'progress',
-        lines: [{ label: 'Alpha work', quantity: 1, unitPriceCents: 10_000 }],
+        lines: [
+          {
+            label: 'Alpha work',
+            quantity: 1,
+            unit: 'each',
+            unitPriceCents: 40_000,
+            taxable: false,
+          },
+        ],
       })
       .expect(201);
     await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
+    await a.client
+      .post(`/api/invoices/${aInvoice.body.data.id}/payments`, {
+        amountCents: 10_000,
+        method: 'cheque',
+        receivedOn: new Date().toISOString().slice(0, 10),
+      })
+      .expect(201);
     await a.client
       .put('/api/settings/reminders', {
         enabled: true,

@@ -55,6 +55,7 @@ export const router = createBrowserRouter([
           { path: '/stock/receive', lazy: () => import('./routes/stock-receive') },
           { path: '/stock/:rollId', lazy: () => import('./routes/stock-roll') },
           { path: '/calendar', lazy: () => import('./routes/calendar') },
+          { path: '/reports', lazy: () => import('./routes/reports') },
           { path: '/settings', lazy: () => import('./routes/settings') },
           { path: '/settings/crews', lazy: () => import('./routes/crews') },
           { path: '/profile', lazy: () => import('./routes/profile') },

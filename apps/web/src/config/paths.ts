@@ -28,6 +28,7 @@ export const paths = {
   stock: '/stock',
   receiveStock: '/stock/receive',
   roll: (id: string) => `/stock/${encodeURIComponent(id)}`,
+  reports: '/reports',
   settings: '/settings',
   crews: '/settings/crews',
   /** The crew calendar; `crew` filters it to one crew, `view` is month or week. */

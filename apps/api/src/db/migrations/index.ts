@@ -17,6 +17,7 @@ import { crewsBookings } from './0016-crews-bookings.js';
 import { uploads } from './0017-uploads.js';
 import { customerSearchWordsMigration } from './0018-customer-search-words.js';
 import { reminders } from './0019-reminders.js';
+import { reportIndexes } from './0020-report-indexes.js';
 import { refunds } from './0021-refunds.js';
 import type { Migration } from './types.js';
 
@@ -38,5 +39,6 @@ export const migrations: Migration[] = [
   uploads,
   customerSearchWordsMigration,
   reminders,
+  reportIndexes,
   refunds,
 ];

@@ -59,6 +59,17 @@ export function CalendarIcon({ className = 'h-6 w-6' }: { className?: string }) 
 }
 
 /** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
+export function ReportsIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <path d="M4 20h16" />
+      <path d="M7 16v-5" />
+      <path d="M12 16V7" />
+      <path d="M17 16v-8" />
+    </svg>
+  );
+}
+
 export function StockIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
     <svg {...base} className={className}>

@@ -50,4 +50,12 @@ describe('sections', () => {
     expect(labels(sectionsFor('crew_lead'))).not.toContain('Invoices');
     expect(labels(phoneSectionsFor('bookkeeper'))).toContain('Invoices');
   });
+
+  it('gives Reports to the owner and the bookkeeper only, never on the phone bar', () => {
+    expect(labels(sectionsFor('owner'))).toContain('Reports');
+    expect(labels(sectionsFor('bookkeeper'))).toContain('Reports');
+    expect(labels(sectionsFor('office'))).not.toContain('Reports');
+    expect(labels(sectionsFor('crew_lead'))).not.toContain('Reports');
+    expect(labels(phoneSectionsFor('owner'))).not.toContain('Reports');
+  });
 });

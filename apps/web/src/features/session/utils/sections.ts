@@ -6,6 +6,7 @@ import {
   InvoicesIcon,
   JobsIcon,
   ProfileIcon,
+  ReportsIcon,
   SettingsIcon,
   StockIcon,
   TodayIcon,
@@ -81,6 +82,15 @@ const sections: Section[] = [
     Icon: StockIcon,
     needs: 'inventory.read',
     phoneRoles: ['crew_lead'],
+  },
+  // Receivables and exports for the bookkeeper, and the dashboard too for the owner; desktop
+  // only (wide tables and charts).
+  {
+    to: paths.reports,
+    label: 'Reports',
+    Icon: ReportsIcon,
+    needs: 'receivables.read',
+    phoneRoles: [],
   },
   // For a crew lead the settings page holds only their own profile, so the phone bar says so.
   {
