@@ -131,9 +131,10 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     urls: () => ['/api/exports/invoices.csv', '/api/exports/invoices.csv?from=2026-01-01'],
   },
   '/api/exports/payments.csv': { budget: 2, urls: () => ['/api/exports/payments.csv'] },
-  // The company (time zone and region), then one statement per figure, in parallel.
+  // The company (time zone and region), then one statement per figure (crew utilisation
+  // included), in parallel.
   '/api/reports/dashboard': {
-    budget: 7,
+    budget: 8,
     urls: () => ['/api/reports/dashboard', '/api/reports/dashboard?from=2026-01-01&to=2026-06-30'],
   },
 };

@@ -761,6 +761,20 @@ const probes: Record<string, Probe> = {
     kind: 'public',
     why: 'the e-mailed token is the credential',
   },
+  'post /api/public/invoices/:token/checkout': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential (tests/api/invoices/pay-online.test.ts)',
+  },
+  'post /api/invoices/:id/payments/:paymentId/refunds': {
+    kind: 'tenant',
+    run: (b: Client, w: World) =>
+      notFound(
+        b.post(`/api/invoices/${w.aInvoiceId}/payments/${w.aInvoiceId}/refunds`, {
+          amountCents: 1,
+          reason: 'Hijack',
+        }),
+      ),
+  },
 };
 
 // Payment reminders (modules/reminders): A's settings, log and schedule stay A's.
