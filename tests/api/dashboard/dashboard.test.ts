@@ -4,6 +4,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { DashboardView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
+import { acceptedJob, createCrew } from '../../fixtures/bookings.js';
 import { errorPaths } from '../../fixtures/estimates.js';
 import { signUpTeam } from '../../fixtures/factories.js';
 import type { Team } from '../../fixtures/factories.js';
@@ -72,6 +73,29 @@ describe('GET /api/reports/dashboard', () => {
     // No turf was cut from stock for it, so there is nothing to compare yet.
     expect(data.material).toMatchObject({ jobs: 0, estimatedSqFt: 0, actualSqFt: 0 });
     expect(data.crewUtilisation).toBeNull();
+  });
+
+  it('counts booked against available crew-days from the calendar', async () => {
+    const owner = team.owner.client;
+    // Monday to Friday; June 2031 has 21 such days (1 June 2031 is a Sunday: calendar
+    // arithmetic). Two days booked, Monday 2 and Tuesday 3 June.
+    const crewId = await createCrew(owner, {
+      name: 'Dashboard crew',
+      workingDays: [1, 2, 3, 4, 5],
+    });
+    const jobId = await acceptedJob(owner, 'Dashboard booked job');
+    await owner
+      .post('/api/bookings', {
+        crewId,
+        jobId,
+        startDate: '2031-06-02',
+        endDate: '2031-06-03',
+        phase: 'finishing',
+      })
+      .expect(201);
+    const data = await dashboard('?from=2031-06-01&to=2031-06-30');
+    expect(data.crewUtilisation).toMatchObject({ bookedCrewDays: 2, availableCrewDays: 21 });
+    expect(data.crewUtilisation?.rate).toBeCloseTo(2 / 21, 6);
   });
 
   it('shows water saved only where a published figure exists (TRADE.md §8.7)', async () => {
