@@ -4,6 +4,7 @@
 import { fileURLToPath } from 'node:url';
 import { expect, test, type Page } from '@playwright/test';
 import { expectAccessible } from './support/a11y';
+import { rectangleArea } from './support/api-call';
 import { emailFor, runStamp, signUpCompany } from './support/people';
 
 test.use({ bypassCSP: true });
@@ -43,21 +44,7 @@ test('office puts a yard sketch under an area, scales it by two points, and find
     city: 'Marlow Cross',
   });
   const jobId = await post(page, '/api/jobs', { customerId, siteId, title: 'Sketched lawn' });
-  const areaId = await post(page, `/api/jobs/${jobId}/areas`, {
-    name: 'Back lawn',
-    usage: 'landscape',
-    area: {
-      outer: [
-        [0, 0],
-        [30, 0],
-        [30, 17],
-        [0, 17],
-      ],
-      holes: [],
-    },
-    roll: { widthFt: 15, maxLengthFt: 100 },
-    grain: { angleDeg: 90 },
-  });
+  const areaId = await post(page, `/api/jobs/${jobId}/areas`, rectangleArea('Back lawn', 30, 17));
 
   await page.goto(`/areas/${areaId}/edit`);
   const panel = page.getByRole('region', { name: 'Photo or sketch under the drawing' });

@@ -3,7 +3,7 @@
 // picks an option, accepts by typing a name and sees the thank-you; the office then finds the
 // job accepted.
 import { expect, test } from '@playwright/test';
-import { call } from './support/api-call';
+import { call, rectangleArea } from './support/api-call';
 import { expectAccessible } from './support/a11y';
 import { typeLShapedYard } from './support/area-drawing';
 import { linkFromMail } from './support/mail';
@@ -169,22 +169,14 @@ test('a homeowner declines with a reason, and a second tab that tries to accept 
     '/api/price-book?kind=turf&pageSize=100',
   );
   // A 30 × 20 ft rectangle, as tests/fixtures/areas.ts draws it.
-  await call(page, 'POST', `/api/jobs/${job.id}/areas`, {
-    name: 'Back lawn',
-    usage: 'landscape',
-    area: {
-      outer: [
-        [0, 0],
-        [30, 0],
-        [30, 20],
-        [0, 20],
-      ],
-      holes: [],
-    },
-    roll: { widthFt: 15, maxLengthFt: 100 },
-    grain: { angleDeg: 90 },
-    turfProductId: turf.find((item) => item.key === 'turf-landscape-175')?.id,
-  });
+  await call(
+    page,
+    'POST',
+    `/api/jobs/${job.id}/areas`,
+    rectangleArea('Back lawn', 30, 20, {
+      turfProductId: turf.find((item) => item.key === 'turf-landscape-175')?.id,
+    }),
+  );
   const estimate = await call<{ id: string }>(page, 'POST', `/api/jobs/${job.id}/estimates`, {});
   await call(page, 'POST', `/api/estimates/${estimate.id}/send`, {});
   const link = await linkFromMail(customerEmail, /\/e\/[A-Za-z0-9_-]{20,}/);

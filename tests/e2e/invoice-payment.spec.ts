@@ -4,7 +4,7 @@
 // the invoice paid once the processor's webhook has landed; the office sees it paid too.
 import { expect, test, type Page } from '@playwright/test';
 import { expectAccessible } from './support/a11y';
-import { call } from './support/api-call';
+import { call, rectangleArea } from './support/api-call';
 import { linkFromMail } from './support/mail';
 import { emailFor, runStamp, signUpCompany } from './support/people';
 import { baseUrl } from './support/servers';
@@ -29,21 +29,7 @@ async function acceptedJob(page: Page, customerEmail: string): Promise<{ jobId: 
     siteId: site.id,
     title: 'Back garden lawn',
   });
-  await call(page, 'POST', `/api/jobs/${job.id}/areas`, {
-    name: 'Back lawn',
-    usage: 'landscape',
-    area: {
-      outer: [
-        [0, 0],
-        [30, 0],
-        [30, 20],
-        [0, 20],
-      ],
-      holes: [],
-    },
-    roll: { widthFt: 15, maxLengthFt: 100 },
-    grain: { angleDeg: 90 },
-  });
+  await call(page, 'POST', `/api/jobs/${job.id}/areas`, rectangleArea('Back lawn', 30, 20));
   const estimate = await call<{ id: string }>(page, 'POST', `/api/jobs/${job.id}/estimates`, {});
   await call(page, 'POST', `/api/estimates/${estimate.id}/send`, {});
   await call(page, 'POST', `/api/estimates/${estimate.id}/acceptances`, {

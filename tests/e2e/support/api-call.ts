@@ -19,3 +19,23 @@ export async function call<T>(
   expect(res.ok(), `${method} ${path}: ${res.status()} ${await res.text()}`).toBe(true);
   return ((await res.json()) as { data: T }).data;
 }
+
+/** The body of `POST /api/jobs/:id/areas` for a plain rectangle on a 15 ft roll, grain across. */
+export function rectangleArea(name: string, widthFt: number, depthFt: number, extra: object = {}) {
+  return {
+    name,
+    usage: 'landscape',
+    area: {
+      outer: [
+        [0, 0],
+        [widthFt, 0],
+        [widthFt, depthFt],
+        [0, depthFt],
+      ],
+      holes: [],
+    },
+    roll: { widthFt: 15, maxLengthFt: 100 },
+    grain: { angleDeg: 90 },
+    ...extra,
+  };
+}
