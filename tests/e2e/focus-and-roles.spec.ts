@@ -54,7 +54,7 @@ test('pages name the tab and take focus at their heading; the rail shows focus i
   const railLink = rail(page).getByRole('link', { name: 'Customers' });
   for (
     let step = 0;
-    step < 8 && !(await railLink.evaluate((a) => a === document.activeElement));
+    step < 20 && !(await railLink.evaluate((a) => a === document.activeElement));
     step++
   ) {
     await page.keyboard.press('Shift+Tab');
