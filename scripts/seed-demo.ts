@@ -40,6 +40,11 @@ try {
       'seed',
       `customer's page of "${link.jobTitle}": http://127.0.0.1:${instances.dev.apiPort}${link.path}`,
     );
+  for (const link of result.payLinks)
+    say(
+      'seed',
+      `pay page of "${link.jobTitle}": http://127.0.0.1:${instances.dev.apiPort}${link.path}`,
+    );
 } catch (error) {
   fail('seed', `seeding failed: ${error instanceof Error ? error.message : String(error)}`);
 } finally {

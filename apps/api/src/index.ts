@@ -13,6 +13,9 @@
  *   plan pieces (modules/areas/job-takeoff.service.ts), for tests and scripts
  * - `renderEstimatePdf(input, pool?)` → the estimate document's PDF, rendered in a worker
  *   thread (modules/estimate-document); `sampleEstimateDocumentInput()` is invented demo input
+ * - `findInvoiceByToken(token)`, `recordProcessorPayment(input, tx)` → the invoice a pay link
+ *   names, and a card payment recorded once per payment intent (modules/invoices)
+ * - `inTransaction(sequelize, work)` → one transaction, retried on a deadlock
  */
 export { createApp } from './app.js';
 export type { AppDeps } from './app.js';
@@ -20,13 +23,16 @@ export { loadEnv } from './config/env.js';
 export { PlannerPool } from './planner/planner-pool.js';
 export type { PlannerPoolConfig } from './planner/planner-pool.js';
 export type { Env } from './config/env.js';
-export { createSequelize } from './db/sequelize.js';
+export { createSequelize, inTransaction } from './db/sequelize.js';
 export { migrateDatabase } from './db/migrate.js';
 export { seedDemoData, demoPassword, demoUsers } from './seed/demo-data.js';
 export { demoAreas } from './seed/demo-areas.js';
 export { demoReservedJobTitles } from './seed/demo-stock.js';
 export type { SeedResult } from './seed/demo-data.js';
 export { startServer } from './server.js';
+export { createMailer } from './mail/mailer.js';
+export { createReminderWorker } from './modules/reminders/reminder-worker.js';
+export type { ReminderWorker, PassResult } from './modules/reminders/reminder-worker.js';
 export type { RunningServer, StartServerOptions } from './server.js';
 export type { RouteEntry } from './http/route-table.js';
 export { csrfHeaderName } from './http/csrf.js';
@@ -69,3 +75,9 @@ export type {
   RefundRef,
 } from './modules/processor/index.js';
 export type { ProcessorConfig } from './config/env.js';
+export {
+  findInvoiceByToken,
+  recordProcessorPayment,
+  renderInvoicePdfFor,
+} from './modules/invoices/index.js';
+export type { InvoiceByToken, ProcessorPaymentInput } from './modules/invoices/index.js';

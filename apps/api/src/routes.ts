@@ -18,6 +18,7 @@ import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
 import { registerPriceBookRoutes } from './modules/price-book/price-book.routes.js';
+import { registerRemindersRoutes } from './modules/reminders/reminders.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
 import { registerStockRoutes } from './modules/stock/stock.routes.js';
 
@@ -44,4 +45,5 @@ export function registerApiRoutes(
   registerEstimatingSettingsRoutes(routes, deps);
   registerEstimatesRoutes(routes, deps);
   registerInvoicesRoutes(routes, deps);
+  registerRemindersRoutes(routes, deps);
 }

@@ -12,6 +12,7 @@ import { createLogger } from './http/logging.js';
 import { answerMalformedRequests } from './http/malformed-requests.js';
 import { createSessionStore } from './http/session.js';
 import { createMailer } from './mail/mailer.js';
+import { createReminderWorker } from './modules/reminders/reminder-worker.js';
 import { PlannerPool } from './planner/planner-pool.js';
 
 export interface RunningServer {
@@ -47,6 +48,15 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
     const s = app.listen(env.port, '127.0.0.1', () => resolve(s));
   });
   answerMalformedRequests(server);
+  // Payment reminders run in every API process; the row locks keep them apart (reminder-worker.ts).
+  const fixedClock = env.reminders.fixedClock;
+  const reminderWorker = env.reminders.worker
+    ? createReminderWorker(
+        { env, sequelize, mailer, logger },
+        fixedClock ? { now: () => fixedClock } : {},
+      )
+    : null;
+  reminderWorker?.start();
   const url = `http://127.0.0.1:${env.port}`;
   logger.info({ url }, 'Seamwright API listening');
 
@@ -54,6 +64,7 @@ export async function startServer(options: StartServerOptions = {}): Promise<Run
   const stop = () => {
     stopping ??= (async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await reminderWorker?.stop();
       sessionStore.stopExpiringSessions();
       mailer.close();
       await plannerPool.close();

@@ -23,3 +23,4 @@ export * from './processor.js';
 export * from './refunds.js';
 export * from './underlay.js';
 export * from './access-matrix.js';
+export * from './reminders.js';

@@ -42,6 +42,7 @@ export const actions = [
   'invoices.write',
   'payments.write',
   'payments.refund',
+  'reminders.manage',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -89,6 +90,9 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   'payments.write': ['owner', 'bookkeeper'],
   // Money going back out: the owner alone.
   'payments.refund': ['owner'],
+  // Payment reminders speak to customers about money: the schedule, the wording and a reminder
+  // sent by hand are the bookkeeper's and the owner's (the log follows invoices.read).
+  'reminders.manage': ['owner', 'bookkeeper'],
 };
 
 /** Whether `role` may perform `action`. */

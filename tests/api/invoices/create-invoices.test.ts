@@ -2,6 +2,7 @@
 // the accepted total less earlier invoices, gapless numbers under concurrency, refusals.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { selectRows } from '@seamwright/api';
+import type { InvoiceSummaryView } from '@seamwright/shared';
 import { testApp } from '../../fixtures/app.js';
 import { errorPaths } from '../../fixtures/estimates.js';
 import { signUpTeam } from '../../fixtures/factories.js';
@@ -26,7 +27,7 @@ describe('POST /api/invoices', () => {
     const res = await team.bookkeeper.client
       .post('/api/invoices', { jobId: job.jobId, kind: 'deposit' })
       .expect(201);
-    const data = res.body.data;
+    const data = res.body.data as InvoiceSummaryView;
     expect(data).toMatchObject({
       status: 'draft',
       kind: 'deposit',

@@ -2,8 +2,7 @@
 // runs), ready to be invoiced.
 import type { InvoiceSummaryView, InvoiceView } from '@seamwright/shared';
 import type { Client } from '../../fixtures/client.js';
-import { waitForMail } from '../../fixtures/mail.js';
-import { testAppUrl } from '../../fixtures/test-env.js';
+import { testAppUrl, testMail } from '../../fixtures/test-env.js';
 import { pricedJob } from '../estimate-sending/sending-fixtures.js';
 import type { PricedJob } from '../estimate-sending/sending-fixtures.js';
 
@@ -45,8 +44,31 @@ export async function getInvoice(client: Client, id: string): Promise<InvoiceVie
 export async function sentDeposit(client: Client, job: AcceptedJob) {
   const invoice = await createInvoice(client, { jobId: job.jobId, kind: 'deposit' });
   await client.post(`/api/invoices/${invoice.id}/send`, {}).expect(200);
-  const mail = await waitForMail(job.customerEmail);
+  const mail = await waitForInvoiceMail(job.customerEmail, invoice.reference);
   return { invoice, token: payToken(mail) };
+}
+
+export interface InvoiceMail {
+  subject: string;
+  text?: string;
+  html?: string;
+  to: { address: string }[];
+  attachments?: { fileName?: string; contentType: string }[];
+}
+
+/** Waits (up to 5 s) for the newest e-mail to `address` about invoice `reference`. */
+export async function waitForInvoiceMail(address: string, reference: string) {
+  const deadline = Date.now() + 5000;
+  while (Date.now() < deadline) {
+    const res = await fetch(`${testMail.webUrl}/api/email`);
+    const match = ((await res.json()) as InvoiceMail[])
+      .filter((m) => m.to.some((t) => t.address.toLowerCase() === address.toLowerCase()))
+      .filter((m) => m.subject.includes(`Invoice ${reference}`))
+      .at(-1);
+    if (match) return match;
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+  throw new Error(`no e-mail about ${reference} to ${address} arrived`);
 }
 
 /** The token of the pay link (`${APP_URL}/i/<token>`) in a message. */

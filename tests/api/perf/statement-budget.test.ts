@@ -80,6 +80,27 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 8,
     urls: (ids) => [`/api/estimates/${ids.estimateId}/pdf`],
   },
+  // The company (its time zone decides which invoices are overdue), then the page with its
+  // customers' names and the total in one SELECT.
+  '/api/invoices': {
+    budget: 3,
+    urls: (ids) => [
+      '/api/invoices',
+      `/api/invoices?status=overdue,sent&customerId=${ids.customerId}`,
+    ],
+  },
+  // The invoice with its customer, the company, lines, payments, credit notes and links in
+  // parallel, then the job's title (not tuned yet).
+  '/api/invoices/:id': { budget: 8, urls: (ids) => [`/api/invoices/${ids.invoiceId}`] },
+  // The invoice read whole (as above), then the company, customer, job and site for the
+  // document (not tuned yet).
+  '/api/invoices/:id/pdf': { budget: 12, urls: (ids) => [`/api/invoices/${ids.invoiceId}/pdf`] },
+  '/api/settings/reminders': { budget: 2, urls: () => ['/api/settings/reminders'] },
+  // The invoice (another company's is a 404) and its reminder log, read in parallel.
+  '/api/invoices/:id/reminders': {
+    budget: 3,
+    urls: (ids) => [`/api/invoices/${ids.invoiceId}/reminders`],
+  },
 };
 
 interface Ids {
@@ -89,6 +110,7 @@ interface Ids {
   areaId: string;
   rollId: string;
   estimateId: string;
+  invoiceId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -128,7 +150,23 @@ describe('statement budget of signed-in requests', () => {
       .expect(201);
     const estimate = await owner.post(`/api/jobs/${jobId}/estimates`, {}).expect(201);
     const estimateId = (estimate.body as { data: { id: string } }).data.id;
-    ids = { customerId: customer.id, siteId: site.id, jobId, areaId: area.id, rollId, estimateId };
+    const invoice = await owner
+      .post('/api/invoices', {
+        jobId,
+        kind: 'progress',
+        lines: [{ label: 'Base preparation', quantity: 1, unitPriceCents: 50_000 }],
+      })
+      .expect(201);
+    const invoiceId = (invoice.body as { data: { id: string } }).data.id;
+    ids = {
+      customerId: customer.id,
+      siteId: site.id,
+      jobId,
+      areaId: area.id,
+      rollId,
+      estimateId,
+      invoiceId,
+    };
   });
 
   it('has a budget for every signed-in GET route, no larger than the default without a reason', () => {
@@ -151,6 +189,10 @@ describe('statement budget of signed-in requests', () => {
       '/api/jobs/:id/locate-tickets',
       '/api/jobs/:id/estimates',
       '/api/estimates/:id/pdf',
+      '/api/invoices',
+      '/api/invoices/:id',
+      '/api/invoices/:id/pdf',
+      '/api/invoices/:id/reminders',
     ]);
   });
 

@@ -187,4 +187,95 @@ describe('permissions per role', () => {
     );
     expect(rows).toEqual([{ kind: 'accepted', place: 'office' }]);
   });
+  it('invoices: owner and bookkeeper bill and record payments, office reads, crew leads nothing', async () => {
+    const { sequelize } = testApp();
+    expect(permissionTable['invoices.read']).toEqual(['owner', 'bookkeeper', 'office']);
+    expect(permissionTable['invoices.write']).toEqual(['owner', 'bookkeeper']);
+    expect(permissionTable['payments.write']).toEqual(['owner', 'bookkeeper']);
+    expect(permissionTable['payments.refund']).toEqual(['owner']);
+    const jobId = (await createJob(owner.client, customerId, siteId)).id;
+    const body = {
+      jobId,
+      kind: 'progress',
+      lines: [{ label: 'Base', quantity: 1, unitPriceCents: 10_000 }],
+    };
+    for (const who of [office, crew]) {
+      const res = await who.client.post('/api/invoices', body);
+      expect(res.status).toBe(403);
+      expect(res.body.code).toBe('FORBIDDEN');
+    }
+    const made = await bookkeeper.client.post('/api/invoices', body).expect(201);
+    const invoiceId = (made.body as { data: { id: string } }).data.id;
+    // Reads: owner, bookkeeper and office; crew leads 403 on every invoice route.
+    for (const who of [owner, bookkeeper, office]) {
+      await who.client.get('/api/invoices').expect(200);
+      await who.client.get(`/api/invoices/${invoiceId}`).expect(200);
+    }
+    const payment = { amountCents: 100, method: 'cash', receivedOn: '2026-01-05' };
+    for (const res of [
+      await crew.client.get('/api/invoices'),
+      await crew.client.get(`/api/invoices/${invoiceId}`),
+      await crew.client.get(`/api/invoices/${invoiceId}/pdf`),
+      await crew.client.post(`/api/invoices/${invoiceId}/send`, {}),
+      await crew.client.post(`/api/invoices/${invoiceId}/payments`, payment),
+      await crew.client.post(`/api/invoices/${invoiceId}/void`, { reason: 'x' }),
+      await crew.client.post(`/api/invoices/${invoiceId}/credit-notes`, {
+        amountCents: 1,
+        reason: 'x',
+      }),
+      await office.client.post(`/api/invoices/${invoiceId}/send`, {}),
+      await office.client.post(`/api/invoices/${invoiceId}/payments`, payment),
+      await office.client.post(`/api/invoices/${invoiceId}/void`, { reason: 'x' }),
+      await office.client.post(`/api/invoices/${invoiceId}/credit-notes`, {
+        amountCents: 1,
+        reason: 'x',
+      }),
+    ]) {
+      expect(res.status).toBe(403);
+      expect(res.body.code).toBe('FORBIDDEN');
+    }
+    await owner.client.post(`/api/invoices/${invoiceId}/send`, {}).expect(200);
+    await bookkeeper.client.post(`/api/invoices/${invoiceId}/payments`, payment).expect(201);
+    const rows = await selectRows<{ status: string; paid_cents: unknown }>(
+      sequelize,
+      'SELECT status, paid_cents FROM invoices WHERE id = ?',
+      [invoiceId],
+    );
+    expect(rows.map((r) => [r.status, Number(r.paid_cents)])).toEqual([['partly_paid', 100]]);
+  });
+
+  it('payment reminders: owners and bookkeepers manage them, office reads the log, crew leads nothing', async () => {
+    expect(permissionTable['reminders.manage']).toEqual(['owner', 'bookkeeper']);
+    const email = 'reminded@example.test';
+    const payer = await createCustomer(owner.client, { name: 'Reminded payer', email });
+    const site = await createSite(owner.client, payer.id);
+    const jobId = (await createJob(owner.client, payer.id, site.id)).id;
+    const made = await bookkeeper.client
+      .post('/api/invoices', {
+        jobId,
+        kind: 'progress',
+        lines: [{ label: 'Work', quantity: 1, unitPriceCents: 5_000 }],
+      })
+      .expect(201);
+    const invoiceId = (made.body as { data: { id: string } }).data.id;
+    await bookkeeper.client.post(`/api/invoices/${invoiceId}/send`, {}).expect(200);
+    const settings = { enabled: true, offsets: [-3, 0, 7, 14, 30] };
+    for (const who of [office, crew]) {
+      for (const res of [
+        await who.client.get('/api/settings/reminders'),
+        await who.client.put('/api/settings/reminders', settings),
+        await who.client.post(`/api/invoices/${invoiceId}/reminders`, {}),
+      ]) {
+        expect(res.status).toBe(403);
+        expect(res.body.code).toBe('FORBIDDEN');
+      }
+    }
+    expect((await crew.client.get(`/api/invoices/${invoiceId}/reminders`)).status).toBe(403);
+    await office.client.get(`/api/invoices/${invoiceId}/reminders`).expect(200);
+    for (const who of [owner, bookkeeper]) {
+      await who.client.get('/api/settings/reminders').expect(200);
+      await who.client.put('/api/settings/reminders', settings).expect(200);
+      await who.client.post(`/api/invoices/${invoiceId}/reminders`, {}).expect(201);
+    }
+  });
 });

@@ -79,10 +79,27 @@ describe('demo seed', () => {
       [company?.id],
     );
     expect(accepted?.status).toBe('accepted');
+    // Invoices on the accepted job: the deposit sent, one partly paid by cheque, one overdue.
+    const invoices = await selectRows<{ kind: string; status: string; due: string }>(
+      sequelize,
+      `SELECT kind, status, CAST(due_date < CURRENT_DATE AS CHAR) AS due FROM invoices
+        WHERE company_id = ? ORDER BY number`,
+      [company?.id],
+    );
+    expect(invoices.map((i) => [i.kind, i.status, i.due])).toEqual([
+      ['deposit', 'sent', '0'],
+      ['progress', 'partly_paid', '0'],
+      ['progress', 'sent', '1'],
+    ]);
+    expect(first.payLinks).toEqual([
+      { jobTitle: 'Front courtyard lawn', path: expect.stringMatching(/^\/i\/[\w-]{40,}$/) },
+    ]);
 
     const again = await seedDemoData(sequelize, { bcryptCost: 4 }, plannerPool);
     expect(again.created).toBe(false);
     expect(again.customerLinks).toEqual([]);
+    expect(again.payLinks).toEqual([]);
+    expect(Number(await count('invoices', company?.id))).toBe(3);
     // A rerun adds nothing.
     expect(Number(await count('turf_reservations', company?.id))).toBe(held.length);
   });

@@ -35,6 +35,7 @@ interface World {
   aRollId: string;
   aLocateTicketId: string;
   aEstimateId: string;
+  aInvoiceId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -590,7 +591,96 @@ const probes: Record<string, Probe> = {
       expect(a.body.data.markupBasisPoints).toBe(1234);
     },
   },
+  'get /api/invoices': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const all = await b.get('/api/invoices').expect(200);
+      expect(idsOf(all.body)).not.toContain(w.aInvoiceId);
+      const byCustomer = await b.get(`/api/invoices?customerId=${w.aCustomerId}`).expect(200);
+      expect(idsOf(byCustomer.body)).toEqual([]);
+    },
+  },
+  'post /api/invoices': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post('/api/invoices', {
+          jobId: w.aJobId,
+          kind: 'progress',
+          lines: [{ label: 'Hijack', quantity: 1, unitPriceCents: 100 }],
+        }),
+      ),
+  },
+  'get /api/invoices/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/invoices/${w.aInvoiceId}`)),
+  },
+  'get /api/invoices/:id/pdf': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/invoices/${w.aInvoiceId}/pdf`)),
+  },
+  'post /api/invoices/:id/send': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.post(`/api/invoices/${w.aInvoiceId}/send`, { to: 'thief@example.test' })),
+  },
+  'post /api/invoices/:id/payments': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/invoices/${w.aInvoiceId}/payments`, {
+          amountCents: 100,
+          method: 'cash',
+          receivedOn: '2026-01-05',
+        }),
+      ),
+  },
+  'post /api/invoices/:id/void': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.post(`/api/invoices/${w.aInvoiceId}/void`, { reason: 'Hijack' })),
+  },
+  'post /api/invoices/:id/credit-notes': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/invoices/${w.aInvoiceId}/credit-notes`, { amountCents: 1, reason: 'Hijack' }),
+      ),
+  },
+  // The e-mailed token is the credential and names one invoice of one company; the token
+  // tests (tests/api/invoices/send-and-public.test.ts) prove tampered ones are 404.
+  'get /api/public/invoices/:token': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential',
+  },
 };
+
+// Payment reminders (modules/reminders): A's settings, log and schedule stay A's.
+Object.assign(probes, {
+  'get /api/settings/reminders': {
+    kind: 'tenant',
+    run: async (b: Client) => {
+      const res = await b.get('/api/settings/reminders').expect(200);
+      expect(res.body.data.senderName).toBeNull();
+      expect(JSON.stringify(res.body)).not.toContain('Alpha Accounts');
+    },
+  },
+  'put /api/settings/reminders': {
+    kind: 'tenant',
+    run: async (b: Client) => {
+      await b
+        .put('/api/settings/reminders', { enabled: false, offsets: [1], senderName: 'Bravo' })
+        .expect(200);
+    },
+  },
+  'get /api/invoices/:id/reminders': {
+    kind: 'tenant',
+    run: (b: Client, w: World) => notFound(b.get(`/api/invoices/${w.aInvoiceId}/reminders`)),
+  },
+  'post /api/invoices/:id/reminders': {
+    kind: 'tenant',
+    run: (b: Client, w: World) => notFound(b.post(`/api/invoices/${w.aInvoiceId}/reminders`, {})),
+  },
+} satisfies Record<string, Probe>);
 
 async function snapshotOfA(w: World) {
   const { sequelize } = testApp();
@@ -632,8 +722,21 @@ async function snapshotOfA(w: World) {
       'SELECT id, revoked_at FROM estimate_links WHERE company_id = ? ORDER BY id',
     ),
     estimateAnswers: await q('SELECT id FROM estimate_answers WHERE company_id = ? ORDER BY id'),
+    invoices: await q(
+      'SELECT id, number, status, paid_cents, credited_cents, voided_at, updated_at FROM invoices WHERE company_id = ? ORDER BY id',
+    ),
+    invoiceLinks: await q('SELECT id FROM invoice_links WHERE company_id = ? ORDER BY id'),
+    payments: await q('SELECT id FROM payments WHERE company_id = ? ORDER BY id'),
+    creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
+    ),
+    reminderSettings: await q(
+      'SELECT enabled, offsets, sender_name, templates, updated_at FROM reminder_settings WHERE company_id = ?',
+    ),
+    invoiceReminders: await q('SELECT id FROM invoice_reminders WHERE company_id = ? ORDER BY id'),
+    invoiceSchedule: await q(
+      'SELECT id, next_reminder_on FROM invoices WHERE company_id = ? ORDER BY id',
     ),
   };
 }
@@ -683,6 +786,21 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
+    const aInvoice = await a.client
+      .post('/api/invoices', {
+        jobId: aJob.id,
+        kind: 'progress',
+        lines: [{ label: 'Alpha work', quantity: 1, unitPriceCents: 10_000 }],
+      })
+      .expect(201);
+    await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
+    await a.client
+      .put('/api/settings/reminders', {
+        enabled: true,
+        offsets: [-3, 0, 7],
+        senderName: 'Alpha Accounts',
+      })
+      .expect(200);
     world = {
       a,
       b,
@@ -700,6 +818,7 @@ describe('tenant isolation', () => {
       aRollId: (aRolls.body as { data: { id: string }[] }).data[0]!.id,
       aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
       aEstimateId: aEstimate.body.data.id,
+      aInvoiceId: aInvoice.body.data.id,
     };
   });
 
@@ -738,6 +857,7 @@ describe('tenant isolation', () => {
     await world.a.client.get(`/api/areas/${world.aAreaId}`).expect(200);
     await world.a.client.get(`/api/areas/${world.aAreaId}/underlay`).expect(200);
     await world.a.client.get(`/api/estimates/${world.aEstimateId}`).expect(200);
+    await world.a.client.get(`/api/invoices/${world.aInvoiceId}`).expect(200);
   });
 
   it("ignores a companyId sent in the body: rows land in the caller's own company", async () => {

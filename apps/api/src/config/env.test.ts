@@ -148,3 +148,38 @@ describe('loadEnv processor settings', () => {
     );
   });
 });
+
+describe('loadEnv reminder worker settings', () => {
+  it('runs the worker by default every minute, 20 invoices a pass, on the real clock', () => {
+    expect(loadEnv({}).reminders).toEqual({
+      worker: true,
+      intervalMs: 60_000,
+      batchSize: 20,
+      fixedClock: null,
+    });
+  });
+
+  it('reads the switch, interval, batch size and a test clock given as a day or an instant', () => {
+    const env = loadEnv({
+      REMINDER_WORKER: 'false',
+      REMINDER_INTERVAL_MS: '250',
+      REMINDER_BATCH_SIZE: '3',
+      SW_REMINDER_CLOCK: '2027-01-01',
+    });
+    expect(env.reminders).toEqual({
+      worker: false,
+      intervalMs: 250,
+      batchSize: 3,
+      fixedClock: new Date('2027-01-01T00:00:00Z'),
+    });
+    const instant = loadEnv({ SW_REMINDER_CLOCK: '2027-01-01T19:00:00Z' }).reminders.fixedClock;
+    expect(instant?.toISOString()).toBe('2027-01-01T19:00:00.000Z');
+  });
+
+  it('refuses a frozen clock in production and a date that is not one', () => {
+    expect(() => loadEnv({ ...production, SW_REMINDER_CLOCK: '2027-01-01' })).toThrow(
+      /SW_REMINDER_CLOCK/,
+    );
+    expect(() => loadEnv({ SW_REMINDER_CLOCK: 'tomorrow' })).toThrow(/SW_REMINDER_CLOCK/);
+  });
+});

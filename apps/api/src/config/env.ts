@@ -94,6 +94,17 @@ const envSchema = z
     PROCESSOR_WEBHOOK_TOLERANCE_S: z.coerce.number().int().min(1).max(3600).default(300),
     /** Folder of the local-disk upload storage (required in production). */
     UPLOADS_DIR: z.string().min(1).optional(),
+    /** The payment-reminder worker in this API process (on unless switched off). */
+    REMINDER_WORKER: booleanish.default(true),
+    /** Pause between the worker's passes. */
+    REMINDER_INTERVAL_MS: z.coerce.number().int().min(50).max(86_400_000).default(60_000),
+    /** Invoices one worker transaction claims at most. */
+    REMINDER_BATCH_SIZE: z.coerce.number().int().min(1).max(500).default(20),
+    /**
+     * Tests only: the worker's clock, fixed at this instant (`2027-01-01` or a full ISO time),
+     * so a test can run reminders weeks ahead. Refused in production.
+     */
+    SW_REMINDER_CLOCK: z.iso.datetime({ offset: true }).or(z.iso.date()).optional(),
   })
   .superRefine((value, ctx) => {
     if (value.NODE_ENV !== 'production') return;
@@ -133,6 +144,12 @@ const envSchema = z
           "PROCESSOR_WEBHOOK_SECRET must be your own secret in production, not the local fake's",
       });
     if (!value.UPLOADS_DIR) missing('UPLOADS_DIR', 'where uploaded photos and sketches are kept');
+    if (value.SW_REMINDER_CLOCK)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SW_REMINDER_CLOCK'],
+        message: 'SW_REMINDER_CLOCK is for tests and cannot be set in production',
+      });
     if (value.COOKIE_SECURE === false)
       ctx.addIssue({
         code: 'custom',
@@ -164,6 +181,8 @@ export interface Env {
   processor: ProcessorConfig;
   /** Absolute folder of the local-disk upload storage. */
   uploadsDir: string;
+  /** The payment-reminder worker; `fixedClock` is a test's frozen "now". */
+  reminders: { worker: boolean; intervalMs: number; batchSize: number; fixedClock: Date | null };
 }
 
 /** How the API reaches the payment processor (modules/processor builds the SDK client from it). */
@@ -330,5 +349,11 @@ export function loadEnv(source: Record<string, string | undefined> = process.env
       webhookToleranceSeconds: e.PROCESSOR_WEBHOOK_TOLERANCE_S,
     },
     uploadsDir: uploadsDirFor(e.UPLOADS_DIR, e.NODE_ENV),
+    reminders: {
+      worker: e.REMINDER_WORKER,
+      intervalMs: e.REMINDER_INTERVAL_MS,
+      batchSize: e.REMINDER_BATCH_SIZE,
+      fixedClock: e.SW_REMINDER_CLOCK ? new Date(e.SW_REMINDER_CLOCK) : null,
+    },
   };
 }

@@ -8,6 +8,15 @@ export interface OutgoingMail {
   text: string;
   html: string;
   attachments?: { filename: string; content: Buffer; contentType: string }[];
+  /** A Message-ID of our own (angle brackets included), so a resent message is recognisable. */
+  messageId?: string;
+  /** The From display name (the address stays MAIL_FROM's). */
+  fromName?: string;
+}
+
+/** The bare address of a `Name <address>` or plain address. */
+function addressOf(from: string): string {
+  return /<([^>]+)>/.exec(from)?.[1] ?? from.trim();
 }
 
 export interface Mailer {
@@ -23,8 +32,9 @@ export function createMailer(smtp: Env['smtp']): Mailer {
     ignoreTLS: true,
   });
   return {
-    async send(mail) {
-      await transport.sendMail({ from: smtp.from, ...mail });
+    async send({ fromName, ...mail }) {
+      const from = fromName ? { name: fromName, address: addressOf(smtp.from) } : smtp.from;
+      await transport.sendMail({ from, ...mail });
     },
     close() {
       transport.close();

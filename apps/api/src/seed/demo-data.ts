@@ -27,6 +27,7 @@ import { hashPassword } from '../passwords.js';
 import { demoAreas } from './demo-areas.js';
 import { demoCustomers, demoTown } from './demo-customers.js';
 import { demoJobs } from './demo-jobs.js';
+import { seedDemoInvoices } from './demo-invoices.js';
 import { seedDemoEstimates } from './demo-estimates.js';
 import type { DemoCustomerLink } from './demo-estimates.js';
 import { seedDemoStock } from './demo-stock-seed.js';
@@ -55,6 +56,8 @@ export interface SeedResult {
   password: string;
   /** Customer pages of demo estimates sent on this run (the token exists only here). */
   customerLinks: DemoCustomerLink[];
+  /** The pay page of the demo deposit invoice sent on this run (the token exists only here). */
+  payLinks: DemoCustomerLink[];
 }
 
 /**
@@ -79,7 +82,8 @@ export async function seedDemoData(
   // demo that an older version of this seed made).
   await seedDemoStock(owner, { sequelize, plannerPool });
   const customerLinks = await seedDemoEstimates(owner, { sequelize });
-  return { created: !existing, ...result, customerLinks };
+  const payLinks = await seedDemoInvoices(owner, { sequelize });
+  return { created: !existing, ...result, customerLinks, payLinks };
 }
 
 /** The demo owner's context, to act as them on an existing demo company. */

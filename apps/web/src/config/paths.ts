@@ -22,6 +22,8 @@ export const paths = {
   area: (id: string) => `/areas/${encodeURIComponent(id)}`,
   editArea: (id: string) => `/areas/${encodeURIComponent(id)}/edit`,
   estimate: (id: string) => `/estimates/${encodeURIComponent(id)}`,
+  invoices: '/invoices',
+  invoice: (id: string) => `/invoices/${encodeURIComponent(id)}`,
   layout: '/layout',
   stock: '/stock',
   receiveStock: '/stock/receive',

@@ -10,12 +10,29 @@ export type {
 } from './aging.js';
 export {
   defaultReminderOffsets,
+  describeReminderOffset,
   dueReminderStep,
+  nextReminderOn,
+  reminderKindOf,
   maxReminderOffsetDays,
   reminderScheduleProblem,
   reminderSteps,
   remindableInvoiceStatuses,
 } from './reminder-schedule.js';
-export type { ReminderStep } from './reminder-schedule.js';
+export type { ReminderKind, ReminderStep } from './reminder-schedule.js';
+export {
+  defaultReminderTemplates,
+  reminderPlaceholders,
+  reminderTemplateKinds,
+  reminderTemplateProblem,
+  renderReminderTemplate,
+  unknownPlaceholders,
+} from './reminder-templates.js';
+export type {
+  ReminderPlaceholder,
+  ReminderTemplate,
+  ReminderTemplates,
+  ReminderValues,
+} from './reminder-templates.js';
 export { waterSavedPerYear, waterSavingsRuleFor, waterSavingsRules } from './water-savings.js';
 export type { WaterSaved, WaterSavingsRule } from './water-savings.js';

@@ -65,3 +65,41 @@ export function reminderScheduleProblem(offsets: readonly number[]): string | nu
   if (new Set(offsets).size !== offsets.length) return 'Each step must be a different day';
   return null;
 }
+
+/**
+ * The day the worker should next look at an invoice: the earliest step after the latest one
+ * sent that does not fall before the day the invoice was sent, or null when none is left. On
+ * that day dueReminderStep picks the step to send (the latest due one, should days be missed),
+ * so the two always agree: a day returned here is a day on which a step is due.
+ */
+export function nextReminderOn(input: {
+  offsets: readonly number[];
+  dueDate: CalendarDate;
+  sentOn: CalendarDate;
+  alreadySentOffsets: readonly number[];
+}): CalendarDate | null {
+  const latestSent =
+    input.alreadySentOffsets.length > 0 ? Math.max(...input.alreadySentOffsets) : null;
+  const next = reminderSteps(input.offsets, input.dueDate).find(
+    (step) =>
+      calendarDaysBetween(input.sentOn, step.dueOn) >= 0 &&
+      (latestSent === null || step.offsetDays > latestSent),
+  );
+  return next?.dueOn ?? null;
+}
+
+/** The kind of message a step sends, which picks its template. */
+export type ReminderKind = 'before_due' | 'due_day' | 'overdue';
+
+export function reminderKindOf(offsetDays: number): ReminderKind {
+  if (offsetDays < 0) return 'before_due';
+  return offsetDays === 0 ? 'due_day' : 'overdue';
+}
+
+/** Words for a step, for lists and logs: "3 days before due", "on the due day", "7 days late". */
+export function describeReminderOffset(offsetDays: number): string {
+  if (offsetDays === 0) return 'on the due day';
+  const days = Math.abs(offsetDays);
+  const unit = days === 1 ? 'day' : 'days';
+  return offsetDays < 0 ? `${days} ${unit} before due` : `${days} ${unit} overdue`;
+}

@@ -14,8 +14,9 @@ import { rollStock } from './0013-roll-stock.js';
 import { invoices } from './0014-invoices.js';
 import { processorEvents } from './0015-processor-events.js';
 import { customerSearchWordsMigration } from './0018-customer-search-words.js';
-import { refunds } from './0021-refunds.js';
 import { uploads } from './0017-uploads.js';
+import { reminders } from './0019-reminders.js';
+import { refunds } from './0021-refunds.js';
 import type { Migration } from './types.js';
 
 export const migrations: Migration[] = [
@@ -33,6 +34,7 @@ export const migrations: Migration[] = [
   invoices,
   processorEvents,
   customerSearchWordsMigration,
-  refunds,
   uploads,
+  reminders,
+  refunds,
 ];

@@ -27,6 +27,8 @@ import { PaymentModel } from './payment.model.js';
 import { RefundModel } from './refund.model.js';
 import { CreditNoteModel } from './credit-note.model.js';
 import { InvoiceLinkModel } from './invoice-link.model.js';
+import { InvoiceReminderModel } from './invoice-reminder.model.js';
+import { ReminderSettingsModel } from './reminder-settings.model.js';
 import { guardTenantModels } from '../tenant-guard.js';
 // JSON so that eslint.config.js (plain JS) reads the same list for the tenant-scope rule.
 import tenantModelList from './tenant-models.json';
@@ -37,8 +39,10 @@ export {
   InvoiceLineModel,
   InvoiceLinkModel,
   InvoiceModel,
+  InvoiceReminderModel,
   PaymentModel,
   RefundModel,
+  ReminderSettingsModel,
   CompanyModel,
   CustomerModel,
   EstimateAnswerModel,
@@ -89,6 +93,8 @@ const allModels = [
   InvoiceLinkModel,
   RefundModel,
   UploadModel,
+  ReminderSettingsModel,
+  InvoiceReminderModel,
 ] as const;
 
 /**

@@ -33,6 +33,8 @@ export class InvoiceModel extends Model<
   declare sentAt: Date | null;
   declare voidedAt: Date | null;
   declare voidReason: string | null;
+  /** The day the reminder worker next looks at it (migration 0019); null: nothing scheduled. */
+  declare nextReminderOn?: string | null;
   declare createdBy: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -62,6 +64,7 @@ export class InvoiceModel extends Model<
         sentAt: { type: DataTypes.DATE(3), allowNull: true },
         voidedAt: { type: DataTypes.DATE(3), allowNull: true },
         voidReason: { type: DataTypes.STRING(500), allowNull: true },
+        nextReminderOn: { type: DataTypes.DATEONLY, allowNull: true },
         createdBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),

@@ -11,6 +11,7 @@ import type { Tx } from '../../db/sequelize.js';
 import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findOwnCompany } from '../company/company.repository.js';
+import { stopReminders, stopRemindersWhenSettled } from '../reminders/reminder-hooks.js';
 import { moveJobForInvoice } from './invoice-job-moves.js';
 import {
   createCreditNote,
@@ -64,6 +65,7 @@ async function settle(
     { paidCents: money.paidCents, creditedCents: money.creditedCents, status },
     tx,
   );
+  await stopRemindersWhenSettled(ctx, invoice.id, status, tx);
   if (status === 'paid' && invoice.kind === 'final')
     await moveJobForInvoice(ctx, invoice.jobId, 'paid', { invoiceId: invoice.id, userId }, tx);
   return status;
@@ -262,6 +264,7 @@ export async function voidInvoice(
       );
     const now = new Date();
     await updateInvoice(ctx, invoiceId, { status: 'void', voidedAt: now, voidReason: reason }, tx);
+    await stopReminders(ctx, invoiceId, tx);
     const revoked = await revokeInvoiceLinks(ctx, invoiceId, now, tx);
     await recordAuditEvent(
       ctx,

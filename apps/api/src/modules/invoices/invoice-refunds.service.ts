@@ -14,6 +14,8 @@ import { inTransaction } from '../../db/sequelize.js';
 import type { Tx } from '../../db/sequelize.js';
 import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
+import { findOwnCompany } from '../company/company.repository.js';
+import { isRemindable, scheduleRemindersOnSend, sentOnOf } from '../reminders/reminder-hooks.js';
 import { processorProblem, refundPayment } from '../processor/index.js';
 import {
   createRefund,
@@ -74,6 +76,19 @@ export async function recordRefund(
   };
   const status = settledStatus(invoice.status as StoredInvoiceStatus, money);
   await updateInvoice(ctx, invoice.id, { refundedCents: money.refundedCents, status }, tx);
+  // Money given back on a paid invoice is owed again: its reminders pick up where they were.
+  if (invoice.status === 'paid' && isRemindable(status)) {
+    const company = await findOwnCompany(ctx);
+    await scheduleRemindersOnSend(
+      ctx,
+      {
+        id: invoice.id,
+        dueDate: invoice.dueDate,
+        sentOn: sentOnOf(invoice, company?.timeZone ?? 'UTC'),
+      },
+      tx,
+    );
+  }
   await recordAuditEvent(
     ctx,
     {

@@ -15,6 +15,7 @@ import type { ServiceDeps } from '../../deps.js';
 import { AppError, notFound } from '../../errors.js';
 import { createOneTimeToken } from '../../tokens.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
+import { scheduleRemindersOnSend } from '../reminders/reminder-hooks.js';
 import { findOwnCompany } from '../company/company.repository.js';
 import { findCustomer } from '../customers/customers.repository.js';
 import { formatMoney, renderInvoicePdf } from '../estimate-document/index.js';
@@ -77,6 +78,7 @@ export function createInvoiceSendService({ sequelize, mailer, logger, env }: Ser
           { status: 'sent', sentAt: now, issuedOn: today, dueDate },
           tx,
         );
+      if (first) await scheduleRemindersOnSend(ctx, { id: invoiceId, dueDate, sentOn: today }, tx);
       const expiresAt = startOfLocalDay(
         addCalendarDays(dueDate, INVOICE_LINK_DAYS_AFTER_DUE + 1),
         company.timeZone,

@@ -25,6 +25,13 @@ import { toInvoiceSummary } from './invoice-view.js';
 import { listInvoices } from './invoices.repository.js';
 import { findInvoiceByToken, toPublicInvoiceView } from './public-invoices.service.js';
 
+/** The invoice's PDF as the customer gets it (the checkout and reminders attach it too). */
+export async function renderInvoicePdfFor(ctx: RequestContext, invoiceId: string) {
+  const doc = await getInvoiceDocument(ctx, invoiceId);
+  const pdf = await renderInvoicePdf(toInvoiceDocumentInput(doc));
+  return { pdf, filename: `invoice-${doc.invoice.reference}.pdf` };
+}
+
 export function createInvoicesService(deps: ServiceDeps) {
   const { sequelize } = deps;
   const sending = createInvoiceSendService(deps);
@@ -46,11 +53,7 @@ export function createInvoicesService(deps: ServiceDeps) {
     },
     get: getInvoiceView,
     send: sending.send,
-    async pdf(ctx: RequestContext, id: string) {
-      const doc = await getInvoiceDocument(ctx, id);
-      const pdf = await renderInvoicePdf(toInvoiceDocumentInput(doc));
-      return { pdf, filename: `invoice-${doc.invoice.reference}.pdf` };
-    },
+    pdf: renderInvoicePdfFor,
     async recordPayment(ctx: RequestContext, id: string, input: RecordPaymentData) {
       await recordManualPayment(ctx, sequelize, id, input);
       return getInvoiceView(ctx, id);

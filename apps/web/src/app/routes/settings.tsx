@@ -10,6 +10,8 @@ import { CompanyForm } from '../../features/company-settings/components/company-
 import { estimatingSettingsQueryOptions } from '../../features/estimating/api/estimating-settings';
 import { EstimatingSettingsPanel } from '../../features/estimating/components/estimating-settings-panel';
 import { PriceBookPanel } from '../../features/estimating/components/price-book-panel';
+import { reminderSettingsQueryOptions } from '../../features/reminders/api/reminder-settings';
+import { ReminderSettingsPanel } from '../../features/reminders/components/reminder-settings-panel';
 import { meQueryOptions } from '../../features/session/api/get-me';
 import { MyProfile } from '../../features/session/components/my-profile';
 import { invitationsQueryOptions } from '../../features/team/api/get-invitations';
@@ -30,6 +32,8 @@ export async function loader() {
   }
   if (await sessionCan('pricebook.read'))
     void queryClient.prefetchQuery(estimatingSettingsQueryOptions());
+  if (await sessionCan('reminders.manage'))
+    void queryClient.prefetchQuery(reminderSettingsQueryOptions());
   return null;
 }
 
@@ -54,6 +58,7 @@ export function Component() {
   const canReadPrices = useCan('pricebook.read');
   const canWritePrices = useCan('pricebook.write');
   const canManageEstimating = useCan('estimating.manage');
+  const canManageReminders = useCan('reminders.manage');
   return (
     <div className="flex max-w-4xl flex-col gap-10">
       <PageHeader
@@ -85,6 +90,11 @@ export function Component() {
             <PriceBookPanel currency={company.currency} canWrite={canWritePrices} />
           </Section>
         </>
+      ) : null}
+      {canManageReminders ? (
+        <Section id="reminders" title="Payment reminders">
+          <ReminderSettingsPanel companyName={company.name} />
+        </Section>
       ) : null}
       {canManageTeam ? (
         <>

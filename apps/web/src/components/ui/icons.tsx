@@ -39,6 +39,16 @@ export function JobsIcon({ className = 'h-6 w-6' }: { className?: string }) {
 }
 
 /** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
+/** A sheet with a few lines and a total: an invoice. */
+export function InvoicesIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <path d="M6 3h9l3 3v15l-2-1.2-2 1.2-2-1.2-2 1.2-2-1.2L6 21z" />
+      <path d="M9 9h6M9 12.5h6M12 16h3" />
+    </svg>
+  );
+}
+
 export function StockIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
     <svg {...base} className={className}>

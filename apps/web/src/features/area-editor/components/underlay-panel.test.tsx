@@ -47,7 +47,7 @@ describe('the underlay panel', () => {
 
   it('picks both scale points from the keyboard: Enter at the cross, Alt+arrows to move it', () => {
     const panel = renderEditor(sketch);
-    fireEvent.click(screen.getByRole('button', { name: 'Rectangle' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Start from a rectangle' }));
     expect(screen.getByTestId('underlay-image')).toBeTruthy();
     fireEvent.click(within(panel).getByRole('button', { name: 'Set scale: pick two points' }));
     const drawing = screen.getByRole('application');

@@ -32,4 +32,11 @@ describe('sections', () => {
       'Settings',
     ]);
   });
+
+  it('gives owners, bookkeepers and the office Invoices, and the bookkeeper’s phone bar too', () => {
+    for (const role of ['owner', 'office', 'bookkeeper'] as const)
+      expect(labels(sectionsFor(role))).toContain('Invoices');
+    expect(labels(sectionsFor('crew_lead'))).not.toContain('Invoices');
+    expect(labels(phoneSectionsFor('bookkeeper'))).toContain('Invoices');
+  });
 });

@@ -2,6 +2,7 @@ import type { ComponentType } from 'react';
 import { can, type Action, type Role } from '@seamwright/shared';
 import {
   CustomersIcon,
+  InvoicesIcon,
   JobsIcon,
   ProfileIcon,
   SettingsIcon,
@@ -25,7 +26,7 @@ export interface Section {
   phoneNames?: Partial<Record<Role, { label: string; Icon: Icon }>>;
 }
 
-/** Only sections that exist are listed; later work adds Calendar, Inventory, Invoices, Reports. */
+/** Only sections that exist are listed; later work adds Calendar and Reports. */
 const sections: Section[] = [
   {
     to: paths.today,
@@ -47,6 +48,14 @@ const sections: Section[] = [
     Icon: JobsIcon,
     needs: 'jobs.read',
     phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
+  // Owners and bookkeepers bill here; the office reads an invoice's status for the customer.
+  {
+    to: paths.invoices,
+    label: 'Invoices',
+    Icon: InvoicesIcon,
+    needs: 'invoices.read',
+    phoneRoles: ['bookkeeper'],
   },
   // Shows no prices, so every role sees it; crew leads check cuts and seams with it on site.
   {
