@@ -174,6 +174,10 @@ export const routeCases: Record<string, RouteCase> = {
   },
   'get /api/public/invoices/:token': {},
   'post /api/public/invoices/:token/checkout': {},
+  'get /api/settings/reminders': {},
+  'put /api/settings/reminders': { body: () => ({ enabled: false, offsets: [-3, 0, 7] }) },
+  'get /api/invoices/:id/reminders': {},
+  'post /api/invoices/:id/reminders': {},
 };
 
 /** The row kind for each path parameter of `path` (`:token` → undefined: a credential). */
