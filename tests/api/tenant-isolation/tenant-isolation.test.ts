@@ -36,6 +36,7 @@ interface World {
   aLocateTicketId: string;
   aEstimateId: string;
   aInvoiceId: string;
+  aPaymentId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -652,6 +653,20 @@ const probes: Record<string, Probe> = {
     kind: 'public',
     why: 'the e-mailed token is the credential',
   },
+  'post /api/public/invoices/:token/checkout': {
+    kind: 'public',
+    why: 'the e-mailed token is the credential; it starts a checkout for its one invoice',
+  },
+  'post /api/invoices/:id/payments/:paymentId/refunds': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(
+        b.post(`/api/invoices/${w.aInvoiceId}/payments/${w.aPaymentId}/refunds`, {
+          amountCents: 100,
+          reason: 'Hijack',
+        }),
+      ),
+  },
 };
 
 // Payment reminders (modules/reminders): A's settings, log and schedule stay A's.
@@ -728,6 +743,7 @@ async function snapshotOfA(w: World) {
     invoiceLinks: await q('SELECT id FROM invoice_links WHERE company_id = ? ORDER BY id'),
     payments: await q('SELECT id FROM payments WHERE company_id = ? ORDER BY id'),
     creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
+    refunds: await q('SELECT id FROM refunds WHERE company_id = ? ORDER BY id'),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -794,6 +810,13 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
+    const aPaid = await a.client
+      .post(`/api/invoices/${aInvoice.body.data.id}/payments`, {
+        amountCents: 1_000,
+        method: 'cheque',
+        receivedOn: '2026-01-05',
+      })
+      .expect(201);
     await a.client
       .put('/api/settings/reminders', {
         enabled: true,
@@ -819,6 +842,7 @@ describe('tenant isolation', () => {
       aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
       aEstimateId: aEstimate.body.data.id,
       aInvoiceId: aInvoice.body.data.id,
+      aPaymentId: (aPaid.body as { data: { payments: { id: string }[] } }).data.payments[0]!.id,
     };
   });
 
