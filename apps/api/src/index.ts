@@ -81,3 +81,12 @@ export {
   renderInvoicePdfFor,
 } from './modules/invoices/index.js';
 export type { InvoiceByToken, ProcessorPaymentInput } from './modules/invoices/index.js';
+export { agingReport } from './modules/receivables/aging.service.js';
+export { getDashboard } from './modules/dashboard/dashboard.service.js';
+export { dashboardRange } from './modules/dashboard/dashboard-range.js';
+export { collectedByMonth, invoicedByMonth } from './modules/dashboard/dashboard-money.queries.js';
+export {
+  installedFigures,
+  pipelineByStatus,
+  winRate,
+} from './modules/dashboard/dashboard-jobs.queries.js';

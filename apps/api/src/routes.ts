@@ -6,6 +6,8 @@ import { registerAreasRoutes } from './modules/areas/areas.routes.js';
 import { registerAuditRoutes } from './modules/audit/audit.routes.js';
 import { registerAuthRoutes } from './modules/auth/auth.routes.js';
 import { registerCompanyRoutes } from './modules/company/company.routes.js';
+import { registerBookingsRoutes } from './modules/bookings/bookings.routes.js';
+import { registerCrewsRoutes } from './modules/crews/crews.routes.js';
 import { registerCustomersRoutes } from './modules/customers/customers.routes.js';
 import { registerEstimatesRoutes } from './modules/estimates/estimates.routes.js';
 import { registerEstimatingSettingsRoutes } from './modules/estimating-settings/estimating-settings.routes.js';
@@ -17,6 +19,8 @@ import { registerLocateRoutes } from './modules/locate/locate.routes.js';
 import { registerMeRoutes } from './modules/me/me.routes.js';
 import { registerMembersRoutes } from './modules/members/members.routes.js';
 import { registerPlansRoutes } from './modules/plans/plans.routes.js';
+import { registerReceivablesRoutes } from './modules/receivables/receivables.routes.js';
+import { registerDashboardRoutes } from './modules/dashboard/dashboard.routes.js';
 import { registerPriceBookRoutes } from './modules/price-book/price-book.routes.js';
 import { registerRemindersRoutes } from './modules/reminders/reminders.routes.js';
 import { registerSitesRoutes } from './modules/sites/sites.routes.js';
@@ -46,4 +50,8 @@ export function registerApiRoutes(
   registerEstimatesRoutes(routes, deps);
   registerInvoicesRoutes(routes, deps);
   registerRemindersRoutes(routes, deps);
+  registerCrewsRoutes(routes, deps);
+  registerBookingsRoutes(routes, deps);
+  registerReceivablesRoutes(routes, deps);
+  registerDashboardRoutes(routes, deps);
 }

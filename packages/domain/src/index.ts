@@ -6,3 +6,4 @@ export * from './locate/index.js';
 export * from './estimates/index.js';
 export * from './invoices/index.js';
 export * from './receivables/index.js';
+export * from './scheduling/index.js';

@@ -24,3 +24,7 @@ export * from './refunds.js';
 export * from './underlay.js';
 export * from './access-matrix.js';
 export * from './reminders.js';
+export * from './crew-colours.js';
+export * from './crews.js';
+export * from './bookings.js';
+export * from './reports.js';

@@ -43,6 +43,14 @@ export const actions = [
   'payments.write',
   'payments.refund',
   'reminders.manage',
+  'crews.read',
+  'crews.manage',
+  'bookings.read',
+  'bookings.write',
+  'receivables.read',
+  'statements.send',
+  'exports.read',
+  'dashboard.read',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -93,6 +101,19 @@ export const permissionTable: Record<Action, readonly Role[]> = {
   // Payment reminders speak to customers about money: the schedule, the wording and a reminder
   // sent by hand are the bookkeeper's and the owner's (the log follows invoices.read).
   'reminders.manage': ['owner', 'bookkeeper'],
+  // Crews carry no money: everyone sees who is on which crew.
+  'crews.read': everyone,
+  'crews.manage': ['owner', 'office'],
+  // Crew leads read only their own crews' bookings (the service filters), never money.
+  'bookings.read': ['owner', 'office', 'crew_lead'],
+  'bookings.write': ['owner', 'office'],
+  // Receivables (aging, customer statements) and the accountant's CSV exports: the bookkeeper
+  // and the owner. The office reads an invoice's status only (invoices.read), never these.
+  'receivables.read': ['owner', 'bookkeeper'],
+  'statements.send': ['owner', 'bookkeeper'],
+  'exports.read': ['owner', 'bookkeeper'],
+  // The owner's numbers (pipeline, win rate, margins, crew use): the owner alone.
+  'dashboard.read': ['owner'],
 };
 
 /** Whether `role` may perform `action`. */

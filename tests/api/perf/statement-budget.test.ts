@@ -9,6 +9,7 @@ import { addMember, createCustomer, createSite, signUpCompany } from '../../fixt
 import { recordStatements } from '../../fixtures/statements.js';
 import { createArea, turfProducts } from '../../fixtures/areas.js';
 import { pngImage, uploadFile } from '../../fixtures/images.js';
+import { acceptedJob, createCrew } from '../../fixtures/bookings.js';
 
 /** The default for a signed-in read: the session with the membership, then the data. */
 const defaultReadBudget = 2;
@@ -101,6 +102,41 @@ const budgets: Record<string, { budget: number; urls: (ids: Ids) => string[] }> 
     budget: 3,
     urls: (ids) => [`/api/invoices/${ids.invoiceId}/reminders`],
   },
+  // The crews and every crew's people, read in parallel.
+  '/api/crews': { budget: 3, urls: () => ['/api/crews', '/api/crews?includeArchived=true'] },
+  '/api/crews/:id': { budget: 3, urls: (ids) => [`/api/crews/${ids.crewId}`] },
+  // The bookings with crew, job, customer and site in one join and the company's zone in
+  // parallel, then the jobs' tickets, reservations and areas in parallel for the warnings.
+  '/api/bookings': {
+    budget: 6,
+    urls: (ids) => [
+      '/api/bookings?from=2031-06-01&to=2031-06-30',
+      `/api/bookings?from=2031-06-01&to=2031-06-30&crewId=${ids.crewId}`,
+    ],
+  },
+  // The company (its time zone gives today) when `asOf` is not given, then one grouped SELECT.
+  '/api/reports/aging': {
+    budget: 3,
+    urls: () => ['/api/reports/aging', '/api/reports/aging?asOf=2026-03-31'],
+  },
+  // Company and customer in parallel, then the owing invoices, their payments and credits, and
+  // the customer's aging in parallel.
+  '/api/customers/:id/statement.pdf': {
+    budget: 6,
+    urls: (ids) => [`/api/customers/${ids.customerId}/statement.pdf`],
+  },
+  // The rows and the company (today, for overdue) in parallel.
+  '/api/exports/invoices.csv': {
+    budget: 3,
+    urls: () => ['/api/exports/invoices.csv', '/api/exports/invoices.csv?from=2026-01-01'],
+  },
+  '/api/exports/payments.csv': { budget: 2, urls: () => ['/api/exports/payments.csv'] },
+  // The company (time zone and region), then one statement per figure (crew utilisation
+  // included), in parallel.
+  '/api/reports/dashboard': {
+    budget: 8,
+    urls: () => ['/api/reports/dashboard', '/api/reports/dashboard?from=2026-01-01&to=2026-06-30'],
+  },
 };
 
 interface Ids {
@@ -111,6 +147,7 @@ interface Ids {
   rollId: string;
   estimateId: string;
   invoiceId: string;
+  crewId: string;
 }
 
 describe('statement budget of signed-in requests', () => {
@@ -158,6 +195,17 @@ describe('statement budget of signed-in requests', () => {
       })
       .expect(201);
     const invoiceId = (invoice.body as { data: { id: string } }).data.id;
+    const crewId = await createCrew(owner, { members: [{ name: 'Budget helper' }] });
+    const bookedJobId = await acceptedJob(owner, 'Budget booked job');
+    await owner
+      .post('/api/bookings', {
+        crewId,
+        jobId: bookedJobId,
+        startDate: '2031-06-02',
+        endDate: '2031-06-03',
+        phase: 'finishing',
+      })
+      .expect(201);
     ids = {
       customerId: customer.id,
       siteId: site.id,
@@ -166,6 +214,7 @@ describe('statement budget of signed-in requests', () => {
       rollId,
       estimateId,
       invoiceId,
+      crewId,
     };
   });
 
@@ -193,6 +242,13 @@ describe('statement budget of signed-in requests', () => {
       '/api/invoices/:id',
       '/api/invoices/:id/pdf',
       '/api/invoices/:id/reminders',
+      '/api/crews',
+      '/api/crews/:id',
+      '/api/bookings',
+      '/api/reports/aging',
+      '/api/customers/:id/statement.pdf',
+      '/api/exports/invoices.csv',
+      '/api/reports/dashboard',
     ]);
   });
 

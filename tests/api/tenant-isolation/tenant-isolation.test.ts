@@ -7,6 +7,7 @@ import { testApp } from '../../fixtures/app.js';
 import type { Client } from '../../fixtures/client.js';
 import { areaBody, createArea, turfProducts } from '../../fixtures/areas.js';
 import { pngImage, uploadFile } from '../../fixtures/images.js';
+import { acceptedJob, createCrew } from '../../fixtures/bookings.js';
 import {
   addMember,
   createCustomer,
@@ -37,6 +38,10 @@ interface World {
   aEstimateId: string;
   aInvoiceId: string;
   aPaymentId: string;
+  aCrewId: string;
+  aBookedJobId: string;
+  aBookingId: string;
+  bCrewId: string;
 }
 
 /** `signed-in` routes need a signed-in person but no active company (choosing a company). */
@@ -488,6 +493,68 @@ const probes: Record<string, Probe> = {
     run: (b, w) =>
       notFound(b.patch(`/api/locate-tickets/${w.aLocateTicketId}`, { status: 'clear' })),
   },
+  'get /api/crews': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/crews?includeArchived=true').expect(200);
+      expect(idsOf(res.body)).not.toContain(w.aCrewId);
+    },
+  },
+  'post /api/crews': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      // A's people cannot be put on B's crew.
+      const res = await b
+        .post('/api/crews', {
+          name: 'B poach',
+          colour: 'pine',
+          members: [{ userId: w.a.me.user.id }],
+        })
+        .expect(400);
+      expect(res.body.errors[0].path).toBe('members.0.userId');
+    },
+  },
+  'get /api/crews/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/crews/${w.aCrewId}`)),
+  },
+  'patch /api/crews/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/crews/${w.aCrewId}`, { name: 'B renamed' })),
+  },
+  'delete /api/crews/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/crews/${w.aCrewId}`)),
+  },
+  'get /api/bookings': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const all = await b.get('/api/bookings?from=2031-06-01&to=2031-06-30').expect(200);
+      expect(all.body.data).toEqual([]);
+      const aCrew = await b
+        .get(`/api/bookings?from=2031-06-01&to=2031-06-30&crewId=${w.aCrewId}`)
+        .expect(200);
+      expect(aCrew.body.data).toEqual([]);
+    },
+  },
+  'post /api/bookings': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const days = { startDate: '2031-06-10', endDate: '2031-06-10', phase: 'finishing' };
+      await notFound(b.post('/api/bookings', { ...days, crewId: w.aCrewId, jobId: w.bJobId }));
+      await notFound(
+        b.post('/api/bookings', { ...days, crewId: w.bCrewId, jobId: w.aBookedJobId }),
+      );
+    },
+  },
+  'patch /api/bookings/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.patch(`/api/bookings/${w.aBookingId}`, { startDate: '2031-06-20' })),
+  },
+  'delete /api/bookings/:id': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.del(`/api/bookings/${w.aBookingId}`)),
+  },
   'post /api/plans/preview': {
     kind: 'tenant',
     run: async (b) => {
@@ -551,6 +618,48 @@ const probes: Record<string, Probe> = {
     run: async (b) => {
       // Keys are per company: B may use the key A already has.
       await b.post('/api/price-book', { ...alphaPriceItem, name: 'Bravo copy' }).expect(201);
+    },
+  },
+  'get /api/reports/aging': {
+    kind: 'tenant',
+    run: async (b, w) => {
+      const res = await b.get('/api/reports/aging').expect(200);
+      expect(JSON.stringify(res.body)).not.toContain(w.aCustomerId);
+      expect(res.body.data.totalCents).toBe(0);
+    },
+  },
+  'get /api/reports/dashboard': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/reports/dashboard').expect(200);
+      const invoiced = (res.body.data.invoicedByMonth as { cents: number }[]).reduce(
+        (sum, m) => sum + m.cents,
+        0,
+      );
+      expect(invoiced).toBe(0);
+    },
+  },
+  'get /api/customers/:id/statement.pdf': {
+    kind: 'tenant',
+    run: (b, w) => notFound(b.get(`/api/customers/${w.aCustomerId}/statement.pdf`)),
+  },
+  'post /api/customers/:id/statement': {
+    kind: 'tenant',
+    run: (b, w) =>
+      notFound(b.post(`/api/customers/${w.aCustomerId}/statement`, { to: 'thief@example.test' })),
+  },
+  'get /api/exports/invoices.csv': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/exports/invoices.csv').expect(200);
+      expect(res.text).not.toContain('Alpha Customer');
+    },
+  },
+  'get /api/exports/payments.csv': {
+    kind: 'tenant',
+    run: async (b) => {
+      const res = await b.get('/api/exports/payments.csv').expect(200);
+      expect(res.text).not.toContain('Alpha Customer');
     },
   },
   'get /api/price-book/export.csv': {
@@ -655,7 +764,7 @@ const probes: Record<string, Probe> = {
   },
   'post /api/public/invoices/:token/checkout': {
     kind: 'public',
-    why: 'the e-mailed token is the credential; it starts a checkout for its one invoice',
+    why: 'the e-mailed token is the credential (tests/api/invoices/pay-online.test.ts)',
   },
   'post /api/invoices/:id/payments/:paymentId/refunds': {
     kind: 'tenant',
@@ -744,6 +853,13 @@ async function snapshotOfA(w: World) {
     payments: await q('SELECT id FROM payments WHERE company_id = ? ORDER BY id'),
     creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
     refunds: await q('SELECT id FROM refunds WHERE company_id = ? ORDER BY id'),
+    crews: await q('SELECT id, name, updated_at FROM crews WHERE company_id = ? ORDER BY id'),
+    crewMembers: await q(
+      'SELECT id, user_id, name FROM crew_members WHERE company_id = ? ORDER BY id',
+    ),
+    bookings: await q(
+      'SELECT id, start_date, end_date, version FROM bookings WHERE company_id = ? ORDER BY id',
+    ),
     estimating: await q(
       'SELECT markup_basis_points, takeoff_overrides, updated_at FROM estimating_settings WHERE company_id = ?',
     ),
@@ -802,11 +918,20 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     const aEstimate = await a.client.post(`/api/jobs/${aJob.id}/estimates`, {}).expect(201);
+    // A sent and partly paid invoice of A's, for the receivables probes (aging, exports).
     const aInvoice = await a.client
       .post('/api/invoices', {
         jobId: aJob.id,
         kind: 'progress',
-        lines: [{ label: 'Alpha work', quantity: 1, unitPriceCents: 10_000 }],
+        lines: [
+          {
+            label: 'Alpha work',
+            quantity: 1,
+            unit: 'each',
+            unitPriceCents: 40_000,
+            taxable: false,
+          },
+        ],
       })
       .expect(201);
     await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
@@ -818,14 +943,40 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     await a.client
+      .post(`/api/invoices/${aInvoice.body.data.id}/payments`, {
+        amountCents: 10_000,
+        method: 'cheque',
+        receivedOn: new Date().toISOString().slice(0, 10),
+      })
+      .expect(201);
+    await a.client
       .put('/api/settings/reminders', {
         enabled: true,
         offsets: [-3, 0, 7],
         senderName: 'Alpha Accounts',
       })
       .expect(200);
+    const aCrewId = await createCrew(a.client, {
+      name: 'Alpha crew',
+      members: [{ userId: a.me.user.id }, { name: 'Alpha helper' }],
+    });
+    const bCrewId = await createCrew(b.client, { name: 'Bravo crew' });
+    const aBookedJobId = await acceptedJob(a.client, 'Alpha booked job');
+    const aBooking = await a.client
+      .post('/api/bookings', {
+        crewId: aCrewId,
+        jobId: aBookedJobId,
+        startDate: '2031-06-02',
+        endDate: '2031-06-03',
+        phase: 'finishing',
+      })
+      .expect(201);
     world = {
       a,
+      aCrewId,
+      bCrewId,
+      aBookedJobId,
+      aBookingId: aBooking.body.data.id,
       b,
       aCustomerId: aCustomer.id,
       aSiteId: aSite.id,

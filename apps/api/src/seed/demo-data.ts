@@ -31,6 +31,7 @@ import { seedDemoInvoices } from './demo-invoices.js';
 import { seedDemoEstimates } from './demo-estimates.js';
 import type { DemoCustomerLink } from './demo-estimates.js';
 import { seedDemoStock } from './demo-stock-seed.js';
+import { seedDemoCrews } from './demo-crews-seed.js';
 
 /** Demo sign-in password for every demo user (local data only). */
 export const demoPassword = 'turf-demo-2026';
@@ -81,6 +82,7 @@ export async function seedDemoData(
   // Filled in after the company commits, each part only when missing (so a rerun completes a
   // demo that an older version of this seed made).
   await seedDemoStock(owner, { sequelize, plannerPool });
+  await seedDemoCrews(owner, { sequelize });
   const customerLinks = await seedDemoEstimates(owner, { sequelize });
   const payLinks = await seedDemoInvoices(owner, { sequelize });
   return { created: !existing, ...result, customerLinks, payLinks };

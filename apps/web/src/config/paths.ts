@@ -28,7 +28,11 @@ export const paths = {
   stock: '/stock',
   receiveStock: '/stock/receive',
   roll: (id: string) => `/stock/${encodeURIComponent(id)}`,
+  reports: '/reports',
   settings: '/settings',
+  crews: '/settings/crews',
+  /** The crew calendar; `crew` filters it to one crew, `view` is month or week. */
+  calendar: '/calendar',
   profile: '/profile',
 } as const;
 

@@ -19,3 +19,9 @@ export const queryClient = new QueryClient({
  * in, signing up and accepting an invitation all answer with the new session and seed it.
  */
 export const sessionMeKey = ['session', 'me'] as const;
+
+/**
+ * The key of `GET /api/crews`: the crews settings and the calendar both read it, and a change
+ * on either must refresh the other.
+ */
+export const crewsKey = ['crews'] as const;

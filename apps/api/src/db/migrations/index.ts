@@ -13,9 +13,11 @@ import { locateTickets } from './0012-locate-tickets.js';
 import { rollStock } from './0013-roll-stock.js';
 import { invoices } from './0014-invoices.js';
 import { processorEvents } from './0015-processor-events.js';
-import { customerSearchWordsMigration } from './0018-customer-search-words.js';
+import { crewsBookings } from './0016-crews-bookings.js';
 import { uploads } from './0017-uploads.js';
+import { customerSearchWordsMigration } from './0018-customer-search-words.js';
 import { reminders } from './0019-reminders.js';
+import { reportIndexes } from './0020-report-indexes.js';
 import { refunds } from './0021-refunds.js';
 import type { Migration } from './types.js';
 
@@ -33,8 +35,10 @@ export const migrations: Migration[] = [
   rollStock,
   invoices,
   processorEvents,
-  customerSearchWordsMigration,
+  crewsBookings,
   uploads,
+  customerSearchWordsMigration,
   reminders,
+  reportIndexes,
   refunds,
 ];

@@ -1,7 +1,10 @@
 // Registers every model on a Sequelize instance, and names the tenant models.
 import type { Model, ModelStatic, Sequelize } from 'sequelize';
 import { AuditEventModel } from './audit-event.model.js';
+import { BookingModel } from './booking.model.js';
 import { CompanyModel } from './company.model.js';
+import { CrewMemberModel } from './crew-member.model.js';
+import { CrewModel } from './crew.model.js';
 import { CustomerModel } from './customer.model.js';
 import { JobModel } from './job.model.js';
 import { JobAreaModel } from './job-area.model.js';
@@ -43,7 +46,10 @@ export {
   PaymentModel,
   RefundModel,
   ReminderSettingsModel,
+  BookingModel,
   CompanyModel,
+  CrewMemberModel,
+  CrewModel,
   CustomerModel,
   EstimateAnswerModel,
   EstimateLinkModel,
@@ -95,6 +101,9 @@ const allModels = [
   UploadModel,
   ReminderSettingsModel,
   InvoiceReminderModel,
+  CrewModel,
+  CrewMemberModel,
+  BookingModel,
 ] as const;
 
 /**
@@ -133,4 +142,8 @@ function associateModels(): void {
     constraints: false,
   });
   AuditEventModel.belongsTo(UserModel, { as: 'user', foreignKey: 'userId', constraints: false });
+  // Bookings reach their crew and job through the (company_id, …) keys of migration 0016.
+  BookingModel.belongsTo(CrewModel, { as: 'crew', foreignKey: 'crewId', constraints: false });
+  BookingModel.belongsTo(JobModel, { as: 'job', foreignKey: 'jobId', constraints: false });
+  CrewMemberModel.belongsTo(UserModel, { as: 'user', foreignKey: 'userId', constraints: false });
 }

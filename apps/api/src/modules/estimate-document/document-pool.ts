@@ -10,6 +10,7 @@ import { BudgetedPool } from '../../workers/budgeted-pool.js';
 import type { DocumentJob, DocumentTask } from './document-task.js';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
 import type { InvoiceDocumentInput } from './invoice-document.types.js';
+import type { StatementDocumentInput } from './statement-document.types.js';
 
 export interface DocumentPoolConfig {
   /** Worker threads. */
@@ -81,6 +82,10 @@ export class DocumentPool {
   /** Renders one invoice PDF in a worker thread (same pool, same limits). */
   renderInvoice(input: InvoiceDocumentInput): Promise<Buffer> {
     return this.#run({ kind: 'invoice', input });
+  }
+
+  renderStatement(input: StatementDocumentInput): Promise<Buffer> {
+    return this.#run({ kind: 'statement', input });
   }
 
   async #run(job: DocumentJob): Promise<Buffer> {

@@ -2,11 +2,13 @@
 import type { MessagePort } from 'node:worker_threads';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
 import type { InvoiceDocumentInput } from './invoice-document.types.js';
+import type { StatementDocumentInput } from './statement-document.types.js';
 
-/** Which document to render: one pool serves every kind (estimates, invoices). */
+/** Which document to render: one pool serves every kind (estimates, invoices, statements). */
 export type DocumentJob =
   | { readonly kind: 'estimate'; readonly input: EstimateDocumentInput }
-  | { readonly kind: 'invoice'; readonly input: InvoiceDocumentInput };
+  | { readonly kind: 'invoice'; readonly input: InvoiceDocumentInput }
+  | { readonly kind: 'statement'; readonly input: StatementDocumentInput };
 
 export interface DocumentTask {
   readonly job: DocumentJob;

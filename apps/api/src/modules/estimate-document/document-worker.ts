@@ -5,6 +5,7 @@ import { Piscina } from 'piscina';
 import type { DocumentTask } from './document-task.js';
 import { renderInvoiceDocument } from './invoice-document.js';
 import { renderEstimateDocument } from './render-document.js';
+import { renderStatementDocument } from './statement-document.js';
 
 export default async function renderInWorker(task: DocumentTask): Promise<unknown> {
   task.startedPort.postMessage('started');
@@ -13,7 +14,9 @@ export default async function renderInWorker(task: DocumentTask): Promise<unknow
   const bytes =
     job.kind === 'invoice'
       ? await renderInvoiceDocument(job.input)
-      : await renderEstimateDocument(job.input);
+      : job.kind === 'statement'
+        ? await renderStatementDocument(job.input)
+        : await renderEstimateDocument(job.input);
   // Moved, not copied, back to the pool's thread.
   return Piscina.move(bytes);
 }

@@ -4,6 +4,7 @@
 import { DocumentPool } from './document-pool.js';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
 import type { InvoiceDocumentInput } from './invoice-document.types.js';
+import type { StatementDocumentInput } from './statement-document.types.js';
 
 export { DocumentPool, defaultDocumentPoolConfig } from './document-pool.js';
 export type { DocumentPoolConfig } from './document-pool.js';
@@ -11,6 +12,7 @@ export { formatMoney, formatDocumentDate } from './document-format.js';
 export { documentCancellationNotice } from './cancellation-notice-input.js';
 export type * from './estimate-document.types.js';
 export type * from './invoice-document.types.js';
+export type * from './statement-document.types.js';
 
 /**
  * One pool per process for callers that pass none. It starts its thread on first use and
@@ -33,6 +35,14 @@ export function renderInvoicePdf(
   pool: DocumentPool = (defaultPool ??= new DocumentPool()),
 ): Promise<Buffer> {
   return pool.renderInvoice(input);
+}
+
+/** Renders a customer statement in the same pool. */
+export function renderStatementPdf(
+  input: StatementDocumentInput,
+  pool: DocumentPool = (defaultPool ??= new DocumentPool()),
+): Promise<Buffer> {
+  return pool.renderStatement(input);
 }
 
 export async function closeDefaultDocumentPool(): Promise<void> {

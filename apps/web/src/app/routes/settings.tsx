@@ -1,5 +1,7 @@
 import { Suspense, type ReactNode } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { paths } from '../../config/paths';
 import { Loading } from '../../components/ui/loading';
 import { PageHeader } from '../../components/ui/page-header';
 import { RegionErrorBoundary } from '../../components/ui/region-error';
@@ -59,6 +61,7 @@ export function Component() {
   const canWritePrices = useCan('pricebook.write');
   const canManageEstimating = useCan('estimating.manage');
   const canManageReminders = useCan('reminders.manage');
+  const canManageCrews = useCan('crews.manage');
   return (
     <div className="flex max-w-4xl flex-col gap-10">
       <PageHeader
@@ -72,6 +75,16 @@ export function Component() {
       <Section id="profile" title="Your profile">
         <MyProfile showEditLink />
       </Section>
+      {canManageCrews ? (
+        <section aria-labelledby="crews-heading">
+          <h2 id="crews-heading" className="mb-3 text-xl font-bold">
+            Crews
+          </h2>
+          <p>
+            <Link to={paths.crews}>Crews, their colours, working days and people</Link>
+          </p>
+        </section>
+      ) : null}
       {canManageCompany ? (
         <Section id="company" title="Company details">
           <div className="rounded-lg border border-line bg-white p-6">

@@ -38,13 +38,34 @@ export function JobsIcon({ className = 'h-6 w-6' }: { className?: string }) {
   );
 }
 
-/** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
 /** A sheet with a few lines and a total: an invoice. */
 export function InvoicesIcon({ className = 'h-6 w-6' }: { className?: string }) {
   return (
     <svg {...base} className={className}>
       <path d="M6 3h9l3 3v15l-2-1.2-2 1.2-2-1.2-2 1.2-2-1.2L6 21z" />
       <path d="M9 9h6M9 12.5h6M12 16h3" />
+    </svg>
+  );
+}
+
+/** A wall calendar with a booked span across it. */
+export function CalendarIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <rect x="3.5" y="5" width="17" height="15" rx="2" />
+      <path d="M3.5 10h17M8 3v4M16 3v4M7 14h10" />
+    </svg>
+  );
+}
+
+/** Two turf rolls on the floor, seen end on, with a third on top: stock in the yard. */
+export function ReportsIcon({ className = 'h-6 w-6' }: { className?: string }) {
+  return (
+    <svg {...base} className={className}>
+      <path d="M4 20h16" />
+      <path d="M7 16v-5" />
+      <path d="M12 16V7" />
+      <path d="M17 16v-8" />
     </svg>
   );
 }

@@ -12,7 +12,13 @@ describe('sections', () => {
   });
 
   it('keeps customers out of the crew lead’s rail and bar', () => {
-    expect(labels(sectionsFor('crew_lead'))).toEqual(['Today', 'Layout', 'Stock', 'Settings']);
+    expect(labels(sectionsFor('crew_lead'))).toEqual([
+      'Today',
+      'Calendar',
+      'Layout',
+      'Stock',
+      'Settings',
+    ]);
     expect(phoneSectionsFor('crew_lead').some((s) => s.to === paths.customers)).toBe(false);
     expect(sectionsFor('crew_lead').some((s) => s.to === paths.jobs)).toBe(false);
   });
@@ -21,6 +27,11 @@ describe('sections', () => {
     for (const role of ['owner', 'office', 'bookkeeper', 'crew_lead'] as const)
       expect(labels(sectionsFor(role))).toContain('Stock');
     expect(labels(phoneSectionsFor('owner'))).not.toContain('Stock');
+  });
+
+  it('shows the Calendar to those who read bookings, not to bookkeepers', () => {
+    expect(labels(sectionsFor('office'))).toContain('Calendar');
+    expect(labels(sectionsFor('bookkeeper'))).not.toContain('Calendar');
   });
 
   it('gives the office every section on the phone under its own name', () => {
@@ -38,5 +49,13 @@ describe('sections', () => {
       expect(labels(sectionsFor(role))).toContain('Invoices');
     expect(labels(sectionsFor('crew_lead'))).not.toContain('Invoices');
     expect(labels(phoneSectionsFor('bookkeeper'))).toContain('Invoices');
+  });
+
+  it('gives Reports to the owner and the bookkeeper only, never on the phone bar', () => {
+    expect(labels(sectionsFor('owner'))).toContain('Reports');
+    expect(labels(sectionsFor('bookkeeper'))).toContain('Reports');
+    expect(labels(sectionsFor('office'))).not.toContain('Reports');
+    expect(labels(sectionsFor('crew_lead'))).not.toContain('Reports');
+    expect(labels(phoneSectionsFor('owner'))).not.toContain('Reports');
   });
 });

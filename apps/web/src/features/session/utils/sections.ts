@@ -1,10 +1,12 @@
 import type { ComponentType } from 'react';
 import { can, type Action, type Role } from '@seamwright/shared';
 import {
+  CalendarIcon,
   CustomersIcon,
   InvoicesIcon,
   JobsIcon,
   ProfileIcon,
+  ReportsIcon,
   SettingsIcon,
   StockIcon,
   TodayIcon,
@@ -26,7 +28,7 @@ export interface Section {
   phoneNames?: Partial<Record<Role, { label: string; Icon: Icon }>>;
 }
 
-/** Only sections that exist are listed; later work adds Calendar and Reports. */
+/** Only sections that exist are listed; later work adds Reports. */
 const sections: Section[] = [
   {
     to: paths.today,
@@ -48,6 +50,15 @@ const sections: Section[] = [
     Icon: JobsIcon,
     needs: 'jobs.read',
     phoneRoles: ['owner', 'office', 'bookkeeper'],
+  },
+  // Crew leads see their own crews' bookings (no money); bookkeepers have no bookings access.
+  // Not on the phone bar yet: the crew lead's day (later work) is their phone view of it.
+  {
+    to: paths.calendar,
+    label: 'Calendar',
+    Icon: CalendarIcon,
+    needs: 'bookings.read',
+    phoneRoles: [],
   },
   // Owners and bookkeepers bill here; the office reads an invoice's status for the customer.
   {
@@ -71,6 +82,15 @@ const sections: Section[] = [
     Icon: StockIcon,
     needs: 'inventory.read',
     phoneRoles: ['crew_lead'],
+  },
+  // Receivables and exports for the bookkeeper, and the dashboard too for the owner; desktop
+  // only (wide tables and charts).
+  {
+    to: paths.reports,
+    label: 'Reports',
+    Icon: ReportsIcon,
+    needs: 'receivables.read',
+    phoneRoles: [],
   },
   // For a crew lead the settings page holds only their own profile, so the phone bar says so.
   {
