@@ -15,6 +15,7 @@ import {
   uniqueEmail,
 } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
+import { acceptedJob as bookableJob, createCrew } from '../../fixtures/bookings.js';
 import { pngImage, uploadFile } from '../../fixtures/images.js';
 import { landscapeTurfId } from '../../fixtures/stock.js';
 import { acceptedJob, progressLine } from '../invoices/invoice-fixtures.js';
@@ -38,7 +39,12 @@ export type RowKind =
   /** A cheque payment on `invoice`. */
   | 'payment'
   /** An area of `job` with a photo under its drawing. */
-  | 'underlaidArea';
+  | 'underlaidArea'
+  /** An accepted job without an estimate, for crew bookings. */
+  | 'bookableJob'
+  | 'crew'
+  /** A booking of `crew` on `bookableJob`, each on a day of its own. */
+  | 'booking';
 
 export interface GuardWorld {
   app: App;
@@ -53,6 +59,11 @@ export interface GuardWorld {
 }
 
 const dataOf = (body: unknown) => (body as { data: { id: string } }).data;
+
+/** Each booking on its own day (far ahead), so fresh ones never meet a crew's day limit. */
+let bookingDay = 0;
+const nextBookingDay = () =>
+  new Date(Date.UTC(2031, 6, 1) + bookingDay++ * 86_400_000).toISOString().slice(0, 10);
 
 /** Makes a new row of `kind` in company A (for DELETE cells, which use up their row). */
 export const creators: Record<RowKind, (w: GuardWorld) => Promise<string>> = {
@@ -140,6 +151,22 @@ export const creators: Record<RowKind, (w: GuardWorld) => Promise<string>> = {
     await uploadFile(w.people.owner.client, url, pngImage(40, 20), 'guard.png').expect(201);
     return area.id;
   },
+  bookableJob: async (w) => bookableJob(w.people.owner.client, 'Guard booked job'),
+  crew: async (w) =>
+    createCrew(w.people.owner.client, { name: `Guard crew ${randomUUID().slice(0, 6)}` }),
+  booking: async (w) => {
+    const day = nextBookingDay();
+    const res = await w.people.owner.client
+      .post('/api/bookings', {
+        crewId: w.ids.crew,
+        jobId: w.ids.bookableJob,
+        startDate: day,
+        endDate: day,
+        phase: 'finishing',
+      })
+      .expect(201);
+    return dataOf(res.body).id;
+  },
 };
 
 /** Builds the world: about 30 requests, one area plan. */
@@ -175,6 +202,9 @@ export async function createGuardWorld(app: App): Promise<GuardWorld> {
     'invoice',
     'payment',
     'underlaidArea',
+    'bookableJob',
+    'crew',
+    'booking',
   ];
   for (const kind of order) w.ids[kind] = await creators[kind](w);
   return w;

@@ -29,6 +29,8 @@ export const kindBySegment: Record<string, RowKind> = {
   'locate-tickets': 'locateTicket',
   invoices: 'invoice',
   payments: 'payment',
+  crews: 'crew',
+  bookings: 'booking',
 };
 
 const tenMinutesAgo = () => new Date(Date.now() - 600_000).toISOString();
@@ -178,6 +180,30 @@ export const routeCases: Record<string, RouteCase> = {
   'put /api/settings/reminders': { body: () => ({ enabled: false, offsets: [-3, 0, 7] }) },
   'get /api/invoices/:id/reminders': {},
   'post /api/invoices/:id/reminders': {},
+  'get /api/crews': {},
+  'post /api/crews': { body: () => ({ name: 'Matrix crew', colour: 'pine' }) },
+  'get /api/crews/:id': {},
+  'patch /api/crews/:id': { body: () => ({ name: 'Matrix crew renamed' }) },
+  'delete /api/crews/:id': {},
+  // Without from and to: the list's 400 (past the access check) is enough for the matrix.
+  'get /api/bookings': {},
+  'post /api/bookings': {
+    body: (w) => ({
+      crewId: w.ids.crew,
+      jobId: w.ids.bookableJob,
+      startDate: '2031-09-01',
+      endDate: '2031-09-01',
+      phase: 'finishing',
+    }),
+  },
+  'patch /api/bookings/:id': { body: () => ({ notes: 'Matrix notes' }) },
+  'delete /api/bookings/:id': {},
+  'get /api/reports/aging': {},
+  'get /api/customers/:id/statement.pdf': {},
+  'post /api/customers/:id/statement': {},
+  'get /api/exports/invoices.csv': {},
+  'get /api/exports/payments.csv': {},
+  'get /api/reports/dashboard': {},
 };
 
 /** The row kind for each path parameter of `path` (`:token` → undefined: a credential). */
