@@ -54,6 +54,14 @@ export const accessMatrixExceptions: Record<
     cells: { 'other-company': 'not-found' },
     why: 'the body names a turf product of the price book; another company’s is a 404',
   },
+  'post /api/invoices': {
+    cells: { 'other-company': 'not-found' },
+    why: 'the body names the job to invoice; another company’s is unknown (404)',
+  },
+  'post /api/bookings': {
+    cells: { 'other-company': 'not-found' },
+    why: 'the body names a crew and a job; another company’s are unknown (404)',
+  },
 };
 
 /** Path parameters that name a row of the company (`:token` is a credential, not an id). */

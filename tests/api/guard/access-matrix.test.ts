@@ -38,7 +38,10 @@ async function send(w: GuardWorld, cell: Cell, fresh: boolean) {
     case 'delete':
       return client.del(url);
     default:
-      return client[route.method === 'post' ? 'post' : 'patch'](url, body);
+      return client[route.method === 'put' ? 'put' : route.method === 'post' ? 'post' : 'patch'](
+        url,
+        body,
+      );
   }
 }
 

@@ -15,7 +15,10 @@ import {
   uniqueEmail,
 } from '../../fixtures/factories.js';
 import type { SignedIn } from '../../fixtures/factories.js';
+import { acceptedJob as bookableJob, createCrew } from '../../fixtures/bookings.js';
+import { pngImage, uploadFile } from '../../fixtures/images.js';
 import { landscapeTurfId } from '../../fixtures/stock.js';
+import { acceptedJob, progressLine } from '../invoices/invoice-fixtures.js';
 
 /** The kinds of rows a path parameter can name. A new kind needs a line in `creators`. */
 export type RowKind =
@@ -28,7 +31,20 @@ export type RowKind =
   | 'priceItem'
   | 'member'
   | 'invitation'
-  | 'locateTicket';
+  | 'locateTicket'
+  /** A job whose estimate is accepted, so it can be invoiced. */
+  | 'acceptedJob'
+  /** A sent progress invoice of `acceptedJob`. */
+  | 'invoice'
+  /** A cheque payment on `invoice`. */
+  | 'payment'
+  /** An area of `job` with a photo under its drawing. */
+  | 'underlaidArea'
+  /** An accepted job without an estimate, for crew bookings. */
+  | 'bookableJob'
+  | 'crew'
+  /** A booking of `crew` on `bookableJob`, each on a day of its own. */
+  | 'booking';
 
 export interface GuardWorld {
   app: App;
@@ -43,6 +59,11 @@ export interface GuardWorld {
 }
 
 const dataOf = (body: unknown) => (body as { data: { id: string } }).data;
+
+/** Each booking on its own day (far ahead), so fresh ones never meet a crew's day limit. */
+let bookingDay = 0;
+const nextBookingDay = () =>
+  new Date(Date.UTC(2031, 6, 1) + bookingDay++ * 86_400_000).toISOString().slice(0, 10);
 
 /** Makes a new row of `kind` in company A (for DELETE cells, which use up their row). */
 export const creators: Record<RowKind, (w: GuardWorld) => Promise<string>> = {
@@ -100,6 +121,52 @@ export const creators: Record<RowKind, (w: GuardWorld) => Promise<string>> = {
         })
       ).body,
     ).id,
+  acceptedJob: async (w) =>
+    (await acceptedJob(w.people.owner.client, w.people.office.client)).jobId,
+  invoice: async (w) => {
+    const { client } = w.people.owner;
+    const res = await client.post('/api/invoices', {
+      jobId: w.ids.acceptedJob,
+      kind: 'progress',
+      lines: [progressLine],
+    });
+    const id = dataOf(res.body).id;
+    await client.post(`/api/invoices/${id}/send`, {}).expect(200);
+    return id;
+  },
+  payment: async (w) => {
+    const res = await w.people.owner.client
+      .post(`/api/invoices/${w.ids.invoice}/payments`, {
+        amountCents: 10_000,
+        method: 'cheque',
+        receivedOn: new Date().toISOString().slice(0, 10),
+      })
+      .expect(201);
+    const payments = (res.body as { data: { payments: { id: string }[] } }).data.payments;
+    return payments[payments.length - 1]!.id;
+  },
+  underlaidArea: async (w) => {
+    const area = await createArea(w.people.owner.client, w.ids.job, areaBody());
+    const url = `/api/areas/${area.id}/underlay`;
+    await uploadFile(w.people.owner.client, url, pngImage(40, 20), 'guard.png').expect(201);
+    return area.id;
+  },
+  bookableJob: async (w) => bookableJob(w.people.owner.client, 'Guard booked job'),
+  crew: async (w) =>
+    createCrew(w.people.owner.client, { name: `Guard crew ${randomUUID().slice(0, 6)}` }),
+  booking: async (w) => {
+    const day = nextBookingDay();
+    const res = await w.people.owner.client
+      .post('/api/bookings', {
+        crewId: w.ids.crew,
+        jobId: w.ids.bookableJob,
+        startDate: day,
+        endDate: day,
+        phase: 'finishing',
+      })
+      .expect(201);
+    return dataOf(res.body).id;
+  },
 };
 
 /** Builds the world: about 30 requests, one area plan. */
@@ -131,6 +198,13 @@ export async function createGuardWorld(app: App): Promise<GuardWorld> {
     'member',
     'invitation',
     'locateTicket',
+    'acceptedJob',
+    'invoice',
+    'payment',
+    'underlaidArea',
+    'bookableJob',
+    'crew',
+    'booking',
   ];
   for (const kind of order) w.ids[kind] = await creators[kind](w);
   return w;

@@ -4,6 +4,7 @@
 // members, so the other company's request reaches the lookup and gets its 404.
 // Path parameters are filled by the segment before them (`/customers/:id` → a customer, see
 // `kindBySegment`); `:token` gets a made-up token; name others in `params`.
+import { progressLine } from '../invoices/invoice-fixtures.js';
 import type { GuardWorld, RowKind } from './guard-world.js';
 
 export interface RouteCase {
@@ -26,9 +27,14 @@ export const kindBySegment: Record<string, RowKind> = {
   members: 'member',
   invitations: 'invitation',
   'locate-tickets': 'locateTicket',
+  invoices: 'invoice',
+  payments: 'payment',
+  crews: 'crew',
+  bookings: 'booking',
 };
 
 const tenMinutesAgo = () => new Date(Date.now() - 600_000).toISOString();
+const today = () => new Date().toISOString().slice(0, 10);
 
 /** A plain 12 × 10 ft area for the stateless planner previews. */
 const square = {
@@ -141,6 +147,63 @@ export const routeCases: Record<string, RouteCase> = {
   'delete /api/price-book/:id': {},
   'get /api/estimating-settings': {},
   'patch /api/estimating-settings': {},
+  // Unsigned, so every caller gets the signature's 400 and nothing is recorded.
+  'post /api/webhooks/processor': {},
+  // Sent as JSON, not multipart: no file, so the allowed cells get the upload's 400.
+  'post /api/areas/:id/underlay': {},
+  'put /api/areas/:id/underlay/scale': {
+    params: { id: 'underlaidArea' },
+    body: () => ({ a: { x: 0, y: 0 }, b: { x: 30, y: 0 }, distanceFt: 10 }),
+  },
+  'get /api/areas/:id/underlay': { params: { id: 'underlaidArea' } },
+  'delete /api/areas/:id/underlay': { params: { id: 'underlaidArea' } },
+  'get /api/invoices': {},
+  'post /api/invoices': {
+    body: (w) => ({ jobId: w.ids.acceptedJob, kind: 'progress', lines: [progressLine] }),
+  },
+  'get /api/invoices/:id': {},
+  'get /api/invoices/:id/pdf': {},
+  'post /api/invoices/:id/send': {},
+  'post /api/invoices/:id/payments': {
+    body: () => ({ amountCents: 100, method: 'cheque', receivedOn: today() }),
+  },
+  'post /api/invoices/:id/void': { body: () => ({ reason: 'Matrix void' }) },
+  'post /api/invoices/:id/credit-notes': {
+    body: () => ({ amountCents: 100, reason: 'Matrix credit' }),
+  },
+  'post /api/invoices/:id/payments/:paymentId/refunds': {
+    body: () => ({ amountCents: 100, reason: 'Matrix refund' }),
+  },
+  'get /api/public/invoices/:token': {},
+  'post /api/public/invoices/:token/checkout': {},
+  'get /api/settings/reminders': {},
+  'put /api/settings/reminders': { body: () => ({ enabled: false, offsets: [-3, 0, 7] }) },
+  'get /api/invoices/:id/reminders': {},
+  'post /api/invoices/:id/reminders': {},
+  'get /api/crews': {},
+  'post /api/crews': { body: () => ({ name: 'Matrix crew', colour: 'pine' }) },
+  'get /api/crews/:id': {},
+  'patch /api/crews/:id': { body: () => ({ name: 'Matrix crew renamed' }) },
+  'delete /api/crews/:id': {},
+  // Without from and to: the list's 400 (past the access check) is enough for the matrix.
+  'get /api/bookings': {},
+  'post /api/bookings': {
+    body: (w) => ({
+      crewId: w.ids.crew,
+      jobId: w.ids.bookableJob,
+      startDate: '2031-09-01',
+      endDate: '2031-09-01',
+      phase: 'finishing',
+    }),
+  },
+  'patch /api/bookings/:id': { body: () => ({ notes: 'Matrix notes' }) },
+  'delete /api/bookings/:id': {},
+  'get /api/reports/aging': {},
+  'get /api/customers/:id/statement.pdf': {},
+  'post /api/customers/:id/statement': {},
+  'get /api/exports/invoices.csv': {},
+  'get /api/exports/payments.csv': {},
+  'get /api/reports/dashboard': {},
 };
 
 /** The row kind for each path parameter of `path` (`:token` → undefined: a credential). */

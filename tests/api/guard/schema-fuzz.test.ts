@@ -146,6 +146,29 @@ describe('schema fuzz of every write route', () => {
     120_000,
   );
 
+  // Uploads and the signed webhook take no JSON a schema describes (route-inputs.ts): junk
+  // bodies must get a 4xx problem (no file; no signature), never a 5xx, and write nothing.
+  const opaqueRoutes = writeRoutes.filter((r) => r.inputs?.multipart || r.inputs?.rawBody);
+  it.each(opaqueRoutes.map((r) => [keyOf(r), r] as const))(
+    'answers junk bodies to %s with a 4xx problem, never a 5xx, and writes nothing',
+    async (_key, route) => {
+      const url = urlOf(world, route);
+      const before = await tableChecksums(sequelize);
+      await fc.assert(
+        fc.asyncProperty(mutations, async (ops) => {
+          const sent = asSent(mutate({}, ops, []));
+          const res = await owner.send(route.method, url, sent);
+          const where = describeCase(route, sent);
+          expectProblem(res, where);
+          expect(res.status, where).toBeGreaterThanOrEqual(400);
+        }),
+        { numRuns: runs },
+      );
+      expect(await tableChecksums(sequelize)).toEqual(before);
+    },
+    120_000,
+  );
+
   const queryRoutes = routes.filter((r) => r.inputs?.query);
   it.each(queryRoutes.map((r) => [keyOf(r), r] as const))(
     'answers fuzzed query strings of %s with the list or a 400 naming the fields',

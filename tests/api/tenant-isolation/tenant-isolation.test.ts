@@ -37,6 +37,7 @@ interface World {
   aLocateTicketId: string;
   aEstimateId: string;
   aInvoiceId: string;
+  aPaymentId: string;
   aCrewId: string;
   aBookedJobId: string;
   aBookingId: string;
@@ -767,10 +768,10 @@ const probes: Record<string, Probe> = {
   },
   'post /api/invoices/:id/payments/:paymentId/refunds': {
     kind: 'tenant',
-    run: (b: Client, w: World) =>
+    run: (b, w) =>
       notFound(
-        b.post(`/api/invoices/${w.aInvoiceId}/payments/${w.aInvoiceId}/refunds`, {
-          amountCents: 1,
+        b.post(`/api/invoices/${w.aInvoiceId}/payments/${w.aPaymentId}/refunds`, {
+          amountCents: 100,
           reason: 'Hijack',
         }),
       ),
@@ -851,6 +852,7 @@ async function snapshotOfA(w: World) {
     invoiceLinks: await q('SELECT id FROM invoice_links WHERE company_id = ? ORDER BY id'),
     payments: await q('SELECT id FROM payments WHERE company_id = ? ORDER BY id'),
     creditNotes: await q('SELECT id FROM credit_notes WHERE company_id = ? ORDER BY id'),
+    refunds: await q('SELECT id FROM refunds WHERE company_id = ? ORDER BY id'),
     crews: await q('SELECT id, name, updated_at FROM crews WHERE company_id = ? ORDER BY id'),
     crewMembers: await q(
       'SELECT id, user_id, name FROM crew_members WHERE company_id = ? ORDER BY id',
@@ -933,7 +935,7 @@ describe('tenant isolation', () => {
       })
       .expect(201);
     await a.client.post(`/api/invoices/${aInvoice.body.data.id}/send`, {}).expect(200);
-    await a.client
+    const aPaid = await a.client
       .post(`/api/invoices/${aInvoice.body.data.id}/payments`, {
         amountCents: 10_000,
         method: 'cheque',
@@ -984,6 +986,7 @@ describe('tenant isolation', () => {
       aLocateTicketId: (aTicket.body as { data: { id: string } }).data.id,
       aEstimateId: aEstimate.body.data.id,
       aInvoiceId: aInvoice.body.data.id,
+      aPaymentId: (aPaid.body as { data: { payments: { id: string }[] } }).data.payments[0]!.id,
     };
   });
 

@@ -7,16 +7,33 @@
 // A line: `{ body: schema }` for a JSON body, `{ query: schema }` for a query string (GET lists),
 // `{ plannerBody: true }` when the layout planner checks the body itself (422 naming the field),
 // or `{}` for a write route that reads neither (DELETE, a bare POST action).
+// Two bodies are no JSON a zod schema could describe: `{ multipart: true }` for a file upload
+// (multipart/form-data, checked by the upload parser and the image check) and `{ rawBody: true }`
+// for the processor's webhook (the signature covers the raw bytes). The fuzz does not mutate
+// them field by field, but still sends them junk and requires a 4xx problem, never a 5xx, and no
+// row written.
 import type { z } from 'zod';
 import {
+  updateCrewInputSchema,
+  updateBookingInputSchema,
+  sendStatementInputSchema,
+  exportQuerySchema,
+  dashboardQuerySchema,
+  crewListQuerySchema,
+  createCrewInputSchema,
+  createBookingInputSchema,
+  bookingListQuerySchema,
+  agingQuerySchema,
   acceptEstimateInputSchema,
   acceptInvitationInputSchema,
   auditEventListQuerySchema,
   changePasswordInputSchema,
   createAreaInputSchema,
+  createCreditNoteInputSchema,
   createCustomerInputSchema,
   createEstimateInputSchema,
   createInvitationInputSchema,
+  createInvoiceInputSchema,
   createJobInputSchema,
   createLocateTicketInputSchema,
   createReservationInputSchema,
@@ -24,6 +41,7 @@ import {
   createSiteInputSchema,
   customerListQuerySchema,
   declineEstimateInputSchema,
+  invoiceListQuerySchema,
   jobListQuerySchema,
   loginInputSchema,
   pageQuerySchema,
@@ -34,11 +52,17 @@ import {
   priceBookListQuerySchema,
   receiveDeliveryInputSchema,
   recordAcceptanceInputSchema,
+  recordPaymentInputSchema,
+  refundInputSchema,
+  reminderSettingsInputSchema,
   returnRemnantsInputSchema,
   rollListQuerySchema,
   sendEstimateInputSchema,
+  sendInvoiceInputSchema,
+  sendReminderInputSchema,
   signupInputSchema,
   switchCompanyInputSchema,
+  underlayScaleInputSchema,
   updateAreaInputSchema,
   updateCompanyInputSchema,
   updateCustomerInputSchema,
@@ -51,6 +75,7 @@ import {
   updateProfileInputSchema,
   updateRollInputSchema,
   updateSiteInputSchema,
+  voidInvoiceInputSchema,
 } from '@seamwright/shared';
 
 export interface RouteInputs {
@@ -60,6 +85,10 @@ export interface RouteInputs {
   query?: z.ZodType;
   /** The body is the layout planner's request, checked by the planner (422 naming the field). */
   plannerBody?: true;
+  /** A file upload (multipart/form-data): no JSON schema; the upload parser checks it. */
+  multipart?: true;
+  /** The raw bytes are the input (the processor's signed webhook). */
+  rawBody?: true;
 }
 
 export const routeInputs: Record<string, RouteInputs> = {
@@ -118,4 +147,31 @@ export const routeInputs: Record<string, RouteInputs> = {
   'patch /api/price-book/:id': { body: updatePriceBookItemInputSchema },
   'delete /api/price-book/:id': {},
   'patch /api/estimating-settings': { body: updateEstimatingSettingsInputSchema },
+  'post /api/webhooks/processor': { rawBody: true },
+  'post /api/areas/:id/underlay': { multipart: true },
+  'put /api/areas/:id/underlay/scale': { body: underlayScaleInputSchema },
+  'delete /api/areas/:id/underlay': {},
+  'get /api/invoices': { query: invoiceListQuerySchema },
+  'post /api/invoices': { body: createInvoiceInputSchema },
+  'post /api/invoices/:id/send': { body: sendInvoiceInputSchema },
+  'post /api/invoices/:id/payments': { body: recordPaymentInputSchema },
+  'post /api/invoices/:id/void': { body: voidInvoiceInputSchema },
+  'post /api/invoices/:id/credit-notes': { body: createCreditNoteInputSchema },
+  'post /api/invoices/:id/payments/:paymentId/refunds': { body: refundInputSchema },
+  'post /api/public/invoices/:token/checkout': {},
+  'put /api/settings/reminders': { body: reminderSettingsInputSchema },
+  'post /api/invoices/:id/reminders': { body: sendReminderInputSchema },
+  'get /api/crews': { query: crewListQuerySchema },
+  'post /api/crews': { body: createCrewInputSchema },
+  'patch /api/crews/:id': { body: updateCrewInputSchema },
+  'delete /api/crews/:id': {},
+  'get /api/bookings': { query: bookingListQuerySchema },
+  'post /api/bookings': { body: createBookingInputSchema },
+  'patch /api/bookings/:id': { body: updateBookingInputSchema },
+  'delete /api/bookings/:id': {},
+  'get /api/reports/aging': { query: agingQuerySchema },
+  'post /api/customers/:id/statement': { body: sendStatementInputSchema },
+  'get /api/exports/invoices.csv': { query: exportQuerySchema },
+  'get /api/exports/payments.csv': { query: exportQuerySchema },
+  'get /api/reports/dashboard': { query: dashboardQuerySchema },
 };
