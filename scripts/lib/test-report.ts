@@ -17,10 +17,16 @@ export function readVitestCounts(file: string): Counts | null {
     numFailedTests: number;
     numPendingTests: number;
     numTodoTests: number;
+    testResults?: { status: string; assertionResults: unknown[] }[];
   };
+  // A file that fails before any test runs (its set-up threw) has no failed test of its own;
+  // it counts as one failure, so the total never says 0 failed for a failed step.
+  const brokenFiles = (report.testResults ?? []).filter(
+    (file) => file.status === 'failed' && file.assertionResults.length === 0,
+  ).length;
   return {
     passed: report.numPassedTests,
-    failed: report.numFailedTests,
+    failed: report.numFailedTests + brokenFiles,
     skipped: report.numPendingTests + report.numTodoTests,
   };
 }

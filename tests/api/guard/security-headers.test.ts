@@ -1,6 +1,8 @@
 // The response headers docs/SECURITY.md relies on (ASVS V8.2, V14.4, V14.5): a CSP with no
 // inline scripts and no framing, nosniff, no referrer, no caching of API answers, HSTS on
 // https, and no CORS grant to another origin.
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { createApp, createSequelize, loadEnv } from '@seamwright/api';
@@ -57,6 +59,8 @@ describe('security headers', () => {
       NODE_ENV: 'production',
       APP_URL: 'https://turf.example.test',
       TRUST_PROXY: '1',
+      // Production insists on a folder for uploads; this app never stores one.
+      UPLOADS_DIR: join(tmpdir(), 'seamwright-security-headers-uploads'),
     });
     const sequelize = createSequelize(env.db);
     const app = createApp({ env, sequelize, plannerPool: testApp().plannerPool });
