@@ -72,7 +72,7 @@ test('office puts a yard sketch under an area, scales it by two points, and find
   await expect(panel.getByRole('status')).toHaveText('Photo position saved.');
   await expectAccessible(page, 'Area editor with a sketch under it');
   await page.getByRole('button', { name: 'Fit the drawing' }).click();
-  await page.screenshot({ path: '/tmp/area-underlay-desktop.png' });
+  await page.screenshot({ path: '../.tmp/screens/area-underlay-desktop.png' });
 
   await page.reload();
   await expect(page.getByTestId('underlay-image')).toBeVisible();
@@ -83,7 +83,7 @@ test('office puts a yard sketch under an area, scales it by two points, and find
   await expect(image).toHaveAttribute('opacity', '0.7');
 
   await page.setViewportSize({ width: 390, height: 844 });
-  await page.screenshot({ path: '/tmp/area-underlay-phone.png', fullPage: true });
+  await page.screenshot({ path: '../.tmp/screens/area-underlay-phone.png', fullPage: true });
   await expectAccessible(page, 'Area editor with a sketch, on a phone');
 
   await panel.getByLabel('Show the photo').uncheck();
