@@ -11,7 +11,7 @@ import type { Tx } from '../../db/sequelize.js';
 import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
 import { findOwnCompany } from '../company/company.repository.js';
-import { stopReminders, stopRemindersWhenSettled } from '../reminders/reminder-hooks.js';
+import { followSettledStatus, stopReminders } from '../reminders/reminder-hooks.js';
 import { moveJobForInvoice } from './invoice-job-moves.js';
 import {
   createCreditNote,
@@ -44,28 +44,36 @@ function assertOpen(invoice: InvoiceRow, path: string): void {
   if (invoice.status === 'void') throw conflict(path, 'The invoice is void');
 }
 
-/** Writes the new kept totals and status; moves the job when a final invoice is paid. */
-async function settle(
+/**
+ * Writes the new kept totals and status of a locked invoice after a payment, refund or credit;
+ * keeps its reminders in step and moves the job when a final invoice is paid.
+ */
+export async function settle(
   ctx: RequestContext,
   invoice: InvoiceRow,
-  change: { paidCents?: number; creditedCents?: number },
+  change: { paidCents?: number; refundedCents?: number; creditedCents?: number },
   userId: string | null,
   tx: Tx,
 ): Promise<StoredInvoiceStatus> {
   const money = {
     totalCents: invoice.totalCents,
     paidCents: invoice.paidCents + (change.paidCents ?? 0),
-    refundedCents: invoice.refundedCents,
+    refundedCents: invoice.refundedCents + (change.refundedCents ?? 0),
     creditedCents: invoice.creditedCents + (change.creditedCents ?? 0),
   };
   const status = settledStatus(invoice.status as StoredInvoiceStatus, money);
   await updateInvoice(
     ctx,
     invoice.id,
-    { paidCents: money.paidCents, creditedCents: money.creditedCents, status },
+    {
+      paidCents: money.paidCents,
+      refundedCents: money.refundedCents,
+      creditedCents: money.creditedCents,
+      status,
+    },
     tx,
   );
-  await stopRemindersWhenSettled(ctx, invoice.id, status, tx);
+  await followSettledStatus(ctx, invoice, status, tx);
   if (status === 'paid' && invoice.kind === 'final')
     await moveJobForInvoice(ctx, invoice.jobId, 'paid', { invoiceId: invoice.id, userId }, tx);
   return status;

@@ -5,8 +5,6 @@
 // `refund.created` webhook records the same refund (keyed by its id) should the transaction
 // have failed after the processor said yes, so a refund is never lost and never counted twice.
 import { randomUUID } from 'node:crypto';
-import { settledStatus } from '@seamwright/domain';
-import type { StoredInvoiceStatus } from '@seamwright/domain';
 import type { RefundView } from '@seamwright/shared';
 import type { RequestContext } from '../../context.js';
 import type { ServiceDeps } from '../../deps.js';
@@ -14,8 +12,6 @@ import { inTransaction } from '../../db/sequelize.js';
 import type { Tx } from '../../db/sequelize.js';
 import { AppError, notFound } from '../../errors.js';
 import { recordAuditEvent } from '../audit/audit.repository.js';
-import { findOwnCompany } from '../company/company.repository.js';
-import { isRemindable, scheduleRemindersOnSend, sentOnOf } from '../reminders/reminder-hooks.js';
 import { processorProblem, refundPayment } from '../processor/index.js';
 import {
   createRefund,
@@ -24,7 +20,9 @@ import {
   updatePaymentRefunded,
 } from './invoice-refunds.repository.js';
 import type { RefundRow } from './invoice-refunds.repository.js';
-import { lockInvoice, updateInvoice } from './invoices.repository.js';
+import { settle } from './invoice-payments.service.js';
+import { lockInvoice } from './invoices.repository.js';
+import type { InvoiceRow } from './invoices.repository.js';
 
 function conflict(path: string, message: string): AppError {
   return new AppError('CONFLICT', `${path}: ${message}`, { errors: [{ path, message }] });
@@ -51,10 +49,33 @@ export interface RecordRefundInput {
   createdBy: string | null;
 }
 
+/** Writes a refund the processor has made against a locked invoice and payment. */
+async function applyRefund(
+  ctx: RequestContext,
+  invoice: InvoiceRow,
+  payment: { id: string; refundedCents: number },
+  input: RecordRefundInput,
+  tx: Tx,
+): Promise<RefundRow> {
+  const refund = await createRefund(ctx, input, tx);
+  await updatePaymentRefunded(ctx, payment.id, payment.refundedCents + input.amountCents, tx);
+  await settle(ctx, invoice, { refundedCents: input.amountCents }, input.createdBy, tx);
+  await recordAuditEvent(
+    ctx,
+    {
+      action: 'invoice.refunded',
+      entity: 'invoice',
+      entityId: invoice.id,
+      data: { paymentId: payment.id, refundId: refund.id, amountCents: input.amountCents },
+    },
+    tx,
+  );
+  return refund;
+}
+
 /**
- * Records a refund the processor has made, once: a second call with the same processor refund
- * id answers the first record. The invoice and payment rows must be locked by the caller's
- * transaction (lockInvoice, findPaymentOfInvoice) so the totals cannot move underneath.
+ * Records a refund the processor reports (its webhook), once: a second call with the same
+ * processor refund id answers the first record.
  */
 export async function recordRefund(
   ctx: RequestContext,
@@ -66,40 +87,7 @@ export async function recordRefund(
   const invoice = await lockInvoice(ctx, input.invoiceId, tx);
   const payment = await findPaymentOfInvoice(ctx, input.invoiceId, input.paymentId, tx);
   if (!invoice || !payment) throw notFound('Payment');
-  const refund = await createRefund(ctx, input, tx);
-  await updatePaymentRefunded(ctx, payment.id, payment.refundedCents + input.amountCents, tx);
-  const money = {
-    totalCents: invoice.totalCents,
-    paidCents: invoice.paidCents,
-    refundedCents: invoice.refundedCents + input.amountCents,
-    creditedCents: invoice.creditedCents,
-  };
-  const status = settledStatus(invoice.status as StoredInvoiceStatus, money);
-  await updateInvoice(ctx, invoice.id, { refundedCents: money.refundedCents, status }, tx);
-  // Money given back on a paid invoice is owed again: its reminders pick up where they were.
-  if (invoice.status === 'paid' && isRemindable(status)) {
-    const company = await findOwnCompany(ctx);
-    await scheduleRemindersOnSend(
-      ctx,
-      {
-        id: invoice.id,
-        dueDate: invoice.dueDate,
-        sentOn: sentOnOf(invoice, company?.timeZone ?? 'UTC'),
-      },
-      tx,
-    );
-  }
-  await recordAuditEvent(
-    ctx,
-    {
-      action: 'invoice.refunded',
-      entity: 'invoice',
-      entityId: invoice.id,
-      data: { paymentId: payment.id, refundId: refund.id, amountCents: input.amountCents },
-    },
-    tx,
-  );
-  return { refund, created: true };
+  return { refund: await applyRefund(ctx, invoice, payment, input, tx), created: true };
 }
 
 export interface RefundRequest {
@@ -148,8 +136,10 @@ export async function refundCardPayment(
     } catch (error) {
       throw processorProblem(error) ?? error;
     }
-    const { refund } = await recordRefund(
+    const refund = await applyRefund(
       ctx,
+      invoice,
+      payment,
       {
         id: refundId,
         invoiceId,

@@ -4,6 +4,7 @@
 import { localDateOf, nextReminderOn, remindableInvoiceStatuses } from '@seamwright/domain';
 import type { RequestContext } from '../../context.js';
 import type { Tx } from '../../db/sequelize.js';
+import { findOwnCompany } from '../company/company.repository.js';
 import { effectiveReminderSettings } from './reminder-settings.js';
 import { sentScheduledOffsets, setNextReminderOn } from './reminders.repository.js';
 
@@ -50,14 +51,31 @@ export async function scheduleRemindersOnSend(
   );
 }
 
-/** Called where a payment or credit changes the status: paid (or any closed state) stops them. */
-export async function stopRemindersWhenSettled(
+/**
+ * Called wherever a payment, refund or credit changes the status: a closed invoice (paid) stops
+ * its reminders, and a paid one that money went back out of (a refund) picks them up again.
+ */
+export async function followSettledStatus(
   ctx: RequestContext,
-  invoiceId: string,
+  invoice: { id: string; status: string; dueDate: string; sentAt: Date | null; issuedOn: string },
   status: string,
   tx: Tx,
 ): Promise<void> {
-  if (!isRemindable(status)) await setNextReminderOn(ctx, invoiceId, null, tx);
+  if (!isRemindable(status)) {
+    await setNextReminderOn(ctx, invoice.id, null, tx);
+    return;
+  }
+  if (isRemindable(invoice.status)) return;
+  const company = await findOwnCompany(ctx);
+  await scheduleRemindersOnSend(
+    ctx,
+    {
+      id: invoice.id,
+      dueDate: invoice.dueDate,
+      sentOn: sentOnOf(invoice, company?.timeZone ?? 'UTC'),
+    },
+    tx,
+  );
 }
 
 /** Called when an invoice is voided. */
