@@ -1,9 +1,7 @@
 // Money, days and quantities as a homeowner reads them (the customer pages have no session).
 
-/** 123456 cents → "$1,234.56" in the estimate's currency. */
-export function formatMoney(cents: number, currency: string): string {
-  return new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
-}
+/** 123456 cents → "$1,234.56": the one money format (lib/money.ts), under the name these pages use. */
+export { formatCents as formatMoney } from './money';
 
 /** "2026-03-04" → "March 4, 2026" (a calendar day: no time zone may shift it). */
 export function formatDay(day: string): string {

@@ -1,4 +1,5 @@
 import type { PublicEstimateView } from '@seamwright/shared';
+import { FactGrid } from '../../../components/ui/fact-grid';
 import { formatDay } from '../../../lib/plain-words';
 
 /** Who the estimate is from, for whom and where, and how long its prices hold. */
@@ -31,27 +32,17 @@ export function EstimateHeader({ view }: { view: PublicEstimateView }) {
         </h1>
         <p className="mt-1 text-lg">{view.jobTitle}</p>
       </div>
-      <dl className="grid grid-cols-1 gap-x-6 gap-y-2 rounded-lg bg-sand-100 p-4 sm:grid-cols-2">
-        <div>
-          <dt className="font-semibold">For</dt>
-          <dd>{view.customer.name}</dd>
-        </div>
-        <div>
-          <dt className="font-semibold">Where</dt>
-          <dd className="whitespace-pre-line">{view.siteAddress}</dd>
-        </div>
-        <div>
-          <dt className="font-semibold">Estimate</dt>
-          <dd>
-            {view.number}
-            {view.version > 1 ? `, version ${view.version}` : ''}, sent {formatDay(view.issuedOn)}
-          </dd>
-        </div>
-        <div>
-          <dt className="font-semibold">Prices good until</dt>
-          <dd data-testid="valid-until">{formatDay(view.validUntil)}</dd>
-        </div>
-      </dl>
+      <FactGrid
+        facts={[
+          { label: 'For', value: view.customer.name },
+          { label: 'Where', value: view.siteAddress },
+          {
+            label: 'Estimate',
+            value: `${view.number}${view.version > 1 ? `, version ${view.version}` : ''}, sent ${formatDay(view.issuedOn)}`,
+          },
+          { label: 'Prices good until', value: formatDay(view.validUntil), testId: 'valid-until' },
+        ]}
+      />
     </header>
   );
 }

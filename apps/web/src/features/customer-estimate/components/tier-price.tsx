@@ -1,5 +1,6 @@
 import type { PublicEstimateTier } from '@seamwright/shared';
-import { formatMoney, formatQuantity } from '../../../lib/plain-words';
+import { PricedLines } from '../../../components/ui/priced-lines';
+import { formatMoney } from '../../../lib/plain-words';
 
 /** One option: its lines as a list (a table does not fit a phone), then its totals. */
 export function TierPrice({ tier, currency }: { tier: PublicEstimateTier; currency: string }) {
@@ -12,17 +13,7 @@ export function TierPrice({ tier, currency }: { tier: PublicEstimateTier; curren
       <h3 id={`tier-${tier.id}`} className="text-xl font-bold">
         {tier.name}
       </h3>
-      <ul className="mt-3 divide-y divide-line" aria-label={`What ${tier.name} includes`}>
-        {tier.lines.map((line, index) => (
-          <li key={index} className="flex flex-wrap items-baseline justify-between gap-x-4 py-3">
-            <span className="min-w-0 flex-1 font-medium">{line.label}</span>
-            <span className="font-semibold tabular-nums">{money(line.amountCents)}</span>
-            <span className="basis-full text-sm text-ink-muted">
-              {formatQuantity(line.quantity, line.unit)} at {money(line.unitPriceCents)}
-            </span>
-          </li>
-        ))}
-      </ul>
+      <PricedLines lines={tier.lines} currency={currency} label={`What ${tier.name} includes`} />
       <dl className="mt-3 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 border-t-2 border-ink pt-3 tabular-nums">
         <dt>Subtotal</dt>
         <dd className="text-right">{money(tier.subtotalCents)}</dd>

@@ -1,6 +1,6 @@
 import type { PublicInvoiceView } from '@seamwright/shared';
 import { formatCents } from '../../../lib/money';
-import { formatQuantity } from '../../../lib/plain-words';
+import { PricedLines } from '../../../components/ui/priced-lines';
 
 /** The lines as a list (a table does not fit a phone), then the totals and what is left. */
 export function InvoiceAmounts({ view }: { view: PublicInvoiceView }) {
@@ -10,17 +10,7 @@ export function InvoiceAmounts({ view }: { view: PublicInvoiceView }) {
       <h2 id="amounts-heading" className="text-xl font-bold">
         What this invoice is for
       </h2>
-      <ul className="mt-3 divide-y divide-line">
-        {view.lines.map((line, index) => (
-          <li key={index} className="flex flex-wrap items-baseline justify-between gap-x-4 py-3">
-            <span className="min-w-0 flex-1 font-medium">{line.label}</span>
-            <span className="font-semibold tabular-nums">{money(line.amountCents)}</span>
-            <span className="basis-full text-sm text-ink-muted">
-              {formatQuantity(line.quantity, line.unit)} at {money(line.unitPriceCents)}
-            </span>
-          </li>
-        ))}
-      </ul>
+      <PricedLines lines={view.lines} currency={view.currency} />
       <dl className="mt-3 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 border-t-2 border-ink pt-3 tabular-nums">
         <dt>Subtotal</dt>
         <dd className="text-right">{money(view.subtotalCents)}</dd>

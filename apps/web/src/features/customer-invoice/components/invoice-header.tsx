@@ -1,4 +1,5 @@
 import type { PublicInvoiceView } from '@seamwright/shared';
+import { FactGrid } from '../../../components/ui/fact-grid';
 import { formatDay } from '../../../lib/plain-words';
 
 const kindWords: Record<PublicInvoiceView['kind'], string> = {
@@ -24,24 +25,14 @@ export function InvoiceHeader({ view }: { view: PublicInvoiceView }) {
         </h1>
         <p className="mt-1 text-lg">{view.jobTitle}</p>
       </div>
-      <dl className="grid grid-cols-1 gap-x-6 gap-y-2 rounded-lg bg-sand-100 p-4 sm:grid-cols-2">
-        <div>
-          <dt className="font-semibold">For</dt>
-          <dd>{view.customer.name}</dd>
-        </div>
-        <div>
-          <dt className="font-semibold">Where</dt>
-          <dd className="whitespace-pre-line">{view.siteAddress}</dd>
-        </div>
-        <div>
-          <dt className="font-semibold">Issued</dt>
-          <dd>{formatDay(view.issuedOn)}</dd>
-        </div>
-        <div>
-          <dt className="font-semibold">Due</dt>
-          <dd data-testid="due-date">{formatDay(view.dueDate)}</dd>
-        </div>
-      </dl>
+      <FactGrid
+        facts={[
+          { label: 'For', value: view.customer.name },
+          { label: 'Where', value: view.siteAddress },
+          { label: 'Issued', value: formatDay(view.issuedOn) },
+          { label: 'Due', value: formatDay(view.dueDate), testId: 'due-date' },
+        ]}
+      />
     </header>
   );
 }
