@@ -48,3 +48,11 @@ export function formatDocumentDate(date: string): string {
 export function formatQuantity(value: number): string {
   return new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 }).format(value);
 }
+
+/** The non-empty parts, trimmed, one per line (an address block, a contact block). */
+export function joinLines(...parts: (string | null | undefined)[]): string {
+  return parts
+    .map((part) => part?.trim())
+    .filter((part): part is string => Boolean(part))
+    .join('\n');
+}

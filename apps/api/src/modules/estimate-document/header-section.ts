@@ -1,16 +1,9 @@
 // Page 1's top: who sends the estimate (left), which estimate it is (right), then who it is
 // for, where the work is and what the job is, in three columns.
-import { formatDocumentDate } from './document-format.js';
+import { formatDocumentDate, joinLines } from './document-format.js';
 import { ink, rule, textAt } from './document-layout.js';
 import type { Layout } from './document-layout.js';
 import type { EstimateDocumentInput } from './estimate-document.types.js';
-
-function joinLines(...parts: (string | null | undefined)[]): string {
-  return parts
-    .map((part) => part?.trim())
-    .filter((part): part is string => Boolean(part))
-    .join('\n');
-}
 
 function writeCompany(layout: Layout, input: EstimateDocumentInput, width: number): number {
   const { company } = input;

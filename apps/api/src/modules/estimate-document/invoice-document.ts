@@ -1,7 +1,7 @@
 // Builds the whole invoice document in the calling thread (only the document worker calls this,
 // through the pool). One page for the usual invoice: header, bill-to, lines, totals, payments,
 // balance and due day, then notes and the small print with the rounding rule. Greys only.
-import { formatDocumentDate, formatMoney } from './document-format.js';
+import { formatDocumentDate, formatMoney, joinLines } from './document-format.js';
 import {
   createLayout,
   ensureSpace,
@@ -15,12 +15,6 @@ import type { Layout } from './document-layout.js';
 import type { InvoiceDocumentInput } from './invoice-document.types.js';
 import { writeLinesTable } from './lines-table.js';
 import { paragraphsOf } from './price-section.js';
-
-const joinLines = (...parts: (string | null | undefined)[]) =>
-  parts
-    .map((p) => p?.trim())
-    .filter((p): p is string => Boolean(p))
-    .join('\n');
 
 function writeTop(layout: Layout, input: InvoiceDocumentInput): void {
   const metaWidth = 200;

@@ -1,7 +1,7 @@
 // Builds the customer statement in the calling thread (only the document worker calls this,
 // through the pool): header, bill-to, one row per invoice, payment and credit of the invoices
 // still owing with the running balance, the aging line and the balance due. Greys only.
-import { formatDocumentDate, formatMoney } from './document-format.js';
+import { formatDocumentDate, formatMoney, joinLines } from './document-format.js';
 import {
   createLayout,
   ensureSpace,
@@ -13,12 +13,6 @@ import {
 } from './document-layout.js';
 import type { Layout } from './document-layout.js';
 import type { StatementDocumentInput } from './statement-document.types.js';
-
-const joinLines = (...parts: (string | null | undefined)[]) =>
-  parts
-    .map((p) => p?.trim())
-    .filter((p): p is string => Boolean(p))
-    .join('\n');
 
 function writeTop(layout: Layout, input: StatementDocumentInput): void {
   const metaWidth = 200;
